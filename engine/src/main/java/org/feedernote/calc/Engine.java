@@ -1,0 +1,648 @@
+package org.feedernote.calc;
+
+import static org.feedernote.formula.Formula.bind;
+
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.Deque;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import org.feedernote.data.ReferenceData;
+import org.feedernote.expr.Expr;
+import org.feedernote.expr.Var;
+import org.feedernote.formula.DemandFormulas;
+import org.feedernote.formula.DesignCurrentFormulas;
+import org.feedernote.formula.Formula;
+import org.feedernote.formula.ImpedanceFormulas;
+import org.feedernote.formula.Units;
+import org.feedernote.formula.VoltageDropFormulas;
+import org.feedernote.model.*;
+import org.feedernote.trace.Q;
+import org.feedernote.trace.Step;
+import org.feedernote.trace.Trace;
+import org.feedernote.trace.TraceRecorder;
+
+/**
+ * Calculates a whole installation: design currents bottom-up through the boards, then impedance
+ * and voltage drop top-down from the origin, every number through the trace.
+ */
+public final class Engine {
+    /** Contract checks that later capabilities add; reported so that nobody reads a partial result as complete. */
+    static final List<String> NOT_YET = List.of("capacity", "overload", "disconnection", "short-circuit",
+            "protective-conductor", "breaking-capacity");
+
+    private final ReferenceData data;
+    private final ImpedanceCalc impedance;
+
+    public Engine(ReferenceData data) {
+        this.data = data;
+        this.impedance = new ImpedanceCalc(data);
+    }
+
+    public Result run(Installation inst) {
+        TraceRecorder root = new TraceRecorder();
+        Run run = new Run(inst, root);
+        run.calculate();
+        return new Result(inst, run.boardResults(), run.circuitResults(), root.toSection(), NOT_YET);
+    }
+
+    /** The state of one calculation; discarded when it returns. */
+    private final class Run {
+        final Installation inst;
+        final TraceRecorder root;
+        final Map<String, Board> boards = new LinkedHashMap<>();
+        final Map<String, List<Circuit>> outgoing = new HashMap<>();
+        final Map<String, Circuit> feederOf = new HashMap<>();
+        final List<String> boardOrder = new ArrayList<>();
+        final Map<String, Trace> circuitTrace = new HashMap<>();
+        final Map<String, LoadDemand> demand = new HashMap<>();
+        final Map<String, PhaseDemand> boardDemand = new HashMap<>();
+        final Map<String, Q> designCurrent = new HashMap<>();
+        final Map<String, Q> powerFactor = new HashMap<>();
+        final Map<String, Q> neutral = new HashMap<>();
+        final Map<String, List<Q>> phaseCurrents = new HashMap<>();
+        final Map<String, String> connection = new HashMap<>();
+        final Map<String, Q> boardDrop = new HashMap<>();
+        final Map<String, CircuitResult> results = new HashMap<>();
+        final Map<String, ImpedanceResult> feederImpedance = new HashMap<>();
+        final Map<String, Q> lengths = new HashMap<>();
+        Q u;
+        Q u0;
+        Q f;
+        Trace supplyTrace;
+
+        Run(Installation inst, TraceRecorder root) {
+            this.inst = inst;
+            this.root = root;
+        }
+
+        void calculate() {
+            topology();
+            supply();
+            for (String b : boardOrder) {
+                for (Circuit c : outgoing.getOrDefault(b, List.of())) {
+                    String sub = c.isFeeder() ? "feeder " + c.from() + " → " + c.to() : "from " + c.from();
+                    String title = "Circuit " + c.id() + (c.description().isEmpty() ? "" : " — " + c.description());
+                    circuitTrace.put(c.id(), root.section(c.id(), title, sub));
+                }
+            }
+            for (Circuit c : inst.circuits()) {
+                if (!c.isFeeder()) loadDemand(c);
+            }
+            for (String b : boardOrder) allocatePhases(b);
+            for (int i = boardOrder.size() - 1; i >= 0; i--) boardDemand(boardOrder.get(i));
+            Q zero = Given.derived(supplyTrace, "origin/dU", "Voltage drop at the origin", "ΔU", 0, Units.PERCENT,
+                    "the origin is the reference point of the cumulative drop");
+            boardDrop.put(boardOrder.get(0), zero);
+            for (String b : boardOrder) {
+                for (Circuit c : outgoing.getOrDefault(b, List.of())) circuit(c);
+            }
+        }
+
+        void topology() {
+            for (Board b : inst.boards()) boards.put(b.id(), b);
+            for (Circuit c : inst.circuits()) {
+                outgoing.computeIfAbsent(c.from(), k -> new ArrayList<>()).add(c);
+                if (c.isFeeder()) feederOf.put(c.to(), c);
+            }
+            String origin = inst.boards().stream().filter(b -> !feederOf.containsKey(b.id())).findFirst()
+                    .orElseThrow().id();
+            Deque<String> queue = new ArrayDeque<>(List.of(origin));
+            while (!queue.isEmpty()) {
+                String b = queue.removeFirst();
+                boardOrder.add(b);
+                for (Circuit c : outgoing.getOrDefault(b, List.of())) if (c.isFeeder()) queue.addLast(c.to());
+            }
+        }
+
+        void supply() {
+            supplyTrace = root.section("supply", "Supply and origin", "");
+            Basis basis = inst.basis();
+            u = Given.input(supplyTrace, "supply/U", "Nominal line voltage", "U", inst.supply().lineVoltageV(), Units.V, "supply.line_voltage_v");
+            u0 = Given.input(supplyTrace, "supply/U0", "Nominal phase voltage", "U₀", inst.supply().phaseVoltageV(), Units.V, "supply.phase_voltage_v");
+            f = Given.setting(supplyTrace, "basis/f", "Supply frequency", "f", basis.frequencyHz(), Units.HZ, "default of this program");
+        }
+
+        // ---------------- design current of final circuits ----------------
+
+        void loadDemand(Circuit c) {
+            Trace t = circuitTrace.get(c.id()).section(c.id() + "/ib", "Design current", "");
+            Load load = c.load();
+            String id = c.id() + "/ib";
+            String path = c.where().path() + ".load";
+            boolean three = load.phases() == 3;
+            String phaseForm = three ? "three-phase" : "single-phase";
+            Q pf = load.powerFactor() == null ? null
+                    : Given.input(t, id + "/cos_phi", "Power factor", "cos φ", load.powerFactor(), Units.NONE, path + ".power_factor");
+            Q p = null;
+            Q q = null;
+            Q s = null;
+            Q ib;
+            if (load.powerKw() != null) {
+                if (load.kind() == LoadKind.MOTOR) {
+                    Q out = Given.input(t, id + "/P_out", "Rated output", "P_out", load.powerKw(), Units.KW, path + ".power_kw");
+                    Q eta = Given.input(t, id + "/eta", "Efficiency", "η", load.efficiency(), Units.NONE, path + ".efficiency");
+                    p = DesignCurrentFormulas.MOTOR_INPUT_POWER.eval(t, id + "/P", "",
+                            bind(DesignCurrentFormulas.P_OUT, out), bind(DesignCurrentFormulas.ETA, eta));
+                } else {
+                    p = Given.input(t, id + "/P", "Input power", "P", load.powerKw(), Units.KW, path + ".power_kw");
+                }
+                ib = (three ? DesignCurrentFormulas.THREE_PHASE_FROM_POWER : DesignCurrentFormulas.SINGLE_PHASE_FROM_POWER)
+                        .eval(t, id + "/I_b", phaseForm + ", power known", bind(DesignCurrentFormulas.P, p),
+                                bind(DesignCurrentFormulas.COS_PHI, pf), bind(three ? DesignCurrentFormulas.U_LINE : DesignCurrentFormulas.U_PHASE, three ? u : u0));
+            } else if (load.apparentKva() != null) {
+                s = Given.input(t, id + "/S", "Apparent power", "S", load.apparentKva(), Units.KVA, path + ".apparent_kva");
+                ib = (three ? DesignCurrentFormulas.THREE_PHASE_FROM_APPARENT : DesignCurrentFormulas.SINGLE_PHASE_FROM_APPARENT)
+                        .eval(t, id + "/I_b", phaseForm + ", apparent power known", bind(DesignCurrentFormulas.S, s),
+                                bind(three ? DesignCurrentFormulas.U_LINE : DesignCurrentFormulas.U_PHASE, three ? u : u0));
+                if (pf != null) {
+                    p = DesignCurrentFormulas.ACTIVE_FROM_APPARENT.eval(t, id + "/P", "", bind(DesignCurrentFormulas.S, s),
+                            bind(DesignCurrentFormulas.COS_PHI, pf));
+                }
+            } else {
+                ib = Given.input(t, id + "/I_b", "Design current (load current given)", "I_b", load.currentA(), Units.A, path + ".current_a");
+                s = (three ? DesignCurrentFormulas.APPARENT_THREE_PHASE_FROM_CURRENT : DesignCurrentFormulas.APPARENT_SINGLE_PHASE_FROM_CURRENT)
+                        .eval(t, id + "/S", phaseForm, bind(DesignCurrentFormulas.I, ib),
+                                bind(three ? DesignCurrentFormulas.U_LINE : DesignCurrentFormulas.U_PHASE, three ? u : u0));
+                if (pf != null) {
+                    p = DesignCurrentFormulas.ACTIVE_FROM_APPARENT.eval(t, id + "/P", "", bind(DesignCurrentFormulas.S, s),
+                            bind(DesignCurrentFormulas.COS_PHI, pf));
+                }
+            }
+            if (pf != null) {
+                q = DesignCurrentFormulas.REACTIVE_FROM_ACTIVE.eval(t, id + "/Q", "", bind(DesignCurrentFormulas.P, p),
+                        bind(DesignCurrentFormulas.COS_PHI, pf));
+                s = null;
+            } else {
+                Given.note(t, id + "/pf-unknown", "Power factor not given",
+                        "The power factor is unknown: the voltage drop uses z (the impedance form) and the load's apparent power is added arithmetically to the board's demand, which overstates it.",
+                        "BS 7671:2018 Appendix 4, 6.4");
+            }
+            if (c.designCurrentA() != null) {
+                Q derived = ib;
+                ib = Given.input(t, id + "/I_b_given", "Design current given by the designer", "I_b", c.designCurrentA(), Units.A,
+                        c.where().path() + ".design_current_a");
+                Given.decision(t, id + "/override", "Design current override",
+                        String.format(Locale.ROOT, "design_current_a is given; the derived value was %s A", trim(derived.value())),
+                        "I_b = design_current_a is used for this circuit's checks; the board's demand uses the load's power",
+                        "design input", derived.id(), ib.id());
+            }
+            designCurrent.put(c.id(), ib);
+            if (pf != null) powerFactor.put(c.id(), pf);
+            demand.put(c.id(), new LoadDemand(c.id(), load.phases(), 0, p, q, s, pf != null));
+        }
+
+        // ---------------- phase allocation ----------------
+
+        void allocatePhases(String board) {
+            double[] load = new double[3];
+            List<Circuit> auto = new ArrayList<>();
+            for (Circuit c : outgoing.getOrDefault(board, List.of())) {
+                if (c.isFeeder()) continue;
+                LoadDemand d = demand.get(c.id());
+                if (d.phases() == 3) {
+                    for (int k = 0; k < 3; k++) load[k] += d.apparentKva() / 3;
+                    connection.put(c.id(), "L1 L2 L3");
+                } else if (c.phase() == Phase.AUTO) {
+                    auto.add(c);
+                } else {
+                    int k = c.phase().ordinal();
+                    load[k] += d.apparentKva();
+                    demand.put(c.id(), withPhase(d, k + 1));
+                    connection.put(c.id(), c.phase().token());
+                    Given.decision(circuitTrace.get(c.id()), c.id() + "/phase", "Phase", "phase given in the design input",
+                            "connected to " + c.phase().token(), "design input");
+                }
+            }
+            auto.sort(Comparator.comparingDouble((Circuit c) -> -demand.get(c.id()).apparentKva()));
+            for (Circuit c : auto) {
+                int best = 0;
+                for (int k = 1; k < 3; k++) if (load[k] < load[best] - 1e-12) best = k;
+                String before = String.format(Locale.ROOT, "phase loads before allocation L1 %s kVA, L2 %s kVA, L3 %s kVA",
+                        trim(load[0]), trim(load[1]), trim(load[2]));
+                LoadDemand d = demand.get(c.id());
+                load[best] += d.apparentKva();
+                demand.put(c.id(), withPhase(d, best + 1));
+                connection.put(c.id(), "L" + (best + 1));
+                Given.decision(circuitTrace.get(c.id()), c.id() + "/phase", "Phase (allocated)",
+                        "phase: auto; " + before + " (largest single-phase loads first, each to the least-loaded phase)",
+                        "connected to L" + (best + 1), "common practice, no source");
+            }
+        }
+
+        LoadDemand withPhase(LoadDemand d, int phase) {
+            return new LoadDemand(d.circuitId(), d.phases(), phase, d.p(), d.q(), d.s(), d.powerFactorKnown());
+        }
+
+        // ---------------- board demand and feeder design current ----------------
+
+        void boardDemand(String boardId) {
+            Board board = boards.get(boardId);
+            Circuit feeder = feederOf.get(boardId);
+            Trace t = feeder == null
+                    ? supplyTrace.section(boardId + "/demand", "Demand of the origin board " + boardId, board.description())
+                    : circuitTrace.get(feeder.id()).section(feeder.id() + "/ib", "Design current", "from the demand of board " + boardId);
+            String id = boardId + "/demand";
+            Q d = Given.setting(t, id + "/d", "Diversity factor of board " + boardId, "d", board.diversity(), Units.NONE,
+                    "default: no diversity");
+            Q[] p = new Q[3];
+            Q[] q = new Q[3];
+            Q[] su = new Q[3];
+            List<Circuit> circuits = outgoing.getOrDefault(boardId, List.of());
+            for (int k = 0; k < 3; k++) {
+                String ph = "L" + (k + 1);
+                List<Q> pTerms = new ArrayList<>();
+                List<Boolean> pThird = new ArrayList<>();
+                List<Q> qTerms = new ArrayList<>();
+                List<Boolean> qThird = new ArrayList<>();
+                List<Q> sTerms = new ArrayList<>();
+                List<Boolean> sThird = new ArrayList<>();
+                for (Circuit c : circuits) {
+                    if (c.isFeeder()) {
+                        PhaseDemand child = boardDemand.get(c.to());
+                        if (child.p()[k] != null) { pTerms.add(relabel(child.p()[k], "P_" + ph + "(" + c.to() + ")")); pThird.add(false); }
+                        if (child.q()[k] != null) { qTerms.add(relabel(child.q()[k], "Q_" + ph + "(" + c.to() + ")")); qThird.add(false); }
+                        if (child.unknownS()[k] != null) { sTerms.add(relabel(child.unknownS()[k], "S_u," + ph + "(" + c.to() + ")")); sThird.add(false); }
+                    } else {
+                        LoadDemand ld = demand.get(c.id());
+                        boolean onThis = ld.phases() == 3 || ld.phase() == k + 1;
+                        if (!onThis) continue;
+                        boolean third = ld.phases() == 3;
+                        if (ld.powerFactorKnown()) {
+                            pTerms.add(relabel(ld.p(), "P(" + c.id() + ")")); pThird.add(third);
+                            qTerms.add(relabel(ld.q(), "Q(" + c.id() + ")")); qThird.add(third);
+                        } else {
+                            sTerms.add(relabel(ld.s(), "S(" + c.id() + ")")); sThird.add(third);
+                        }
+                    }
+                }
+                p[k] = phaseSum(t, id + "/P_" + ph, "Active power on " + ph, "P_" + ph, Units.KW, d, pTerms, pThird);
+                q[k] = phaseSum(t, id + "/Q_" + ph, "Reactive power on " + ph, "Q_" + ph, Units.KVAR, d, qTerms, qThird);
+                su[k] = phaseSum(t, id + "/Su_" + ph, "Apparent power of loads of unknown power factor on " + ph, "S_u," + ph, Units.KVA, d, sTerms, sThird);
+            }
+            PhaseDemand pd = new PhaseDemand(p, q, su);
+            boardDemand.put(boardId, pd);
+
+            List<Q> currents = new ArrayList<>();
+            List<Q> pfs = new ArrayList<>();
+            for (int k = 0; k < 3; k++) {
+                String ph = "L" + (k + 1);
+                Q pk = p[k] != null ? p[k] : zero(t, id + "/P0_" + ph, "P_" + ph, Units.KW);
+                Q qk = q[k] != null ? q[k] : zero(t, id + "/Q0_" + ph, "Q_" + ph, Units.KVAR);
+                Q sk = DemandFormulas.APPARENT.eval(t, id + "/S_" + ph, ph, bind(DemandFormulas.P, pk), bind(DemandFormulas.Q, qk));
+                if (su[k] != null) {
+                    sk = DemandFormulas.sum("apparent-with-unknown", "Apparent power on " + ph + " with loads of unknown power factor",
+                            "S_" + ph, Units.KVA, List.of(var("a", sk), var("b", su[k])),
+                            "Loads of unknown power factor added arithmetically (on the safe side)")
+                            .eval(t, id + "/S_total_" + ph, ph, bind(var("a", sk), sk), bind(var("b", su[k]), su[k]));
+                }
+                sk = relabel(sk, "S_" + ph);
+                Q ik = DemandFormulas.PHASE_CURRENT.eval(t, id + "/I_" + ph, ph, bind(DemandFormulas.S, sk), bind(DemandFormulas.U0, u0));
+                currents.add(relabel(ik, "I_" + ph));
+                if (su[k] == null && sk.value() > 0) {
+                    pfs.add(relabel(DemandFormulas.POWER_FACTOR.eval(t, id + "/cos_phi_" + ph, ph, bind(DemandFormulas.P, pk), bind(DemandFormulas.S, sk)), "cos φ_" + ph));
+                } else {
+                    pfs.add(null);
+                }
+            }
+            phaseCurrents.put(boardId, currents);
+            if (su[0] == null && su[1] == null && su[2] == null) {
+                Q[] pp = new Q[3];
+                Q[] qq = new Q[3];
+                for (int k = 0; k < 3; k++) {
+                    pp[k] = p[k] != null ? p[k] : zero(t, id + "/P0n_L" + (k + 1), "P_L" + (k + 1), Units.KW);
+                    qq[k] = q[k] != null ? q[k] : zero(t, id + "/Q0n_L" + (k + 1), "Q_L" + (k + 1), Units.KVAR);
+                }
+                neutral.put(boardId, DemandFormulas.NEUTRAL_CURRENT.eval(t, id + "/I_N", "phasor sum of the line currents",
+                        bind(DemandFormulas.P1, pp[0]), bind(DemandFormulas.P2, pp[1]), bind(DemandFormulas.P3, pp[2]),
+                        bind(DemandFormulas.Q1, qq[0]), bind(DemandFormulas.Q2, qq[1]), bind(DemandFormulas.Q3, qq[2]),
+                        bind(DemandFormulas.U0, u0)));
+            } else {
+                Given.note(t, id + "/I_N", "Neutral current", "Not determined: some loads on this board have no power factor, so their phase angle is unknown.", "");
+            }
+            if (feeder != null) {
+                Var i1 = new Var("I1", "I_L1", Units.A);
+                Var i2 = new Var("I2", "I_L2", Units.A);
+                Var i3 = new Var("I3", "I_L3", Units.A);
+                Formula most = new Formula("ib-most-loaded-phase", "Design current", "I_b", Units.A,
+                        Expr.max(Expr.v(i1), Expr.max(Expr.v(i2), Expr.v(i3))),
+                        "A feeder's design current is that of its most loaded phase (IEC 60364-4-43:2008, 433.1)");
+                Q ib = most.eval(t, feeder.id() + "/ib/I_b", "feeder, most loaded phase",
+                        bind(i1, currents.get(0)), bind(i2, currents.get(1)), bind(i3, currents.get(2)));
+                int worst = 0;
+                for (int k = 1; k < 3; k++) if (currents.get(k).value() > currents.get(worst).value()) worst = k;
+                if (feeder.designCurrentA() != null) {
+                    Q derived = ib;
+                    ib = Given.input(t, feeder.id() + "/ib/I_b_given", "Design current given by the designer", "I_b",
+                            feeder.designCurrentA(), Units.A, feeder.where().path() + ".design_current_a");
+                    Given.decision(t, feeder.id() + "/ib/override", "Design current override",
+                            String.format(Locale.ROOT, "design_current_a is given; the derived value was %s A", trim(derived.value())),
+                            "I_b = design_current_a is used for this feeder's checks; upstream demand uses the board's power",
+                            "design input", derived.id(), ib.id());
+                }
+                designCurrent.put(feeder.id(), ib);
+                if (pfs.get(worst) != null) powerFactor.put(feeder.id(), pfs.get(worst));
+                connection.put(feeder.id(), "L1 L2 L3");
+            }
+        }
+
+        Var var(String key, Q q) {
+            return new Var(key, q.symbol(), q.unit());
+        }
+
+        Q zero(Trace t, String id, String symbol, String unit) {
+            return Given.derived(t, id, "Nothing connected", symbol, 0, unit, "no circuit contributes");
+        }
+
+        Q relabel(Q q, String symbol) {
+            return new Q(q.id(), symbol, q.value(), q.unit());
+        }
+
+        Q phaseSum(Trace t, String id, String title, String symbol, String unit, Q d, List<Q> terms, List<Boolean> third) {
+            if (terms.isEmpty()) return null;
+            List<Var> vars = new ArrayList<>();
+            List<Step.Binding> bindings = new ArrayList<>();
+            Expr sum = null;
+            for (int i = 0; i < terms.size(); i++) {
+                Q term = terms.get(i);
+                Var v = new Var("x" + i, term.symbol(), unit);
+                vars.add(v);
+                bindings.add(bind(v, term));
+                Expr e = third.get(i) ? Expr.div(Expr.v(v), Expr.n(3)) : Expr.v(v);
+                sum = sum == null ? e : Expr.add(sum, e);
+            }
+            bindings.add(bind(DemandFormulas.D, d));
+            Formula f = new Formula("board-phase-sum", title, symbol, unit, Expr.mul(Expr.v(DemandFormulas.D), sum),
+                    "P and Q summed separately (complex power); three-phase loads contribute a third to each phase; times the board's diversity");
+            return f.eval(t, id, "", bindings.toArray(new Step.Binding[0]));
+        }
+
+        // ---------------- impedance, drop and checks ----------------
+
+        void circuit(Circuit c) {
+            Trace ct = circuitTrace.get(c.id());
+            int phases = c.isFeeder() ? 3 : c.load().phases();
+            Q ib = designCurrent.get(c.id());
+            Q pf = powerFactor.get(c.id());
+            Trace zt = ct.section(c.id() + "/z", "Cable impedance", describeCable(c.cable()));
+            Q theta = temperature(zt, c, ib);
+            if (c.cable().size().auto()) {
+                throw new UnsupportedSizing(c.id());
+            }
+            ImpedanceResult z = impedance.impedance(zt, c.id() + "/z", c.cable(), theta, f, phases);
+            if (c.isFeeder()) feederImpedance.put(c.id(), z);
+
+            Trace vt = ct.section(c.id() + "/vd", "Voltage drop", phases == 3 ? "three-phase, referred to U" : "single-phase, referred to U₀");
+            String id = c.id() + "/vd";
+            Q length = Given.input(vt, id + "/L", "Route length", "L", c.lengthM(), Units.M, c.where().path() + ".length_m");
+            lengths.put(c.id(), length);
+            Q un = Given.alias(phases == 3 ? u.id() : u0.id(), "U_n", phases == 3 ? u : u0);
+            Q dropV;
+            Q dropExact = null;
+            Q sin = null;
+            if (pf != null) {
+                sin = VoltageDropFormulas.SIN_FROM_COS.eval(vt, id + "/sin_phi", "", bind(VoltageDropFormulas.COS_PHI, pf));
+                dropV = VoltageDropFormulas.APPROXIMATE.eval(vt, id + "/dU", "power factor known",
+                        bind(VoltageDropFormulas.R, z.r()), bind(VoltageDropFormulas.X, z.x()), bind(VoltageDropFormulas.COS_PHI, pf),
+                        bind(VoltageDropFormulas.SIN_PHI, sin), bind(VoltageDropFormulas.I, ib), bind(VoltageDropFormulas.L, length));
+            } else {
+                dropV = VoltageDropFormulas.UNKNOWN_POWER_FACTOR.eval(vt, id + "/dU", "power factor unknown",
+                        bind(VoltageDropFormulas.Z, z.z()), bind(VoltageDropFormulas.I, ib), bind(VoltageDropFormulas.L, length));
+            }
+            Q dropPct = VoltageDropFormulas.PERCENT_OF_NOMINAL.eval(vt, id + "/dU_pct", "",
+                    bind(VoltageDropFormulas.DU, dropV), bind(VoltageDropFormulas.U_N, un));
+            Q dropExactPct = null;
+            if (pf != null) {
+                dropExact = VoltageDropFormulas.EXACT.eval(vt, id + "/dU_exact", "phasor form",
+                        bind(VoltageDropFormulas.U_N, un), bind(VoltageDropFormulas.R, z.r()), bind(VoltageDropFormulas.X, z.x()),
+                        bind(VoltageDropFormulas.COS_PHI, pf), bind(VoltageDropFormulas.SIN_PHI, sin),
+                        bind(VoltageDropFormulas.I, ib), bind(VoltageDropFormulas.L, length));
+                dropExactPct = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.eval(vt, id + "/dU_exact_pct", "exact form",
+                        bind(VoltageDropFormulas.DU, relabel(dropExact, "ΔU")), bind(VoltageDropFormulas.U_N, un)), "ΔU_exact");
+            }
+            Q governing = dropPct;
+            if (inst.basis().voltageDropMethod().value() == DropMethod.EXACT) {
+                if (dropExactPct != null) {
+                    governing = dropExactPct;
+                    Given.decision(vt, id + "/method", "Voltage-drop form checked", "basis.voltage_drop_method = exact",
+                            "the exact phasor form governs", "design input", dropExactPct.id());
+                } else {
+                    Given.decision(vt, id + "/method", "Voltage-drop form checked",
+                            "basis.voltage_drop_method = exact, but the power factor is unknown",
+                            "the z form governs (the exact form needs the phase angle)", "design input", dropPct.id());
+                }
+            } else {
+                Given.decision(vt, id + "/method", "Voltage-drop form checked",
+                        "basis.voltage_drop_method = approximate" + (inst.basis().voltageDropMethod().given() ? "" : " (default)"),
+                        "the approximate form governs" + (dropExactPct != null ? "; the exact form is shown for comparison" : ""),
+                        "IEC 60364-5-52:2009, Annex G", governing.id());
+            }
+            governing = relabel(governing, "ΔU(" + c.id() + ")");
+
+            Q upstream = boardDrop.get(c.from());
+            Q cumulative = cumulative(vt, c, upstream, governing);
+            List<CheckResult> checks = new ArrayList<>();
+            Q limit = null;
+            Q dip = null;
+            if (c.isFeeder()) {
+                boardDrop.put(c.to(), relabel(cumulative, "ΔU(" + c.to() + ")"));
+                Given.note(vt, id + "/board", "Cumulative drop at board " + c.to(),
+                        "Checked against the limit at the terminals of each load supplied from " + c.to() + ".", "");
+            } else {
+                limit = limit(vt, c);
+                checks.add(check(vt, id + "/check", "voltage-drop", "Voltage drop, origin to terminals", cumulative, limit,
+                        limitReference(c)));
+                if (c.load().kind() == LoadKind.MOTOR && c.load().startingCurrentMultiple() != null) {
+                    Trace st = ct.section(c.id() + "/st", "Motor starting", "voltage dip at the motor terminals while it starts");
+                    dip = starting(st, c, z, ib, length, un);
+                    Q stLimit = Given.setting(st, c.id() + "/st/limit", "Limit of the starting dip", "ΔU_st,max",
+                            inst.basis().motorStartingLimitPercent(), Units.PERCENT, "default of this program (common practice, no source)");
+                    checks.add(check(st, c.id() + "/st/check", "motor-starting", "Voltage dip while the motor starts", dip, stLimit,
+                            "common practice, no source"));
+                } else if (c.load().kind() == LoadKind.MOTOR) {
+                    Given.note(vt, c.id() + "/st/none", "Motor starting",
+                            "No starting_current_multiple is given: the starting dip is not checked.", "");
+                }
+            }
+            String governingCheck = checks.stream().max(Comparator.comparingDouble(CheckResult::utilisation))
+                    .map(CheckResult::name).orElse("voltage-drop");
+            results.put(c.id(), new CircuitResult(c.id(), c, phases, connection.getOrDefault(c.id(), "L1 L2 L3"), ib, pf,
+                    c.isFeeder() ? neutral.get(c.to()) : null, z, dropV, dropPct, dropExactPct, cumulative, limit, dip,
+                    List.copyOf(checks), governingCheck));
+        }
+
+        Q temperature(Trace t, Circuit c, Q ib) {
+            String id = c.id() + "/z";
+            Q thetaMax = Given.lookup(t, data.maxTemperature(id + "/theta_max", c.cable().insulation()));
+            Setting<ConductorTemperature> setting = inst.basis().conductorTemperature();
+            if (setting.value() == ConductorTemperature.MAXIMUM || c.device().ratingA() == null) {
+                String because = setting.value() == ConductorTemperature.MAXIMUM
+                        ? "basis.conductor_temperature = maximum" + (setting.given() ? "" : " (default)")
+                        : "basis.conductor_temperature = estimated, but the device rating is auto";
+                Given.decision(t, id + "/theta", "Conductor temperature for the voltage drop", because,
+                        "θ = θ_max of " + c.cable().insulation().token().toUpperCase(Locale.ROOT) + " = " + trim(thetaMax.value()) + " °C",
+                        "IEC 60364-5-52:2009, Table 52.1", thetaMax.id());
+                return relabel(thetaMax, "θ");
+            }
+            boolean ground = c.conditions().method() == Method.D1 || c.conditions().method() == Method.D2;
+            Setting<Double> amb = c.conditions().ambientC().given() ? c.conditions().ambientC()
+                    : (ground ? inst.basis().ambientGroundC() : inst.basis().ambientAirC());
+            Q thetaA = Given.setting(t, id + "/theta_a", ground ? "Ground temperature" : "Ambient air temperature", "θ_a",
+                    amb, Units.DEG_C, "IEC 60364-5-52:2009, 523.1 reference ambient (30 °C air, 20 °C ground)");
+            Q in = Given.input(t, id + "/I_n", "Rated current of the device", "I_n", c.device().ratingA(), Units.A,
+                    c.where().path() + ".device.rating_a");
+            Given.decision(t, id + "/theta_ref", "Reference current for the estimated temperature",
+                    "basis.conductor_temperature = estimated; the cable's capacity I_z is not yet calculated by this version",
+                    "I_z is taken as I_n, which is ≤ I_z when the cable is correctly protected, so the estimate is on the high (safe) side",
+                    "IEC 60364-4-43:2008, 433.1 (I_n ≤ I_z)", in.id());
+            Q theta = ImpedanceFormulas.ESTIMATED_TEMPERATURE.eval(t, id + "/theta", "estimated",
+                    bind(ImpedanceFormulas.THETA_A, thetaA), bind(ImpedanceFormulas.THETA_MAX, relabel(thetaMax, "θ_max")),
+                    bind(ImpedanceFormulas.I_B, ib), bind(ImpedanceFormulas.I_REF, relabel(in, "I_n")));
+            return theta;
+        }
+
+        Q cumulative(Trace t, Circuit c, Q upstream, Q own) {
+            List<Q> terms = new ArrayList<>();
+            List<String> path = new ArrayList<>();
+            String board = c.from();
+            while (feederOf.containsKey(board)) {
+                Circuit f = feederOf.get(board);
+                path.add(0, f.id());
+                board = f.from();
+            }
+            for (String fid : path) {
+                CircuitResult r = results.get(fid);
+                terms.add(relabel(r.dropExactPercent() != null && inst.basis().voltageDropMethod().value() == DropMethod.EXACT
+                        ? r.dropExactPercent() : r.dropPercent(), "ΔU(" + fid + ")"));
+            }
+            terms.add(own);
+            if (terms.size() == 1) {
+                return relabel(own, "ΔU_total");
+            }
+            List<Var> vars = new ArrayList<>();
+            List<Step.Binding> bindings = new ArrayList<>();
+            for (int i = 0; i < terms.size(); i++) {
+                Var v = new Var("d" + i, terms.get(i).symbol(), Units.PERCENT);
+                vars.add(v);
+                bindings.add(bind(v, terms.get(i)));
+            }
+            Formula sum = DemandFormulas.sum("cumulative-drop", "Voltage drop, origin to " + (c.isFeeder() ? "board " + c.to() : "terminals"),
+                    "ΔU_total", Units.PERCENT, vars, "Drops add along the path from the origin (each feeder's percentage plus the circuit's own)");
+            return sum.eval(t, c.id() + "/vd/dU_total", "", bindings.toArray(new Step.Binding[0]));
+        }
+
+        Q limit(Trace t, Circuit c) {
+            Basis basis = inst.basis();
+            String id = c.id() + "/vd/limit";
+            if (basis.limitsByKind()) {
+                String kind = c.load().kind().token();
+                boolean own = basis.voltageDropLimitsByKind().containsKey(kind);
+                String key = own ? kind : LoadKind.OTHER.token();
+                return Given.input(t, id, "Voltage-drop limit for " + kind + " loads", "ΔU_max",
+                        basis.voltageDropLimitsByKind().get(key), Units.PERCENT, basis.voltageDropLimitsPath() + "." + key);
+            }
+            return Given.setting(t, id, "Voltage-drop limit, origin to terminals", "ΔU_max", basis.voltageDropLimitPercent(),
+                    Units.PERCENT, "default of this program: 4 % (IEC 60364-5-52:2009, Annex G, Table G.52.1, other uses, public supply)");
+        }
+
+        String limitReference(Circuit c) {
+            return "IEC 60364-5-52:2009, 525 and Annex G";
+        }
+
+        Q starting(Trace t, Circuit c, ImpedanceResult z, Q ib, Q length, Q un) {
+            String id = c.id() + "/st";
+            Q k = Given.input(t, id + "/k_st", "Starting current multiple", "k_st", c.load().startingCurrentMultiple(), Units.NONE,
+                    c.where().path() + ".load.starting_current_multiple");
+            Q ist = DesignCurrentFormulas.STARTING_CURRENT.eval(t, id + "/I_st", "",
+                    bind(DesignCurrentFormulas.K_ST, k), bind(DesignCurrentFormulas.I_B, ib));
+            Q cosSt = Given.setting(t, id + "/cos_phi_st", "Power factor while starting", "cos φ_st",
+                    c.load().startingPowerFactor(), Units.NONE, "default of this program: 0.3 (common practice, no source)");
+            Q sinSt = VoltageDropFormulas.SIN_FROM_COS_STARTING.eval(t, id + "/sin_phi_st", "", bind(VoltageDropFormulas.COS_ST, cosSt));
+            Q du = VoltageDropFormulas.MOTOR_STARTING.eval(t, id + "/dU", "",
+                    bind(VoltageDropFormulas.R, z.r()), bind(VoltageDropFormulas.X, z.x()), bind(VoltageDropFormulas.COS_ST, cosSt),
+                    bind(VoltageDropFormulas.SIN_ST, sinSt), bind(VoltageDropFormulas.I_ST, ist), bind(VoltageDropFormulas.L, length));
+            Q own = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.eval(t, id + "/dU_pct", "",
+                    bind(VoltageDropFormulas.DU, relabel(du, "ΔU")), bind(VoltageDropFormulas.U_N, un)), "ΔU_st(" + c.id() + ")");
+            List<Q> terms = new ArrayList<>();
+            String board = c.from();
+            List<Circuit> path = new ArrayList<>();
+            while (feederOf.containsKey(board)) {
+                Circuit f = feederOf.get(board);
+                path.add(0, f);
+                board = f.from();
+            }
+            int phases = c.load().phases();
+            for (Circuit f : path) {
+                CircuitResult fr = results.get(f.id());
+                ImpedanceResult fz = phases == 3 ? fr.impedance()
+                        : impedance.mvPerAm(t, id + "/" + f.id() + "/z", fr.impedance().theta(), fr.impedance().resistance(),
+                        fr.impedance().reactance(), 1);
+                Q fl = lengths.get(f.id());
+                Q inc = VoltageDropFormulas.STARTING_INCREMENT.eval(t, id + "/" + f.id() + "/inc", "feeder " + f.id(),
+                        bind(VoltageDropFormulas.R, fz.r()), bind(VoltageDropFormulas.X, fz.x()), bind(VoltageDropFormulas.COS_ST, cosSt),
+                        bind(VoltageDropFormulas.SIN_ST, sinSt), bind(VoltageDropFormulas.I_ST, ist), bind(VoltageDropFormulas.I_B, ib),
+                        bind(VoltageDropFormulas.L, fl), bind(VoltageDropFormulas.U_N, un));
+                terms.add(relabel(fr.dropPercent(), "ΔU(" + f.id() + ")"));
+                terms.add(relabel(inc, "ΔU_st(" + f.id() + ")"));
+            }
+            terms.add(own);
+            if (terms.size() == 1) return relabel(own, "ΔU_st,total");
+            List<Var> vars = new ArrayList<>();
+            List<Step.Binding> bindings = new ArrayList<>();
+            for (int i = 0; i < terms.size(); i++) {
+                Var v = new Var("d" + i, terms.get(i).symbol(), Units.PERCENT);
+                vars.add(v);
+                bindings.add(bind(v, terms.get(i)));
+            }
+            return DemandFormulas.sum("starting-dip-total", "Voltage dip at the motor terminals while it starts", "ΔU_st,total",
+                    Units.PERCENT, vars, "Running drop of each upstream feeder, its added drop from the starting current, and the motor circuit's drop at starting current")
+                    .eval(t, id + "/dU_total", "", bindings.toArray(new Step.Binding[0]));
+        }
+
+        CheckResult check(Trace t, String id, String name, String title, Q value, Q limit, String reference) {
+            boolean pass = value.value() <= limit.value();
+            if (t.recording()) {
+                t.add(new Step.Check(id, title, name, value, "≤", limit, pass, reference, List.of(value.id(), limit.id())));
+            }
+            return new CheckResult(name, title, pass, value.value(), limit.value(), limit.unit(), false, id);
+        }
+
+        String describeCable(Cable cable) {
+            String size = (cable.parallel() > 1 ? cable.parallel() + " × " : "") + ReferenceData.sizeKey(cable.size().mm2()) + " mm²";
+            String kind = cable.type() == CableType.MULTICORE ? cable.cores() + "-core" : "single-core, " + cable.formation().token();
+            return size + " " + cable.conductor().token() + ", " + cable.insulation().token().toUpperCase(Locale.ROOT) + ", " + kind;
+        }
+
+        List<BoardResult> boardResults() {
+            List<BoardResult> out = new ArrayList<>();
+            for (Board b : inst.boards()) {
+                Circuit feeder = feederOf.get(b.id());
+                out.add(new BoardResult(b.id(), b.description(), feeder == null ? null : feeder.id(), boardDrop.get(b.id()),
+                        phaseCurrents.get(b.id()), neutral.get(b.id())));
+            }
+            return out;
+        }
+
+        List<CircuitResult> circuitResults() {
+            return inst.circuits().stream().map(c -> results.get(c.id())).toList();
+        }
+    }
+
+    static String trim(double v) {
+        String s = String.format(Locale.ROOT, "%.3f", v);
+        s = s.replaceAll("0+$", "");
+        return s.endsWith(".") ? s.substring(0, s.length() - 1) : s;
+    }
+
+    /** A size is 'auto' but this version cannot yet size cables (capacity checks are needed first). */
+    public static final class UnsupportedSizing extends RuntimeException {
+        public UnsupportedSizing(String circuit) {
+            super(circuit);
+        }
+    }
+}

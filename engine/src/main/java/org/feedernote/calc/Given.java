@@ -1,0 +1,62 @@
+package org.feedernote.calc;
+
+import java.util.List;
+
+import org.feedernote.model.Setting;
+import org.feedernote.trace.Q;
+import org.feedernote.trace.Step;
+import org.feedernote.trace.TableRef;
+import org.feedernote.trace.Trace;
+
+/** Records the values a calculation starts from: inputs, defaults, lookups, decisions, notes. */
+final class Given {
+    private Given() {}
+
+    static Q input(Trace t, String id, String title, String symbol, double value, String unit, String keyPath) {
+        Step.Input s = new Step.Input(id, title, symbol, value, unit, keyPath, Step.Origin.GIVEN, "design input");
+        t.add(s);
+        return s.q();
+    }
+
+    static Q setting(Trace t, String id, String title, String symbol, Setting<Double> setting, String unit, String defaultReference) {
+        Step.Input s = new Step.Input(id, title, symbol, setting.value(), unit, setting.path(),
+                setting.given() ? Step.Origin.GIVEN : Step.Origin.DEFAULT,
+                setting.given() ? "design input" : defaultReference);
+        t.add(s);
+        return s.q();
+    }
+
+    static Q derived(Trace t, String id, String title, String symbol, double value, String unit, String reference) {
+        Step.Input s = new Step.Input(id, title, symbol, value, unit, "", Step.Origin.DERIVED, reference);
+        t.add(s);
+        return s.q();
+    }
+
+    static Q lookup(Trace t, Step.Lookup step) {
+        t.add(step);
+        return step.q();
+    }
+
+    static Q lookupUsing(Trace t, Step.Lookup step, List<String> uses) {
+        Step.Lookup s = new Step.Lookup(step.id(), step.title(), step.symbol(), step.value(), step.unit(), step.table(),
+                step.row(), step.column(), step.method(), uses);
+        t.add(s);
+        return s.q();
+    }
+
+    static void decision(Trace t, String id, String title, String because, String outcome, String reference, String... uses) {
+        if (t.recording()) t.add(new Step.Decision(id, title, because, outcome, reference, List.of(uses)));
+    }
+
+    static void note(Trace t, String id, String title, String text, String reference) {
+        if (t.recording()) t.add(new Step.Note(id, title, text, reference));
+    }
+
+    static Q alias(String id, String symbol, Q q) {
+        return new Q(q.id(), symbol, q.value(), q.unit());
+    }
+
+    static TableRef none() {
+        return null;
+    }
+}

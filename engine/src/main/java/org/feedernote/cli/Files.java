@@ -1,0 +1,32 @@
+package org.feedernote.cli;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+
+/** Writes files through a temporary file in the target folder, so a killed run leaves no partial file. */
+final class Files {
+    private Files() {}
+
+    static void writeAtomically(Path target, String text) throws IOException {
+        writeAtomically(target, text.getBytes(StandardCharsets.UTF_8));
+    }
+
+    static void writeAtomically(Path target, byte[] bytes) throws IOException {
+        Path dir = target.toAbsolutePath().getParent();
+        java.nio.file.Files.createDirectories(dir);
+        Path tmp = java.nio.file.Files.createTempFile(dir, "." + target.getFileName(), ".part");
+        try {
+            java.nio.file.Files.write(tmp, bytes);
+            try {
+                java.nio.file.Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                java.nio.file.Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
+            }
+        } finally {
+            java.nio.file.Files.deleteIfExists(tmp);
+        }
+    }
+}

@@ -1,0 +1,30 @@
+package org.feedernote.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import org.feedernote.input.InputError;
+import org.feedernote.input.InputException;
+import org.feedernote.input.InputReader;
+import org.feedernote.model.Installation;
+
+/** Reads a design input for a command, printing every error to standard error. */
+final class Loading {
+    private Loading() {}
+
+    /** The installation, or null after the errors were printed. */
+    static Installation load(Path input, PrintWriter err) {
+        if (!Files.isRegularFile(input)) {
+            err.println("feedernote: " + input + ": no such file");
+            return null;
+        }
+        try {
+            return InputReader.read(input);
+        } catch (InputException e) {
+            for (InputError error : e.errors()) err.println(error.text());
+            err.println(e.errors().size() + (e.errors().size() == 1 ? " error" : " errors") + "; nothing was written.");
+            return null;
+        }
+    }
+}

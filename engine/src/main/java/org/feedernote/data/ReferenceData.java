@@ -1,0 +1,110 @@
+package org.feedernote.data;
+
+import java.nio.charset.StandardCharsets;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
+import java.util.List;
+
+import org.feedernote.model.Conductor;
+import org.feedernote.model.Insulation;
+import org.feedernote.trace.Step;
+import org.feedernote.trace.TableRef;
+
+/**
+ * The reference tables the engine uses, read once from the packaged resources. Immutable; the
+ * lookups return trace steps that name table, row and column.
+ */
+public final class ReferenceData {
+    static final List<String> TABLE_FILES = List.of("conductor-resistance.csv", "conductor-materials.csv",
+            "insulation-temperatures.csv", "insulation-thickness.csv");
+
+    private final ReferenceTable resistance;
+    private final ReferenceTable materials;
+    private final ReferenceTable temperatures;
+    private final ReferenceTable thickness;
+    private final List<ReferenceTable> all;
+
+    private ReferenceData() {
+        resistance = ReferenceTable.resource("conductor-resistance.csv");
+        materials = ReferenceTable.resource("conductor-materials.csv");
+        temperatures = ReferenceTable.resource("insulation-temperatures.csv");
+        thickness = ReferenceTable.resource("insulation-thickness.csv");
+        all = List.of(resistance, materials, temperatures, thickness);
+    }
+
+    private static final class Holder {
+        static final ReferenceData INSTANCE = new ReferenceData();
+    }
+
+    /** The packaged reference data (immutable, loaded on first use). */
+    public static ReferenceData standard() {
+        return Holder.INSTANCE;
+    }
+
+    public List<ReferenceTable> tables() { return all; }
+
+    public List<TableRef> refs() { return all.stream().map(ReferenceTable::ref).toList(); }
+
+    /** The IEC 60228 nominal cross-sections the program accepts, in mm². */
+    public static List<Double> standardSizes() {
+        return standard().resistance.rowKeys().stream().map(Double::parseDouble).toList();
+    }
+
+    public boolean hasResistance(Conductor conductor, double sizeMm2) {
+        return resistance.value(sizeKey(sizeMm2), conductor.token()) != null;
+    }
+
+    public static String sizeKey(double mm2) {
+        return mm2 == Math.rint(mm2) ? Long.toString((long) mm2) : Double.toString(mm2);
+    }
+
+    public Step.Lookup resistance20(String stepId, Conductor conductor, double sizeMm2) {
+        return resistance.lookup(stepId, "Conductor resistance at 20 °C", "R₂₀", "Ω/km", sizeKey(sizeMm2), conductor.token(),
+                sizeKey(sizeMm2) + " mm²", "class 2, " + (conductor == Conductor.COPPER ? "plain copper" : "aluminium"));
+    }
+
+    public Step.Lookup alpha20(String stepId, Conductor conductor) {
+        return materials.lookup(stepId, "Temperature coefficient of resistance at 20 °C", "α₂₀", "1/K",
+                conductor.token(), "alpha20", conductor.token(), "α₂₀");
+    }
+
+    public Step.Lookup skinCoefficient(String stepId, Conductor conductor) {
+        return materials.lookup(stepId, "Skin effect coefficient", "k_s", "", conductor.token(), "ks",
+                conductor.token() + ", round stranded", "k_s");
+    }
+
+    public Step.Lookup proximityCoefficient(String stepId, Conductor conductor) {
+        return materials.lookup(stepId, "Proximity effect coefficient", "k_p", "", conductor.token(), "kp",
+                conductor.token() + ", round stranded", "k_p");
+    }
+
+    public Step.Lookup maxTemperature(String stepId, Insulation insulation) {
+        return temperatures.lookup(stepId, "Maximum conductor temperature", "θ_max", "°C", insulation.token(), "theta_max",
+                insulation == Insulation.PVC ? "PVC (thermoplastic)" : "XLPE (thermosetting)", "normal operation");
+    }
+
+    public Step.Lookup insulationThickness(String stepId, Insulation insulation, double sizeMm2) {
+        return thickness.lookup(stepId, "Insulation thickness", "t_i", "mm", sizeKey(sizeMm2), insulation.token(),
+                sizeKey(sizeMm2) + " mm²", insulation == Insulation.PVC ? "PVC/A" : "XLPE");
+    }
+
+    /** SHA-256 over the table texts: changes whenever any reference value changes. */
+    public String version() {
+        try {
+            MessageDigest md = MessageDigest.getInstance("SHA-256");
+            for (ReferenceTable t : all) {
+                md.update(t.ref().id().getBytes(StandardCharsets.UTF_8));
+                for (String row : t.rowKeys()) {
+                    for (String col : t.columns()) {
+                        String cell = t.text(row, col);
+                        md.update((row + "|" + col + "|" + cell + "\n").getBytes(StandardCharsets.UTF_8));
+                    }
+                }
+            }
+            return HexFormat.of().formatHex(md.digest()).substring(0, 16);
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+}

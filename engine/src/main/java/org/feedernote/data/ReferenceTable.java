@@ -1,0 +1,111 @@
+package org.feedernote.data;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.InputStreamReader;
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import org.feedernote.trace.Step;
+import org.feedernote.trace.TableRef;
+
+/**
+ * A reference table read from a CSV resource whose '#' header names the source, edition, table,
+ * the meaning and unit of each column, and whether the values were recalled from memory.
+ * Cells may be empty where the source gives no value.
+ */
+public final class ReferenceTable {
+    private final TableRef ref;
+    private final Map<String, String> header;
+    private final List<String> columns;
+    private final Map<String, Map<String, String>> rows;
+
+    private ReferenceTable(TableRef ref, Map<String, String> header, List<String> columns,
+                           Map<String, Map<String, String>> rows) {
+        this.ref = ref;
+        this.header = header;
+        this.columns = columns;
+        this.rows = rows;
+    }
+
+    public static ReferenceTable resource(String name) {
+        String path = "/org/feedernote/data/" + name;
+        try (InputStream in = ReferenceTable.class.getResourceAsStream(path)) {
+            if (in == null) throw new IllegalStateException("reference table missing from the build: " + path);
+            return parse(name, new String(in.readAllBytes(), StandardCharsets.UTF_8));
+        } catch (IOException e) {
+            throw new IllegalStateException("cannot read reference table " + path, e);
+        }
+    }
+
+    static ReferenceTable parse(String name, String text) {
+        Map<String, String> header = new LinkedHashMap<>();
+        List<String> columns = null;
+        Map<String, Map<String, String>> rows = new LinkedHashMap<>();
+        try (BufferedReader r = new BufferedReader(new java.io.StringReader(text))) {
+            String line;
+            while ((line = r.readLine()) != null) {
+                if (line.isBlank()) continue;
+                if (line.startsWith("#")) {
+                    int colon = line.indexOf(':');
+                    if (colon > 0) header.put(line.substring(1, colon).trim(), line.substring(colon + 1).trim());
+                    continue;
+                }
+                String[] cells = line.split(",", -1);
+                if (columns == null) {
+                    columns = Arrays.stream(cells).map(String::trim).toList();
+                    continue;
+                }
+                if (cells.length != columns.size()) {
+                    throw new IllegalStateException(name + ": row '" + line + "' has " + cells.length + " cells, header has " + columns.size());
+                }
+                Map<String, String> row = new LinkedHashMap<>();
+                for (int i = 0; i < cells.length; i++) row.put(columns.get(i), cells[i].trim());
+                rows.put(cells[0].trim(), row);
+            }
+        } catch (IOException e) {
+            throw new IllegalStateException(e);
+        }
+        for (String key : List.of("title", "source", "edition", "table", "from_memory")) {
+            if (!header.containsKey(key)) throw new IllegalStateException(name + ": header lacks '" + key + "'");
+        }
+        TableRef ref = new TableRef(name.replaceFirst("\\.csv$", ""), header.get("title"), header.get("source"),
+                header.get("edition"), header.get("table"), Boolean.parseBoolean(header.get("from_memory")),
+                header.getOrDefault("notes", ""));
+        return new ReferenceTable(ref, header, columns == null ? List.of() : columns, rows);
+    }
+
+    public TableRef ref() { return ref; }
+    public Map<String, String> header() { return header; }
+    public List<String> columns() { return columns; }
+    public List<String> rowKeys() { return new ArrayList<>(rows.keySet()); }
+
+    /** The value at (row, column), or null where the table has none. */
+    public Double value(String row, String column) {
+        Map<String, String> r = rows.get(row);
+        if (r == null) return null;
+        String cell = r.get(column);
+        if (cell == null || cell.isEmpty()) return null;
+        return Double.parseDouble(cell);
+    }
+
+    public String text(String row, String column) {
+        Map<String, String> r = rows.get(row);
+        return r == null ? null : r.get(column);
+    }
+
+    /** Exact lookup recorded as a trace step; a missing cell is a loud error, never a zero. */
+    public Step.Lookup lookup(String stepId, String title, String symbol, String unit, String row, String column,
+                              String rowLabel, String columnLabel) {
+        Double v = value(row, column);
+        if (v == null) {
+            throw new DataGapException(stepId + ": " + ref.citation() + " gives no value for " + rowLabel + ", " + columnLabel);
+        }
+        return new Step.Lookup(stepId, title, symbol, v, unit, ref, rowLabel, columnLabel, "exact", List.of());
+    }
+}

@@ -1,0 +1,74 @@
+package org.feedernote.formula;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+import org.feedernote.expr.Evaluator;
+import org.feedernote.expr.Expr;
+import org.feedernote.expr.Var;
+import org.feedernote.trace.Q;
+import org.feedernote.trace.Step;
+import org.feedernote.trace.Trace;
+
+/**
+ * One formula of the catalogue: the result's symbol and unit, the expression tree and the
+ * reference it comes from. The only way the engine obtains a computed number is {@link #eval},
+ * which records the step and returns the value.
+ */
+public record Formula(String id, String title, String symbol, String unit, Expr expr, String reference) {
+
+    /** The variables the expression refers to, in order of first appearance. */
+    public Set<Var> vars() {
+        Set<Var> vars = new LinkedHashSet<>();
+        collect(expr, vars);
+        return vars;
+    }
+
+    private static void collect(Expr e, Set<Var> out) {
+        e.accept(new Expr.Visitor<Void>() {
+            @Override public Void ref(Expr.Ref ref) { out.add(ref.var()); return null; }
+            @Override public Void num(Expr.Num num) { return null; }
+            @Override public Void bin(Expr.Bin bin) { bin.left().accept(this); bin.right().accept(this); return null; }
+            @Override public Void call(Expr.Call call) { call.arg().accept(this); return null; }
+        });
+    }
+
+    public static Step.Binding bind(Var var, Q q) {
+        return new Step.Binding(var, q);
+    }
+
+    /**
+     * Evaluates the formula with the given bindings, records a formula step under {@code stepId}
+     * and returns its value.
+     *
+     * @param form why this form of the formula applies (shown on the step's heading), or ""
+     */
+    public Q eval(Trace trace, String stepId, String form, Step.Binding... bindings) {
+        List<Step.Binding> list = List.of(bindings);
+        Map<String, Double> values = new HashMap<>();
+        for (Step.Binding b : list) {
+            if (!b.var().unit().equals(b.q().unit())) {
+                throw new IllegalStateException(stepId + ": " + b.var().symbol() + " must be in '" + b.var().unit()
+                        + "' but " + b.q().id() + " is in '" + b.q().unit() + "'");
+            }
+            values.put(b.var().key(), b.q().value());
+        }
+        for (Var v : vars()) {
+            if (!values.containsKey(v.key())) {
+                throw new IllegalStateException(stepId + ": formula " + id + " needs " + v.symbol() + " bound");
+            }
+        }
+        double value = Evaluator.evaluate(expr, values, stepId);
+        if (trace.recording()) {
+            List<Step.Binding> used = new ArrayList<>();
+            Set<Var> needed = vars();
+            for (Step.Binding b : list) if (needed.contains(b.var())) used.add(b);
+            trace.add(new Step.Formula(stepId, title, symbol, unit, id, expr, List.copyOf(used), value, form, reference));
+        }
+        return new Q(stepId, symbol, value, unit);
+    }
+}

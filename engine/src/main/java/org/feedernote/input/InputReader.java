@@ -1,0 +1,442 @@
+package org.feedernote.input;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import org.feedernote.data.ReferenceData;
+import org.feedernote.model.*;
+
+/**
+ * Reads a design input (YAML or JSON, format 1), validates it completely and binds it to the
+ * model. Every problem is collected; the model is returned only when there are none.
+ */
+public final class InputReader {
+    private final String file;
+    private final List<InputError> errors = new ArrayList<>();
+
+    private InputReader(String file) {
+        this.file = file;
+    }
+
+    public static Installation read(Path path) throws InputException {
+        String name = path.toString();
+        String text;
+        try {
+            text = Files.readString(path, StandardCharsets.UTF_8);
+        } catch (java.nio.charset.MalformedInputException e) {
+            throw new InputException(List.of(new InputError(name, 1, 1, "", "the file is not UTF-8 text")));
+        } catch (IOException e) {
+            throw new InputException(List.of(new InputError(name, 1, 1, "", "cannot read the file: " + e.getMessage())));
+        }
+        return parse(name, text, name.toLowerCase(java.util.Locale.ROOT).endsWith(".json"));
+    }
+
+    public static Installation parse(String name, String text, boolean json) throws InputException {
+        InputReader r = new InputReader(name);
+        Node root = TreeReader.read(name, text, json, r.errors);
+        if (root == null) throw new InputException(r.errors);
+        new StructureValidator(name, r.errors).check(root, InputSchema.ROOT, "");
+        Installation model = r.errors.isEmpty() || root instanceof Node.Obj ? r.bind(root) : null;
+        if (!r.errors.isEmpty() || model == null) {
+            List<InputError> sorted = new ArrayList<>(new java.util.LinkedHashSet<>(r.errors));
+            Collections.sort(sorted);
+            throw new InputException(sorted);
+        }
+        return model;
+    }
+
+    /** Parses a document into the located tree only (for canonical forms and diffs). */
+    public static Node tree(String name, String text, boolean json) throws InputException {
+        List<InputError> errs = new ArrayList<>();
+        Node root = TreeReader.read(name, text, json, errs);
+        if (root == null) throw new InputException(errs);
+        return root;
+    }
+
+    // ---- navigation helpers: they tolerate structurally wrong nodes (already reported) ----
+
+    private void error(Node node, String path, String message) {
+        Node.Pos p = node == null ? new Node.Pos(1, 1) : node.pos();
+        errors.add(new InputError(file, p.line(), p.column(), path, message));
+    }
+
+    private static Node at(Node node, String key) {
+        return node instanceof Node.Obj o ? o.get(key) : null;
+    }
+
+    private static Node.Pos keyPos(Node node, String key) {
+        if (node instanceof Node.Obj o && o.entries().get(key) != null) return o.entries().get(key).keyPos();
+        return node == null ? new Node.Pos(1, 1) : node.pos();
+    }
+
+    private static String str(Node node) {
+        if (node instanceof Node.Scalar s && s.value() != null && !(s.value() instanceof Boolean)) {
+            return s.value() instanceof String t ? t : s.describe();
+        }
+        return null;
+    }
+
+    private static String str(Node node, String key, String fallback) {
+        String s = str(at(node, key));
+        return s == null ? fallback : s;
+    }
+
+    private static Double num(Node node) {
+        return node instanceof Node.Scalar s && s.isNumber() ? s.number() : null;
+    }
+
+    private static Double num(Node node, String key) {
+        return num(at(node, key));
+    }
+
+    private static <E extends Enum<E> & Token> E word(Node node, String key, Class<E> type, E fallback) {
+        String s = str(at(node, key));
+        if (s == null) return fallback;
+        return Token.parse(type, s).orElse(fallback);
+    }
+
+    private static List<Node> list(Node node, String key) {
+        Node n = at(node, key);
+        return n instanceof Node.Arr a ? a.items() : List.of();
+    }
+
+    private static String join(String path, String key) {
+        return path.isEmpty() ? key : path + "." + key;
+    }
+
+    private Setting<Double> setting(Node node, String path, String key, double fallback) {
+        Double v = num(node, key);
+        return new Setting<>(v == null ? fallback : v, v != null, join(path, key));
+    }
+
+    private <E extends Enum<E> & Token> Setting<E> setting(Node node, String path, String key, Class<E> type, E fallback) {
+        E v = word(node, key, type, null);
+        return new Setting<>(v == null ? fallback : v, v != null, join(path, key));
+    }
+
+    private Where where(Node node, String path) {
+        Node.Pos p = node == null ? new Node.Pos(1, 1) : node.pos();
+        return new Where(file, p.line(), p.column(), path);
+    }
+
+    // ---- binding and the rules that span several keys ----
+
+    private Installation bind(Node root) {
+        Project project = project(at(root, "project"));
+        Basis basis = basis(at(root, "basis"));
+        Supply supply = supply(at(root, "supply"));
+        List<Board> boards = new ArrayList<>();
+        Map<String, Node> idNodes = new HashMap<>();
+        Map<String, String> idPaths = new HashMap<>();
+        List<Node> boardNodes = list(root, "boards");
+        for (int i = 0; i < boardNodes.size(); i++) {
+            Node b = boardNodes.get(i);
+            String path = "boards[" + i + "]";
+            String id = str(at(b, "id"));
+            if (id == null) continue;
+            unique(id, at(b, "id"), path + ".id", idNodes, idPaths);
+            boards.add(new Board(id, str(b, "description", ""), setting(b, path, "diversity", 1.0),
+                    num(b, "fault_rating_ka"), where(b, path)));
+        }
+        List<Circuit> circuits = new ArrayList<>();
+        List<Node> circuitNodes = list(root, "circuits");
+        for (int i = 0; i < circuitNodes.size(); i++) {
+            Node c = circuitNodes.get(i);
+            String path = "circuits[" + i + "]";
+            String id = str(at(c, "id"));
+            if (id != null) unique(id, at(c, "id"), path + ".id", idNodes, idPaths);
+            Circuit circuit = circuit(c, path, basis);
+            if (circuit != null) circuits.add(circuit);
+        }
+        topology(boards, circuits, circuitNodes);
+        voltages(at(root, "supply"), supply);
+        return errors.isEmpty() ? new Installation(file, project, basis, supply, List.copyOf(boards), List.copyOf(circuits)) : null;
+    }
+
+    private void unique(String id, Node node, String path, Map<String, Node> seen, Map<String, String> paths) {
+        if (seen.containsKey(id)) {
+            error(node, path, "the id '" + id + "' is already used at " + paths.get(id) + " (line " + seen.get(id).pos().line()
+                    + "); ids must be unique across boards and circuits");
+        } else {
+            seen.put(id, node);
+            paths.put(id, path);
+        }
+    }
+
+    private Project project(Node p) {
+        List<Project.Revision> revisions = new ArrayList<>();
+        for (Node r : list(p, "revisions")) {
+            revisions.add(new Project.Revision(str(r, "revision", ""), str(r, "date", ""), str(r, "description", "")));
+        }
+        return new Project(str(p, "title", ""), str(p, "reference", ""), str(p, "revision", ""), str(p, "date", ""),
+                str(p, "client", ""), str(p, "prepared_by", ""), str(p, "checked_by", ""), str(p, "approved_by", ""),
+                word(p, "status", Status.class, Status.DRAFT), List.copyOf(revisions));
+    }
+
+    private Basis basis(Node b) {
+        String path = "basis";
+        Map<String, Double> byKind = null;
+        Node limits = at(b, "voltage_drop_limits_percent");
+        if (limits instanceof Node.Obj o) {
+            byKind = new LinkedHashMap<>();
+            for (Node.Entry e : o.entries().values()) {
+                Double v = num(e.value());
+                if (v != null) byKind.put(e.key(), v);
+            }
+            if (at(b, "voltage_drop_limit_percent") != null) {
+                error(at(b, "voltage_drop_limit_percent"), "basis.voltage_drop_limit_percent",
+                        "give either voltage_drop_limit_percent (one limit) or voltage_drop_limits_percent (per load kind), not both");
+            }
+            byKind = Collections.unmodifiableMap(byKind);
+        }
+        return new Basis(setting(b, path, "frequency_hz", 50), setting(b, path, "earthing", Earthing.class, Earthing.TN_S),
+                setting(b, path, "voltage_drop_limit_percent", 4), byKind, "basis.voltage_drop_limits_percent",
+                setting(b, path, "ambient_air_c", 30), setting(b, path, "ambient_ground_c", 20),
+                setting(b, path, "conductor_temperature", ConductorTemperature.class, ConductorTemperature.MAXIMUM),
+                setting(b, path, "disconnection_time_final_s", 0.4), setting(b, path, "disconnection_time_distribution_s", 5),
+                setting(b, path, "motor_starting_limit_percent", 10),
+                setting(b, path, "voltage_drop_method", DropMethod.class, DropMethod.APPROXIMATE));
+    }
+
+    private Supply supply(Node s) {
+        Node source = at(s, "source");
+        Supply.Source src = null;
+        Node t = at(source, "transformer");
+        Node u = at(source, "utility");
+        if (t instanceof Node.Obj) {
+            Double kva = num(t, "rating_kva");
+            Double z = num(t, "impedance_percent");
+            src = new Supply.Transformer(kva == null ? 0 : kva, z == null ? 0 : z, num(t, "x_r_ratio"));
+        } else if (u instanceof Node.Obj) {
+            Double fl = num(u, "fault_level_ka");
+            Double ze = num(u, "loop_impedance_ohm");
+            if (fl == null && ze == null) {
+                error(u, "supply.source.utility", "give fault_level_ka, loop_impedance_ohm or both");
+            }
+            src = new Supply.Utility(fl, ze, num(u, "x_r_ratio"));
+        }
+        Double ul = num(s, "line_voltage_v");
+        Double u0 = num(s, "phase_voltage_v");
+        return new Supply(ul == null ? 0 : ul, u0 == null ? 0 : u0, src);
+    }
+
+    private void voltages(Node s, Supply supply) {
+        if (supply.lineVoltageV() > 0 && supply.phaseVoltageV() > 0) {
+            double ratio = supply.lineVoltageV() / supply.phaseVoltageV();
+            if (Math.abs(ratio / Math.sqrt(3) - 1) > 0.02) {
+                error(at(s, "phase_voltage_v"), "supply.phase_voltage_v", String.format(java.util.Locale.ROOT,
+                        "line and phase voltages of a three-phase supply differ by √3 (400 V / 230 V, say); %s V / %s V is %.3f",
+                        StructureValidator.num(supply.lineVoltageV()), StructureValidator.num(supply.phaseVoltageV()), ratio));
+            }
+        }
+    }
+
+    private Circuit circuit(Node c, String path, Basis basis) {
+        String id = str(at(c, "id"));
+        String from = str(at(c, "from"));
+        String to = str(at(c, "to"));
+        Double length = num(c, "length_m");
+        Cable cable = cable(at(c, "cable"), path + ".cable");
+        Conditions conditions = conditions(at(c, "installation"), path + ".installation");
+        Device device = device(at(c, "device"), path + ".device");
+        Node loadNode = at(c, "load");
+        Load load = null;
+        if (loadNode instanceof Node.Obj) load = load(loadNode, path + ".load", cable, basis);
+        Phase phase = word(c, "phase", Phase.class, Phase.AUTO);
+        if (at(c, "phase") != null && (to != null || (load != null && load.phases() == 3))) {
+            error(at(c, "phase"), path + ".phase", "phase applies to single-phase circuits only; remove it for "
+                    + (to != null ? "a feeder" : "a three-phase load"));
+        }
+        if (to != null && cable != null && cable.type() == CableType.MULTICORE && cable.cores() == 2) {
+            error(at(at(c, "cable"), "cores"), path + ".cable.cores",
+                    "a feeder supplies a three-phase board: give a cable of 3, 4 or 5 cores or single-core cables (single-phase sub-boards are not supported yet)");
+        }
+        if (id == null || from == null || length == null || cable == null || conditions == null || device == null
+                || (load == null && to == null)) {
+            return null;
+        }
+        return new Circuit(id, str(c, "description", ""), from, to, load, phase, length, cable, conditions, device,
+                num(c, "design_current_a"), where(c, path));
+    }
+
+    private SizeChoice size(Node node) {
+        if (node instanceof Node.Scalar s && "auto".equals(s.value())) return SizeChoice.automatic();
+        Double v = num(node);
+        return v == null ? null : SizeChoice.of(v);
+    }
+
+    private Cable cable(Node c, String path) {
+        Conductor conductor = word(c, "conductor", Conductor.class, null);
+        Insulation insulation = word(c, "insulation", Insulation.class, null);
+        CableType type = word(c, "type", CableType.class, null);
+        Double cores = num(c, "cores");
+        Formation formation = word(c, "formation", Formation.class, null);
+        if (type == CableType.MULTICORE) {
+            if (at(c, "cores") == null) error(c, join(path, "cores"), "a multicore cable needs 'cores' (2, 3, 4 or 5)");
+            if (at(c, "formation") != null) error(at(c, "formation"), join(path, "formation"), "formation applies to single-core cables only; remove it for a multicore cable");
+        } else if (type == CableType.SINGLE_CORE) {
+            if (at(c, "formation") == null) error(c, join(path, "formation"), "single-core cables need 'formation' (trefoil, flat-touching or flat-spaced)");
+            if (at(c, "cores") != null) error(at(c, "cores"), join(path, "cores"), "cores applies to multicore cables only; remove it for single-core cables");
+        }
+        SizeChoice size = size(at(c, "size_mm2"));
+        SizeChoice cpc = size(at(c, "cpc_mm2"));
+        if (conductor == Conductor.ALUMINIUM) {
+            for (String key : List.of("size_mm2", "cpc_mm2")) {
+                SizeChoice s = size(at(c, key));
+                if (s != null && !s.auto() && !ReferenceData.standard().hasResistance(conductor, s.mm2())) {
+                    error(at(c, key), join(path, key), "aluminium class 2 conductors start at 10 mm² (IEC 60228, Table 2); found "
+                            + StructureValidator.num(s.mm2()));
+                }
+            }
+        }
+        Double parallel = num(c, "parallel");
+        if (conductor == null || insulation == null || type == null || size == null || cpc == null) return null;
+        return new Cable(conductor, insulation, type, cores == null ? 0 : cores.intValue(), size, cpc,
+                parallel == null ? 1 : parallel.intValue(), formation);
+    }
+
+    private Conditions conditions(Node i, String path) {
+        Method method = word(i, "method", Method.class, null);
+        if (method == null) return null;
+        Double ambient = num(i, "ambient_c");
+        Double grouped = num(i, "grouped_circuits");
+        Double insulationMm = num(i, "thermal_insulation_mm");
+        return new Conditions(method, new Setting<>(ambient, ambient != null, join(path, "ambient_c")),
+                grouped == null ? 1 : grouped.intValue(),
+                word(i, "group_arrangement", Arrangement.class, Arrangement.BUNCHED),
+                insulationMm == null ? 0 : insulationMm, setting(i, path, "soil_thermal_resistivity_kmw", 2.5),
+                num(i, "third_harmonic_percent"));
+    }
+
+    private Device device(Node d, String path) {
+        DeviceKind kind = word(d, "kind", DeviceKind.class, null);
+        Curve curve = word(d, "curve", Curve.class, null);
+        if (kind == DeviceKind.MCB || kind == DeviceKind.RCBO) {
+            if (at(d, "curve") == null) error(d, join(path, "curve"), "an " + kind.token() + " needs 'curve' (B, C or D)");
+        } else if (kind != null && at(d, "curve") != null) {
+            error(at(d, "curve"), join(path, "curve"), "curve applies to mcb and rcbo only");
+        }
+        if (kind != null && kind != DeviceKind.MCCB && at(d, "instantaneous_a") != null) {
+            error(at(d, "instantaneous_a"), join(path, "instantaneous_a"), "instantaneous_a is the trip setting of an mccb; for "
+                    + kind.token() + " it follows from the " + (kind == DeviceKind.FUSE ? "fuse characteristic (give disconnection_current_a)" : "curve"));
+        }
+        if (kind != null && kind != DeviceKind.FUSE && at(d, "disconnection_current_a") != null) {
+            error(at(d, "disconnection_current_a"), join(path, "disconnection_current_a"), "disconnection_current_a applies to fuses only");
+        }
+        Node rating = at(d, "rating_a");
+        Double ratingA = num(rating);
+        if (kind == null || (rating == null)) return null;
+        return new Device(kind, ratingA, curve, num(d, "instantaneous_a"), num(d, "breaking_capacity_ka"),
+                num(d, "disconnection_current_a"), num(d, "residual_current_a"), num(d, "let_through_a2s"));
+    }
+
+    private Load load(Node l, String path, Cable cable, Basis basis) {
+        LoadKind kind = word(l, "kind", LoadKind.class, null);
+        if (kind == null) return null;
+        if (kind != LoadKind.MOTOR) {
+            for (String key : List.of("efficiency", "starting_current_multiple", "starting_power_factor")) {
+                if (at(l, key) != null) error(at(l, key), join(path, key), key + " applies to motors only (kind: motor)");
+            }
+        }
+        if (at(l, "power_kw") != null && at(l, "power_factor") == null) {
+            error(l, join(path, "power_factor"), "a load given by power_kw needs power_factor to give its current");
+        }
+        Double phasesGiven = num(l, "phases");
+        int phases;
+        if (phasesGiven != null) {
+            phases = phasesGiven.intValue();
+        } else if (cable != null && cable.type() == CableType.MULTICORE && cable.cores() == 2) {
+            phases = 1;
+        } else if (cable != null && (cable.type() == CableType.SINGLE_CORE || cable.cores() >= 4)) {
+            phases = 3;
+        } else {
+            if (cable != null) error(l, join(path, "phases"), "give phases (1 or 3): a 3-core cable may carry either");
+            phases = 3;
+        }
+        if (cable != null && cable.type() == CableType.MULTICORE && phases == 3 && cable.cores() == 2) {
+            error(at(l, "phases"), join(path, "phases"), "a three-phase load cannot be supplied by a 2-core cable");
+        }
+        if (basis.limitsByKind() && !basis.voltageDropLimitsByKind().containsKey(kind.token())
+                && !basis.voltageDropLimitsByKind().containsKey(LoadKind.OTHER.token())) {
+            error(at(l, "kind"), join(path, "kind"), "basis.voltage_drop_limits_percent gives no limit for '" + kind.token()
+                    + "' and no 'other' limit; add one of them");
+        }
+        Double eff = num(l, "efficiency");
+        if (kind == LoadKind.MOTOR && at(l, "power_kw") != null && eff == null) {
+            error(l, join(path, "efficiency"), "a motor given by its output power_kw needs efficiency to give its input power");
+        }
+        return new Load(kind, num(l, "power_kw"), num(l, "apparent_kva"), num(l, "current_a"), num(l, "power_factor"),
+                eff, phases, num(l, "starting_current_multiple"), setting(l, path, "starting_power_factor", 0.3));
+    }
+
+    private void topology(List<Board> boards, List<Circuit> circuits, List<Node> circuitNodes) {
+        Map<String, Board> byId = new HashMap<>();
+        boards.forEach(b -> byId.put(b.id(), b));
+        List<String> boardIds = boards.stream().map(Board::id).toList();
+        Map<String, String> fedBy = new HashMap<>();
+        Map<String, String> circuitIds = new HashMap<>();
+        for (int i = 0; i < circuitNodes.size(); i++) {
+            String cid = str(at(circuitNodes.get(i), "id"));
+            if (cid != null) circuitIds.put(cid, "circuits[" + i + "]");
+        }
+        for (int i = 0; i < circuitNodes.size(); i++) {
+            Node c = circuitNodes.get(i);
+            String path = "circuits[" + i + "]";
+            String id = str(at(c, "id"));
+            String from = str(at(c, "from"));
+            String to = str(at(c, "to"));
+            if (from != null && !byId.containsKey(from)) {
+                String what = circuitIds.containsKey(from) ? "'" + from + "' is a circuit, not a board" : "no board has the id '" + from + "'";
+                error(at(c, "from"), path + ".from", what + Suggest.hint(from, boardIds) + "; boards: " + String.join(", ", boardIds));
+            }
+            if (to != null) {
+                if (!byId.containsKey(to)) {
+                    error(at(c, "to"), path + ".to", "no board has the id '" + to + "'" + Suggest.hint(to, boardIds)
+                            + "; boards: " + String.join(", ", boardIds));
+                } else if (fedBy.containsKey(to)) {
+                    error(at(c, "to"), path + ".to", "board '" + to + "' is fed twice: by '" + fedBy.get(to) + "' and by '" + id
+                            + "'; a board has one feeding circuit");
+                } else if (to.equals(from)) {
+                    error(at(c, "to"), path + ".to", "circuit '" + id + "' starts and ends at board '" + to + "'");
+                } else {
+                    fedBy.put(to, id);
+                }
+            }
+        }
+        if (!errors.isEmpty()) return;
+        List<String> origins = boardIds.stream().filter(b -> !fedBy.containsKey(b)).toList();
+        Map<String, String> parentOf = new HashMap<>();
+        for (Circuit c : circuits) if (c.isFeeder()) parentOf.put(c.to(), c.from());
+        for (String b : boardIds) {
+            List<String> chain = new ArrayList<>();
+            String cur = b;
+            while (cur != null && !chain.contains(cur)) {
+                chain.add(cur);
+                cur = parentOf.get(cur);
+            }
+            if (cur != null) {
+                int start = chain.indexOf(cur);
+                List<String> loop = new ArrayList<>(chain.subList(start, chain.size()));
+                loop.add(cur);
+                Board first = byId.get(cur);
+                errors.add(new InputError(file, first.where().line(), first.where().column(), first.where().path(),
+                        "the boards form a loop: " + String.join(" ← ", loop) + "; every board must trace back to the origin"));
+                return;
+            }
+        }
+        if (origins.size() > 1) {
+            Board second = byId.get(origins.get(1));
+            errors.add(new InputError(file, second.where().line(), second.where().column(), second.where().path(),
+                    "boards " + String.join(", ", origins) + " have no feeding circuit; only the origin board may be unfed "
+                            + "(add a feeder with to: " + origins.get(1) + ")"));
+        }
+    }
+}

@@ -1,0 +1,166 @@
+package org.feedernote.input;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.feedernote.data.ReferenceData;
+import org.feedernote.model.*;
+
+/** Design input format 1, described once (see ../shared/design/input-format.md). */
+public final class InputSchema {
+    private InputSchema() {}
+
+    public static final Spec.Obj ROOT = build();
+
+    private static Spec.Field req(String name, Spec spec) { return new Spec.Field(name, spec, true, null); }
+    private static Spec.Field opt(String name, Spec spec, String defaultText) { return new Spec.Field(name, spec, false, defaultText); }
+
+    private static Spec.Obj obj(String description, Spec.Field... fields) {
+        return new Spec.Obj(description, List.of(fields), List.of());
+    }
+    private static Spec.Obj objOne(String description, List<List<String>> exactlyOne, Spec.Field... fields) {
+        return new Spec.Obj(description, List.of(fields), exactlyOne);
+    }
+    private static Spec.Str text(String description) { return new Spec.Str(description, List.of(), null, null, true); }
+    private static Spec.Str id(String description) {
+        return new Spec.Str(description, List.of(), "[A-Za-z0-9][A-Za-z0-9_.\\-/]{0,39}",
+                "an id of 1 to 40 letters, digits, '-', '_', '.', '/' starting with a letter or digit", true);
+    }
+    private static <E extends Enum<E> & Token> Spec.Str word(String description, Class<E> type) {
+        return new Spec.Str(description, Token.tokens(type), null, null, false);
+    }
+    private static Spec.Num positive(String description) {
+        return new Spec.Num(description, 0.0, true, null, false, false, List.of(), null, false);
+    }
+    private static Spec.Num range(String description, double min, boolean minEx, double max, boolean maxEx) {
+        return new Spec.Num(description, min, minEx, max, maxEx, false, List.of(), null, false);
+    }
+    private static Spec.Num whole(String description, double min, double max) {
+        return new Spec.Num(description, min, false, max, false, true, List.of(), null, false);
+    }
+    private static Spec.Num oneOf(String description, double... values) {
+        List<Double> list = new ArrayList<>();
+        for (double v : values) list.add(v);
+        return new Spec.Num(description, null, false, null, false, false, list, null, false);
+    }
+    private static Spec.Num size(String description) {
+        return new Spec.Num(description, null, false, null, false, false, ReferenceData.standardSizes(),
+                "a standard size in mm²", true);
+    }
+
+    private static Spec.Obj build() {
+        Spec.Obj revision = obj("an entry of the revision history",
+                req("revision", text("revision letter or number")),
+                req("date", isoDate("date of that revision")),
+                opt("description", text("what changed"), "empty"));
+        Spec.Obj project = obj("the title block of the note",
+                req("title", text("project title")),
+                req("reference", text("calculation note number")),
+                req("revision", text("revision of this note")),
+                req("date", isoDate("date of the note")),
+                opt("client", text("client name"), "empty"),
+                opt("prepared_by", text("name of the person who prepared the note"), "empty"),
+                opt("checked_by", text("name of the checker"), "empty"),
+                opt("approved_by", text("name of the approver"), "empty"),
+                opt("status", word("status of the note", Status.class), "draft"),
+                opt("revisions", new Spec.Arr("earlier revisions, for the cover", revision, 0), "none"));
+
+        Spec.Map limitsByKind = new Spec.Map("voltage-drop limits per load kind, in per cent; 'other' applies to every kind not listed",
+                Token.tokens(LoadKind.class), range("voltage-drop limit in per cent of nominal voltage", 0, true, 25, false));
+        Spec.Obj basis = obj("the design basis; every key is optional",
+                opt("frequency_hz", oneOf("supply frequency in Hz", 50, 60), "50"),
+                opt("earthing", word("system earthing", Earthing.class), "TN-S"),
+                opt("voltage_drop_limit_percent", range("voltage-drop limit from origin to terminals, per cent of nominal", 0, true, 25, false), "4"),
+                opt("voltage_drop_limits_percent", limitsByKind, "none (one limit for all loads)"),
+                opt("ambient_air_c", range("ambient air temperature in °C", -30, false, 80, false), "30"),
+                opt("ambient_ground_c", range("ground temperature in °C", -10, false, 50, false), "20"),
+                opt("conductor_temperature", word("conductor temperature for the resistance used in the voltage drop", ConductorTemperature.class), "maximum"),
+                opt("disconnection_time_final_s", range("maximum disconnection time of final circuits in s", 0, true, 5, false), "0.4"),
+                opt("disconnection_time_distribution_s", range("maximum disconnection time of distribution circuits in s", 0, true, 5, false), "5"),
+                opt("motor_starting_limit_percent", range("limit of the voltage dip at a motor's terminals while it starts, per cent of nominal", 0, true, 50, false), "10"),
+                opt("voltage_drop_method", word("which voltage-drop form is checked against the limit", DropMethod.class), "approximate"));
+
+        Spec.Obj transformer = obj("a transformer at the origin",
+                req("rating_kva", positive("rated power in kVA")),
+                req("impedance_percent", range("short-circuit impedance in per cent", 0, true, 100, true)),
+                opt("x_r_ratio", positive("X/R ratio of the transformer"), "not used until the fault path is calculated"));
+        Spec.Obj utility = obj("a supply from the distribution network",
+                opt("fault_level_ka", positive("prospective fault current at the origin in kA"), "none"),
+                opt("loop_impedance_ohm", positive("external earth-fault loop impedance Ze in Ω"), "none"),
+                opt("x_r_ratio", positive("X/R ratio of the network"), "not used until the fault path is calculated"));
+        Spec.Obj source = objOne("the source at the origin", List.of(List.of("transformer", "utility")),
+                opt("transformer", transformer, null),
+                opt("utility", utility, null));
+        Spec.Obj supply = obj("the supply at the origin",
+                req("line_voltage_v", positive("nominal line-to-line voltage in V")),
+                req("phase_voltage_v", positive("nominal line-to-neutral voltage in V")),
+                req("source", source));
+
+        Spec.Obj board = obj("a distribution board",
+                req("id", id("board id, unique across boards and circuits")),
+                opt("description", text("what the board is"), "empty"),
+                opt("diversity", range("diversity factor applied to the sum of the board's circuits", 0, true, 1, false), "1"),
+                opt("fault_rating_ka", positive("rated short-circuit withstand of the board in kA"), "none"));
+
+        Spec.Obj load = objOne("what the circuit supplies", List.of(List.of("power_kw", "apparent_kva", "current_a")),
+                req("kind", word("load kind", LoadKind.class)),
+                opt("power_kw", positive("active input power in kW (motors: rated shaft output)"), null),
+                opt("apparent_kva", positive("apparent power in kVA"), null),
+                opt("current_a", positive("load current in A"), null),
+                opt("power_factor", range("power factor", 0, true, 1, false), "unknown (voltage drop then uses z)"),
+                opt("efficiency", range("motor efficiency", 0, true, 1, false), "1 (motors: give it)"),
+                opt("phases", oneOf("number of phases", 1, 3), "1 for a 2-core cable, 3 for 4- and 5-core cables and single-core cables; else required"),
+                opt("starting_current_multiple", range("motor starting current as a multiple of full-load current", 1, false, 20, false), "none (starting dip not checked)"),
+                opt("starting_power_factor", range("power factor while starting", 0, true, 1, false), "0.3"));
+        Spec.Obj cable = obj("the cable",
+                req("conductor", word("conductor material", Conductor.class)),
+                req("insulation", word("insulation (pvc 70 °C thermoplastic, xlpe 90 °C thermosetting)", Insulation.class)),
+                req("type", word("cable construction", CableType.class)),
+                opt("cores", oneOf("number of cores of a multicore cable", 2, 3, 4, 5), "required for multicore"),
+                req("size_mm2", size("line conductor size in mm², or auto")),
+                req("cpc_mm2", size("protective conductor size in mm², or auto")),
+                opt("parallel", whole("conductors in parallel per phase", 1, 12), "1"),
+                opt("formation", word("formation of single-core cables", Formation.class), "required for single-core"));
+        Spec.Obj installation = obj("installation conditions",
+                req("method", word("IEC 60364-5-52 reference installation method", Method.class)),
+                opt("ambient_c", range("ambient temperature in °C (air, or ground for D1/D2)", -30, false, 80, false), "basis.ambient_air_c or basis.ambient_ground_c"),
+                opt("grouped_circuits", whole("circuits in the group, this one included", 1, 100), "1 (alone)"),
+                opt("group_arrangement", word("arrangement of the group", Arrangement.class), "bunched"),
+                opt("thermal_insulation_mm", range("length of run surrounded by thermal insulation in mm", 0, false, 100000, false), "0"),
+                opt("soil_thermal_resistivity_kmw", range("soil thermal resistivity in K·m/W (buried methods)", 0, true, 10, false), "2.5"),
+                opt("third_harmonic_percent", range("third-harmonic content of the line current in per cent", 0, false, 100, false), "0"));
+        Spec.Obj device = obj("the protective device at the origin of the circuit",
+                req("kind", word("device kind", DeviceKind.class)),
+                req("rating_a", new Spec.Num("rated current In in A, or auto", 0.0, true, null, false, false, List.of(), null, true)),
+                opt("curve", word("MCB/RCBO instantaneous tripping type", Curve.class), "required for mcb and rcbo"),
+                opt("instantaneous_a", positive("MCCB instantaneous (magnetic) trip setting in A"), "none"),
+                opt("breaking_capacity_ka", positive("rated breaking capacity in kA"), "none"),
+                opt("disconnection_current_a", positive("fuse: current that disconnects within the required time, from the manufacturer's curve, in A"), "none"),
+                opt("residual_current_a", positive("rated residual operating current IΔn of an RCD or RCBO in A"), "none"),
+                opt("let_through_a2s", positive("let-through energy I²t from the manufacturer's data in A²s"), "none"));
+        Spec.Obj circuit = objOne("a circuit", List.of(List.of("load", "to")),
+                req("id", id("circuit id, unique across boards and circuits")),
+                opt("description", text("what the circuit is"), "empty"),
+                req("from", id("id of the board the circuit starts at")),
+                opt("to", id("id of the board a feeder supplies"), null),
+                opt("phase", word("phase of a single-phase circuit", Phase.class), "auto"),
+                opt("load", load, null),
+                req("length_m", positive("route length in m")),
+                req("cable", cable),
+                req("installation", installation),
+                req("device", device),
+                opt("design_current_a", positive("design current given by the designer, overriding the derived value, in A"), "derived"));
+
+        return obj("a feedernote design input, format 1",
+                req("format", oneOf("input format version", 1)),
+                req("project", project),
+                opt("basis", basis, "all defaults"),
+                req("supply", supply),
+                req("boards", new Spec.Arr("the distribution boards", board, 1)),
+                req("circuits", new Spec.Arr("the circuits", circuit, 1)));
+    }
+
+    private static Spec.Str isoDate(String description) {
+        return new Spec.Str(description, List.of(), "\\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\\d|3[01])", "an ISO date YYYY-MM-DD", false);
+    }
+}

@@ -1,0 +1,185 @@
+package org.feedernote.input;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.regex.Pattern;
+import java.util.stream.Collectors;
+
+/** Checks a {@link Node} tree against a {@link Spec}; collects every error, never stops at the first. */
+final class StructureValidator {
+    private final String file;
+    private final List<InputError> errors;
+
+    StructureValidator(String file, List<InputError> errors) {
+        this.file = file;
+        this.errors = errors;
+    }
+
+    void check(Node node, Spec spec, String path) {
+        if (spec instanceof Spec.Obj obj) checkObj(node, obj, path);
+        else if (spec instanceof Spec.Map map) checkMap(node, map, path);
+        else if (spec instanceof Spec.Arr arr) checkArr(node, arr, path);
+        else if (spec instanceof Spec.Str str) checkStr(node, str, path);
+        else if (spec instanceof Spec.Num num) checkNum(node, num, path);
+    }
+
+    private void error(Node.Pos pos, String path, String message) {
+        errors.add(new InputError(file, pos.line(), pos.column(), path, message));
+    }
+
+    private static String child(String path, String key) {
+        return path.isEmpty() ? key : path + "." + key;
+    }
+
+    private void checkObj(Node node, Spec.Obj spec, String path) {
+        if (!(node instanceof Node.Obj obj)) {
+            error(node.pos(), path, "expected a mapping (" + spec.description() + "), found " + describe(node));
+            return;
+        }
+        List<String> names = spec.fields().stream().map(Spec.Field::name).toList();
+        for (Node.Entry e : obj.entries().values()) {
+            Spec.Field f = spec.field(e.key());
+            if (f == null) {
+                error(e.keyPos(), child(path, e.key()), "unknown key '" + e.key() + "'" + Suggest.hint(e.key(), names)
+                        + "; expected one of: " + String.join(", ", names));
+            } else {
+                check(e.value(), f.spec(), child(path, e.key()));
+            }
+        }
+        for (Spec.Field f : spec.fields()) {
+            if (f.required() && !obj.entries().containsKey(f.name())) {
+                error(obj.pos(), child(path, f.name()), "missing required key '" + f.name() + "' (" + f.spec().description() + ")");
+            }
+        }
+        for (List<String> group : spec.exactlyOne()) {
+            List<String> present = group.stream().filter(obj.entries()::containsKey).toList();
+            if (present.size() != 1) {
+                error(obj.pos(), path, present.isEmpty()
+                        ? "give exactly one of " + String.join(", ", group) + "; none is given"
+                        : "give exactly one of " + String.join(", ", group) + "; found " + String.join(" and ", present));
+            }
+        }
+    }
+
+    private void checkMap(Node node, Spec.Map spec, String path) {
+        if (!(node instanceof Node.Obj obj)) {
+            error(node.pos(), path, "expected a mapping (" + spec.description() + "), found " + describe(node));
+            return;
+        }
+        for (Node.Entry e : obj.entries().values()) {
+            if (!spec.keys().contains(e.key())) {
+                error(e.keyPos(), child(path, e.key()), "unknown key '" + e.key() + "'" + Suggest.hint(e.key(), spec.keys())
+                        + "; expected one of: " + String.join(", ", spec.keys()));
+            } else {
+                check(e.value(), spec.value(), child(path, e.key()));
+            }
+        }
+    }
+
+    private void checkArr(Node node, Spec.Arr spec, String path) {
+        if (!(node instanceof Node.Arr arr)) {
+            error(node.pos(), path, "expected a list (" + spec.description() + "), found " + describe(node));
+            return;
+        }
+        if (arr.items().size() < spec.minItems()) {
+            error(arr.pos(), path, "expected at least " + spec.minItems() + " item(s), found " + arr.items().size());
+        }
+        for (int i = 0; i < arr.items().size(); i++) check(arr.items().get(i), spec.item(), path + "[" + i + "]");
+    }
+
+    private void checkStr(Node node, Spec.Str spec, String path) {
+        if (!(node instanceof Node.Scalar s) || s.value() == null || s.value() instanceof Boolean
+                || (s.isNumber() && !spec.numbersAsText())) {
+            error(node.pos(), path, "expected " + expected(spec) + ", found " + describe(node));
+            return;
+        }
+        String text = s.value() instanceof String str ? str : s.describe();
+        if (!spec.allowed().isEmpty() && !spec.allowed().contains(text)) {
+            error(node.pos(), path, "expected " + expected(spec) + ", found '" + text + "'" + Suggest.hint(text, spec.allowed()));
+            return;
+        }
+        if (spec.pattern() != null && !Pattern.matches(spec.pattern(), text)) {
+            error(node.pos(), path, "expected " + spec.patternHint() + ", found '" + text + "'");
+        }
+    }
+
+    private void checkNum(Node node, Spec.Num spec, String path) {
+        if (node instanceof Node.Scalar s && "auto".equals(s.value()) && spec.auto()) return;
+        if (!(node instanceof Node.Scalar s) || !s.isNumber()) {
+            String found = describe(node);
+            String hint = node instanceof Node.Scalar sc && sc.value() instanceof String str && spec.auto()
+                    ? Suggest.hint(str, List.of("auto")) : "";
+            error(node.pos(), path, "expected " + expected(spec) + ", found " + found + hint);
+            return;
+        }
+        double v = s.number();
+        String shown = s.describe();
+        if (spec.integer() && v != Math.rint(v)) {
+            error(node.pos(), path, "expected a whole number, found " + shown);
+            return;
+        }
+        if (!spec.allowed().isEmpty()) {
+            if (spec.allowed().stream().noneMatch(a -> a == v)) {
+                error(node.pos(), path, "expected " + expected(spec) + ", found " + shown + nearestAllowed(spec.allowed(), v));
+            }
+            return;
+        }
+        if (spec.min() != null && (v < spec.min() || (spec.minExclusive() && v == spec.min()))
+                || spec.max() != null && (v > spec.max() || (spec.maxExclusive() && v == spec.max()))) {
+            error(node.pos(), path, "expected " + expected(spec) + ", found " + shown);
+        }
+    }
+
+    private static String nearestAllowed(List<Double> allowed, double v) {
+        Double below = null;
+        Double above = null;
+        for (double a : allowed) {
+            if (a < v && (below == null || a > below)) below = a;
+            if (a > v && (above == null || a < above)) above = a;
+        }
+        List<String> near = new ArrayList<>();
+        if (below != null) near.add(num(below));
+        if (above != null) near.add(num(above));
+        return near.isEmpty() ? "" : " (nearest: " + String.join(" or ", near) + ")";
+    }
+
+    static String num(double d) {
+        return d == Math.rint(d) ? Long.toString((long) d) : Double.toString(d);
+    }
+
+    static String expected(Spec.Str spec) {
+        if (!spec.allowed().isEmpty()) {
+            return "one of " + spec.allowed().stream().map(a -> "'" + a + "'").collect(Collectors.joining(", "));
+        }
+        if (spec.pattern() != null) return spec.patternHint();
+        return "a text";
+    }
+
+    static String expected(Spec.Num spec) {
+        String auto = spec.auto() ? " or 'auto'" : "";
+        if (!spec.allowed().isEmpty()) {
+            String list = spec.allowed().stream().map(StructureValidator::num).collect(Collectors.joining(", "));
+            return (spec.allowedName() == null ? "one of " : spec.allowedName() + " (") + list + (spec.allowedName() == null ? "" : ")") + auto;
+        }
+        StringBuilder b = new StringBuilder(spec.integer() ? "a whole number" : "a number");
+        if (spec.min() != null && spec.max() != null) {
+            b.append(spec.minExclusive() ? " greater than " : " from ").append(num(spec.min()))
+             .append(spec.maxExclusive() ? " and below " : (spec.minExclusive() ? " and at most " : " to ")).append(num(spec.max()));
+        } else if (spec.min() != null) {
+            b.append(spec.minExclusive() ? " greater than " : " of at least ").append(num(spec.min()));
+        } else if (spec.max() != null) {
+            b.append(spec.maxExclusive() ? " below " : " of at most ").append(num(spec.max()));
+        }
+        return b + auto;
+    }
+
+    static String describe(Node node) {
+        if (node instanceof Node.Obj) return "a mapping";
+        if (node instanceof Node.Arr) return "a list";
+        Node.Scalar s = (Node.Scalar) node;
+        if (s.value() == null) return "nothing (null)";
+        if (s.value() instanceof Boolean b) return b.toString().toLowerCase(Locale.ROOT);
+        return s.describe();
+    }
+}

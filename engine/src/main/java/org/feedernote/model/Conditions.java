@@ -1,0 +1,5 @@
+package org.feedernote.model;
+
+/** Installation conditions of a circuit's cable. */
+public record Conditions(Method method, Setting<Double> ambientC, int groupedCircuits, Arrangement groupArrangement,
+                         double thermalInsulationMm, Setting<Double> soilResistivityKmW, Double thirdHarmonicPercent) {}

@@ -1,0 +1,7 @@
+package org.feedernote.model;
+
+/** A conductor size in mm², or 'auto' for the program to choose. */
+public record SizeChoice(boolean auto, double mm2) {
+    public static SizeChoice automatic() { return new SizeChoice(true, 0); }
+    public static SizeChoice of(double mm2) { return new SizeChoice(false, mm2); }
+}

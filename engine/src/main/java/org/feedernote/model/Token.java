@@ -1,0 +1,18 @@
+package org.feedernote.model;
+
+import java.util.Arrays;
+import java.util.List;
+import java.util.Optional;
+
+/** An enumerated value with the spelling the design input uses for it. */
+public interface Token {
+    String token();
+
+    static <E extends Enum<E> & Token> Optional<E> parse(Class<E> type, String text) {
+        return Arrays.stream(type.getEnumConstants()).filter(e -> e.token().equals(text)).findFirst();
+    }
+
+    static <E extends Enum<E> & Token> List<String> tokens(Class<E> type) {
+        return Arrays.stream(type.getEnumConstants()).map(Token::token).toList();
+    }
+}

@@ -1,0 +1,68 @@
+package org.feedernote.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Collectors;
+
+import org.feedernote.calc.CheckResult;
+import org.feedernote.calc.CircuitResult;
+import org.feedernote.calc.Result;
+import org.feedernote.data.ReferenceData;
+import org.feedernote.formula.Units;
+
+/** The designer's summary: one row per circuit, the verdict, and what failed. */
+public final class TerminalSummary {
+    private TerminalSummary() {}
+
+    public static String render(Result result, String fileName) {
+        List<String[]> rows = new ArrayList<>();
+        rows.add(new String[] {"circuit", "from", "to/load", "Ib A", "size mm²", "ΔU own %", "ΔU total %", "limit %", "verdict", "governing / failing"});
+        for (CircuitResult c : result.circuits()) {
+            String to = c.circuit().isFeeder() ? "→ " + c.circuit().to() : c.circuit().load().kind().token() + " " + c.connection();
+            String size = (c.circuit().cable().parallel() > 1 ? c.circuit().cable().parallel() + "×" : "")
+                    + ReferenceData.sizeKey(c.circuit().cable().size().mm2());
+            String failing = c.failing().stream().map(CheckResult::name).collect(Collectors.joining(", "));
+            rows.add(new String[] {c.id(), c.circuit().from(), to,
+                    NumberFormatPolicy.number(c.designCurrent().value(), Units.A), size,
+                    NumberFormatPolicy.number(c.dropPercent().value(), Units.PERCENT),
+                    NumberFormatPolicy.number(c.cumulativePercent().value(), Units.PERCENT),
+                    c.limitPercent() == null ? "—" : NumberFormatPolicy.number(c.limitPercent().value(), Units.PERCENT),
+                    c.pass() ? "PASS" : "FAIL ✗",
+                    c.pass() ? c.governingCheck() : failing});
+        }
+        int[] width = new int[rows.get(0).length];
+        for (String[] r : rows) for (int i = 0; i < r.length; i++) width[i] = Math.max(width[i], r[i].length());
+        StringBuilder b = new StringBuilder();
+        b.append(fileName).append(" — ").append(result.input().project().title()).append('\n');
+        for (int j = 0; j < rows.size(); j++) {
+            String[] r = rows.get(j);
+            StringBuilder line = new StringBuilder();
+            for (int i = 0; i < r.length; i++) {
+                boolean numeric = i >= 3 && i <= 7;
+                String cell = numeric ? pad(r[i], width[i], true) : pad(r[i], width[i], false);
+                line.append(cell).append(i + 1 < r.length ? "  " : "");
+            }
+            b.append(line.toString().stripTrailing()).append('\n');
+            if (j == 0) b.append("-".repeat(line.toString().stripTrailing().length())).append('\n');
+        }
+        int failing = result.failingChecks();
+        long failingCircuits = result.circuits().stream().filter(c -> !c.pass()).count();
+        b.append('\n');
+        if (failing == 0) {
+            b.append("PASS: every performed check passes (").append(result.circuits().size()).append(" circuits).\n");
+        } else {
+            b.append("FAIL: ").append(failing).append(" check(s) fail in ").append(failingCircuits).append(" circuit(s).\n");
+        }
+        if (!result.notPerformed().isEmpty()) {
+            b.append("Not yet checked by this version: ").append(String.join(", ", result.notPerformed()))
+             .append(". The design is not shown to conform until these are verified.\n");
+        }
+        return b.toString();
+    }
+
+    private static String pad(String s, int w, boolean right) {
+        if (s.length() >= w) return s;
+        String space = " ".repeat(w - s.length());
+        return right ? space + s : s + space;
+    }
+}

@@ -1,0 +1,52 @@
+package org.feedernote.trace;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/** A trace that keeps every step, in sections, and refuses a step id used twice. */
+public final class TraceRecorder implements Trace {
+    private final String id;
+    private final String title;
+    private final String subtitle;
+    private final List<Step> steps = new ArrayList<>();
+    private final List<TraceRecorder> children = new ArrayList<>();
+    private final Map<String, Step> index;
+
+    public TraceRecorder() {
+        this("", "", "", new LinkedHashMap<>());
+    }
+
+    private TraceRecorder(String id, String title, String subtitle, Map<String, Step> index) {
+        this.id = id;
+        this.title = title;
+        this.subtitle = subtitle;
+        this.index = index;
+    }
+
+    @Override public void add(Step step) {
+        if (index.putIfAbsent(step.id(), step) != null) {
+            throw new IllegalStateException("step id recorded twice: " + step.id());
+        }
+        steps.add(step);
+    }
+
+    @Override public boolean recording() { return true; }
+
+    @Override public Trace section(String sectionId, String sectionTitle, String sectionSubtitle) {
+        TraceRecorder child = new TraceRecorder(sectionId, sectionTitle, sectionSubtitle, index);
+        children.add(child);
+        return child;
+    }
+
+    /** The recorded steps, frozen. */
+    public Section toSection() {
+        return new Section(id, title, subtitle, List.copyOf(steps),
+                children.stream().map(TraceRecorder::toSection).toList());
+    }
+
+    public Map<String, Step> index() {
+        return java.util.Collections.unmodifiableMap(index);
+    }
+}
