@@ -75,6 +75,7 @@ public final class Engine {
         Q u0;
         Q f;
         Trace supplyTrace;
+        Trace originTrace;
 
         Run(Installation inst, TraceRecorder root) {
             this.inst = inst;
@@ -91,6 +92,8 @@ public final class Engine {
                     circuitTrace.put(c.id(), root.section(c.id(), title, sub));
                 }
             }
+            originTrace = root.section(boardOrder.get(0) + "/demand", "Demand at the origin board " + boardOrder.get(0),
+                    boards.get(boardOrder.get(0)).description());
             for (Circuit c : inst.circuits()) {
                 if (!c.isFeeder()) loadDemand(c);
             }
@@ -245,7 +248,7 @@ public final class Engine {
             Board board = boards.get(boardId);
             Circuit feeder = feederOf.get(boardId);
             Trace t = feeder == null
-                    ? supplyTrace.section(boardId + "/demand", "Demand of the origin board " + boardId, board.description())
+                    ? originTrace
                     : circuitTrace.get(feeder.id()).section(feeder.id() + "/ib", "Design current", "from the demand of board " + boardId);
             String id = boardId + "/demand";
             Q d = Given.setting(t, id + "/d", "Diversity factor of board " + boardId, "d", board.diversity(), Units.NONE,
@@ -288,6 +291,11 @@ public final class Engine {
             PhaseDemand pd = new PhaseDemand(p, q, su);
             boardDemand.put(boardId, pd);
 
+            boolean balanced = same(p) && same(q) && same(su);
+            if (balanced) {
+                Given.decision(t, id + "/balanced", "Balance of the phases", "every load on the board is three-phase",
+                        "the phases carry equal demand: I = √3 · S_k / U (the three-phase form)", "common practice");
+            }
             List<Q> currents = new ArrayList<>();
             List<Q> pfs = new ArrayList<>();
             for (int k = 0; k < 3; k++) {
@@ -302,7 +310,9 @@ public final class Engine {
                             .eval(t, id + "/S_total_" + ph, ph, bind(var("a", sk), sk), bind(var("b", su[k]), su[k]));
                 }
                 sk = relabel(sk, "S_" + ph);
-                Q ik = DemandFormulas.PHASE_CURRENT.eval(t, id + "/I_" + ph, ph, bind(DemandFormulas.S, sk), bind(DemandFormulas.U0, u0));
+                Q ik = balanced
+                        ? DemandFormulas.PHASE_CURRENT_BALANCED.eval(t, id + "/I_" + ph, ph + ", balanced", bind(DemandFormulas.S, sk), bind(DemandFormulas.U, u))
+                        : DemandFormulas.PHASE_CURRENT.eval(t, id + "/I_" + ph, ph, bind(DemandFormulas.S, sk), bind(DemandFormulas.U0, u0));
                 currents.add(relabel(ik, "I_" + ph));
                 if (su[k] == null && sk.value() > 0) {
                     pfs.add(relabel(DemandFormulas.POWER_FACTOR.eval(t, id + "/cos_phi_" + ph, ph, bind(DemandFormulas.P, pk), bind(DemandFormulas.S, sk)), "cos φ_" + ph));
@@ -349,6 +359,12 @@ public final class Engine {
                 if (pfs.get(worst) != null) powerFactor.put(feeder.id(), pfs.get(worst));
                 connection.put(feeder.id(), "L1 L2 L3");
             }
+        }
+
+        boolean same(Q[] qs) {
+            if (qs[0] == null || qs[1] == null || qs[2] == null) return qs[0] == null && qs[1] == null && qs[2] == null;
+            double a = qs[0].value();
+            return Math.abs(qs[1].value() - a) <= 1e-9 * Math.abs(a) && Math.abs(qs[2].value() - a) <= 1e-9 * Math.abs(a);
         }
 
         Var var(String key, Q q) {
@@ -417,7 +433,15 @@ public final class Engine {
             Q dropPct = VoltageDropFormulas.PERCENT_OF_NOMINAL.eval(vt, id + "/dU_pct", "",
                     bind(VoltageDropFormulas.DU, dropV), bind(VoltageDropFormulas.U_N, un));
             Q dropExactPct = null;
-            if (pf != null) {
+            double quadrature = pf == null ? 0
+                    : ib.value() * length.value() * (z.x().value() * pf.value() - z.r().value() * sin.value()) / 1000;
+            boolean exactSolvable = pf != null && Math.abs(quadrature) < un.value();
+            if (pf != null && !exactSolvable) {
+                Given.decision(vt, id + "/exact-none", "Voltage drop, exact phasor form",
+                        "the quadrature drop I_b·L·(x·cos φ − r·sin φ) exceeds U_n",
+                        "the exact form has no solution: the cable cannot deliver I_b over this length", "circuit theory", dropPct.id());
+            }
+            if (exactSolvable) {
                 dropExact = VoltageDropFormulas.EXACT.eval(vt, id + "/dU_exact", "phasor form",
                         bind(VoltageDropFormulas.U_N, un), bind(VoltageDropFormulas.R, z.r()), bind(VoltageDropFormulas.X, z.x()),
                         bind(VoltageDropFormulas.COS_PHI, pf), bind(VoltageDropFormulas.SIN_PHI, sin),

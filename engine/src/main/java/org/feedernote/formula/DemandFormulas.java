@@ -60,6 +60,12 @@ public final class DemandFormulas {
     public static final Formula PHASE_CURRENT = new Formula("phase-current", "Phase current", "I", A,
             div(mul(n(1000), v(S)), v(U0)), "I = S / U₀ per phase");
 
+    public static final Var U = var("U", "U", V);
+
+    /** Balanced board: the per-phase third of a three-phase demand, I = S / (√3 · U). */
+    public static final Formula PHASE_CURRENT_BALANCED = new Formula("phase-current-balanced", "Phase current", "I", A,
+            div(mul(SQRT3, n(1000), v(S)), v(U)), "I = √3 · S_k / U for a balanced board (S_k = S/3), the same as S / (√3 · U)");
+
     public static final Formula POWER_FACTOR = new Formula("power-factor", "Power factor", "cos φ", NONE,
             div(v(P), v(S)), "cos φ = P / S");
 

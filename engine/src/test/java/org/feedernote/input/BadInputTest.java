@@ -1,0 +1,206 @@
+package org.feedernote.input;
+
+import static org.junit.jupiter.api.Assertions.*;
+
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+
+/**
+ * Every class of bad input is refused with the file, line and column, the key path, what was
+ * expected and, where obvious, a suggestion. All errors are reported at once.
+ */
+class BadInputTest {
+
+    private static final String GOOD_CIRCUIT = """
+              - id: C1
+                from: B0
+                load: {kind: lighting, power_kw: 1.0, power_factor: 0.9, phases: 1}
+                length_m: 20
+                cable: {conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 1.5, cpc_mm2: 1.5}
+                installation: {method: C}
+                device: {kind: mcb, curve: B, rating_a: 6}
+            """;
+
+    private static String doc(String boards, String circuits) {
+        return """
+                format: 1
+                project: {title: T, reference: R, revision: A, date: 2026-01-01}
+                supply:
+                  line_voltage_v: 400
+                  phase_voltage_v: 230
+                  source: {utility: {fault_level_ka: 10}}
+                boards:
+                %s
+                circuits:
+                %s""".formatted(boards, circuits);
+    }
+
+    private static List<InputError> errors(String yaml) {
+        InputException e = assertThrows(InputException.class, () -> InputReader.parse("bad.yaml", yaml, false));
+        return e.errors();
+    }
+
+    private static InputError only(String yaml) {
+        List<InputError> errors = errors(yaml);
+        assertEquals(1, errors.size(), () -> "expected one error, got " + errors);
+        return errors.get(0);
+    }
+
+    @Test
+    void unknownKeyIsRefusedWithASuggestion() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("length_m: 20", "lenght_m: 20\n    length_m: 20")));
+        assertEquals("circuits[0].lenght_m", e.path());
+        assertEquals(13, e.line());
+        assertEquals(5, e.column());
+        assertTrue(e.message().contains("did you mean 'length_m'?"), e.message());
+    }
+
+    @Test
+    void wrongTypeNamesWhatWasExpected() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("length_m: 20", "length_m: twenty")));
+        assertEquals("circuits[0].length_m", e.path());
+        assertTrue(e.message().startsWith("expected a number greater than 0"), e.message());
+        assertTrue(e.message().contains("'twenty'"), e.message());
+    }
+
+    @Test
+    void powerFactorOutsideZeroToOneIsRefused() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("power_factor: 0.9", "power_factor: 1.2")));
+        assertEquals("circuits[0].load.power_factor", e.path());
+        assertTrue(e.message().contains("greater than 0 and at most 1"), e.message());
+        assertEquals(12, e.line());
+    }
+
+    @Test
+    void zeroOrNegativeLengthIsRefused() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("length_m: 20", "length_m: 0")));
+        assertEquals("circuits[0].length_m", e.path());
+        assertTrue(e.message().contains("greater than 0"), e.message());
+    }
+
+    @Test
+    void nonStandardSizeNamesTheNearestStandardSizes() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("size_mm2: 1.5", "size_mm2: 3")));
+        assertEquals("circuits[0].cable.size_mm2", e.path());
+        assertTrue(e.message().contains("nearest: 2.5 or 4"), e.message());
+        assertEquals(14, e.line());
+    }
+
+    @Test
+    void unknownBoardReferenceSuggestsTheNearestId() {
+        InputError e = only(doc("  - id: DB-1", GOOD_CIRCUIT.replace("from: B0", "from: DB-2")));
+        assertEquals("circuits[0].from", e.path());
+        assertTrue(e.message().contains("no board has the id 'DB-2'"), e.message());
+        assertTrue(e.message().contains("did you mean 'DB-1'?"), e.message());
+    }
+
+    @Test
+    void duplicateIdsNameBothPlaces() {
+        InputError e = only(doc("  - id: B0\n  - id: C1", GOOD_CIRCUIT));
+        assertEquals("circuits[0].id", e.path());
+        assertTrue(e.message().contains("already used at boards[1].id"), e.message());
+    }
+
+    @Test
+    void boardFedTwiceNamesBothFeeders() {
+        String feeder = """
+                  - id: F%d
+                    from: B0
+                    to: B1
+                    length_m: 10
+                    cable: {conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: 16, cpc_mm2: 16}
+                    installation: {method: C}
+                    device: {kind: mcb, curve: C, rating_a: 63}
+                """;
+        InputError e = only(doc("  - id: B0\n  - id: B1", feeder.formatted(1) + feeder.formatted(2)));
+        assertEquals("circuits[1].to", e.path());
+        assertTrue(e.message().contains("fed twice: by 'F1' and by 'F2'"), e.message());
+    }
+
+    @Test
+    void loopOfBoardsIsRefused() {
+        String feeder = """
+                  - id: %s
+                    from: %s
+                    to: %s
+                    length_m: 10
+                    cable: {conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: 16, cpc_mm2: 16}
+                    installation: {method: C}
+                    device: {kind: mcb, curve: C, rating_a: 63}
+                """;
+        List<InputError> errors = errors(doc("  - id: B0\n  - id: B1\n  - id: B2",
+                feeder.formatted("F1", "B1", "B2") + feeder.formatted("F2", "B2", "B1") + GOOD_CIRCUIT));
+        assertTrue(errors.stream().anyMatch(e -> e.message().contains("loop") && e.message().contains("B1")
+                && e.message().contains("B2")), errors.toString());
+    }
+
+    @Test
+    void missingRequiredKeyIsNamed() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("    length_m: 20\n", "")));
+        assertEquals("circuits[0].length_m", e.path());
+        assertTrue(e.message().startsWith("missing required key 'length_m'"), e.message());
+    }
+
+    @Test
+    void unknownWordSuggestsTheSpelling() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("conductor: copper", "conductor: Copper")));
+        assertTrue(e.message().contains("did you mean 'copper'?"), e.message());
+    }
+
+    @Test
+    void malformedYamlGivesThePosition() {
+        List<InputError> errors = errors("format: 1\nproject: {title: [unclosed\n");
+        assertEquals(1, errors.size());
+        assertTrue(errors.get(0).message().startsWith("the file is not valid YAML"), errors.toString());
+        assertTrue(errors.get(0).line() >= 2, errors.toString());
+    }
+
+    @Test
+    void allErrorsAreReportedAtOnceInFileOrder() {
+        String bad = GOOD_CIRCUIT.replace("length_m: 20", "length_m: -1").replace("size_mm2: 1.5", "size_mm2: 7")
+                .replace("kind: mcb", "kind: breaker");
+        List<InputError> errors = errors(doc("  - id: B0", bad));
+        assertEquals(3, errors.size(), errors.toString());
+        assertTrue(errors.get(0).line() < errors.get(1).line() && errors.get(1).line() < errors.get(2).line(), errors.toString());
+        for (InputError e : errors) assertTrue(e.text().startsWith("bad.yaml:" + e.line() + ":" + e.column() + ": circuits[0]."), e.text());
+    }
+
+    @Test
+    void jsonInputGivesPositionsToo() {
+        String json = """
+                {"format": 1,
+                 "project": {"title": "T", "reference": "R", "revision": "A", "date": "2026-01-01"},
+                 "supply": {"line_voltage_v": 400, "phase_voltage_v": 230, "source": {"utility": {"fault_level_ka": 10}}},
+                 "boards": [{"id": "B0"}],
+                 "circuits": [{"id": "C1", "from": "B0", "length_m": 5,
+                   "load": {"kind": "lighting", "power_kw": 1, "power_factor": 0.9, "phases": 1},
+                   "cable": {"conductor": "copper", "insulation": "pvc", "type": "multicore", "cores": 2, "size_mm2": 1.5, "cpc_mm2": 1.5},
+                   "installation": {"method": "Q"},
+                   "device": {"kind": "mcb", "curve": "B", "rating_a": 6}}]}
+                """;
+        InputException ex = assertThrows(InputException.class, () -> InputReader.parse("bad.json", json, true));
+        InputError e = ex.errors().get(0);
+        assertEquals("circuits[0].installation.method", e.path());
+        assertEquals(8, e.line());
+    }
+
+    @Test
+    void lineAndPhaseVoltagesMustDifferByRootThree() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT).replace("phase_voltage_v: 230", "phase_voltage_v: 400"));
+        assertEquals("supply.phase_voltage_v", e.path());
+    }
+
+    @Test
+    void aThreePhaseLoadOnATwoCoreCableIsRefused() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("phases: 1", "phases: 3")));
+        assertEquals("circuits[0].load.phases", e.path());
+    }
+
+    @Test
+    void singleCoreCablesNeedAFormation() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("type: multicore, cores: 2", "type: single-core")
+                .replace("phases: 1", "phases: 3")));
+        assertEquals("circuits[0].cable.formation", e.path());
+    }
+}
