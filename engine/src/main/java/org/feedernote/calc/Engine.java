@@ -127,7 +127,7 @@ public final class Engine {
             supplyTrace = root.section("supply", "Supply and origin", "");
             Basis basis = inst.basis();
             u = Given.input(supplyTrace, "supply/U", "Nominal line voltage", "U", inst.supply().lineVoltageV(), Units.V, "supply.line_voltage_v");
-            u0 = Given.input(supplyTrace, "supply/U0", "Nominal phase voltage", "U₀", inst.supply().phaseVoltageV(), Units.V, "supply.phase_voltage_v");
+            u0 = Given.input(supplyTrace, "supply/U0", "Nominal phase voltage", "U_0", inst.supply().phaseVoltageV(), Units.V, "supply.phase_voltage_v");
             f = Given.setting(supplyTrace, "basis/f", "Supply frequency", "f", basis.frequencyHz(), Units.HZ, "default of this program");
         }
 
@@ -302,7 +302,7 @@ public final class Engine {
                 String ph = "L" + (k + 1);
                 Q pk = p[k] != null ? p[k] : zero(t, id + "/P0_" + ph, "P_" + ph, Units.KW);
                 Q qk = q[k] != null ? q[k] : zero(t, id + "/Q0_" + ph, "Q_" + ph, Units.KVAR);
-                Q sk = DemandFormulas.APPARENT.eval(t, id + "/S_" + ph, ph, bind(DemandFormulas.P, pk), bind(DemandFormulas.Q, qk));
+                Q sk = DemandFormulas.APPARENT.as("S_" + ph).eval(t, id + "/S_" + ph, ph, bind(DemandFormulas.P, pk), bind(DemandFormulas.Q, qk));
                 if (su[k] != null) {
                     sk = DemandFormulas.sum("apparent-with-unknown", "Apparent power on " + ph + " with loads of unknown power factor",
                             "S_" + ph, Units.KVA, List.of(var("a", sk), var("b", su[k])),
@@ -311,11 +311,11 @@ public final class Engine {
                 }
                 sk = relabel(sk, "S_" + ph);
                 Q ik = balanced
-                        ? DemandFormulas.PHASE_CURRENT_BALANCED.eval(t, id + "/I_" + ph, ph + ", balanced", bind(DemandFormulas.S, sk), bind(DemandFormulas.U, u))
-                        : DemandFormulas.PHASE_CURRENT.eval(t, id + "/I_" + ph, ph, bind(DemandFormulas.S, sk), bind(DemandFormulas.U0, u0));
+                        ? DemandFormulas.PHASE_CURRENT_BALANCED.as("I_" + ph).eval(t, id + "/I_" + ph, ph + ", balanced", bind(DemandFormulas.S, sk), bind(DemandFormulas.U, u))
+                        : DemandFormulas.PHASE_CURRENT.as("I_" + ph).eval(t, id + "/I_" + ph, ph, bind(DemandFormulas.S, sk), bind(DemandFormulas.U0, u0));
                 currents.add(relabel(ik, "I_" + ph));
                 if (su[k] == null && sk.value() > 0) {
-                    pfs.add(relabel(DemandFormulas.POWER_FACTOR.eval(t, id + "/cos_phi_" + ph, ph, bind(DemandFormulas.P, pk), bind(DemandFormulas.S, sk)), "cos φ_" + ph));
+                    pfs.add(relabel(DemandFormulas.POWER_FACTOR.as("cos φ_" + ph).eval(t, id + "/cos_phi_" + ph, ph, bind(DemandFormulas.P, pk), bind(DemandFormulas.S, sk)), "cos φ_" + ph));
                 } else {
                     pfs.add(null);
                 }
@@ -413,7 +413,7 @@ public final class Engine {
             ImpedanceResult z = impedance.impedance(zt, c.id() + "/z", c.cable(), theta, f, phases);
             if (c.isFeeder()) feederImpedance.put(c.id(), z);
 
-            Trace vt = ct.section(c.id() + "/vd", "Voltage drop", phases == 3 ? "three-phase, referred to U" : "single-phase, referred to U₀");
+            Trace vt = ct.section(c.id() + "/vd", "Voltage drop", phases == 3 ? "three-phase, referred to U" : "single-phase, referred to U0");
             String id = c.id() + "/vd";
             Q length = Given.input(vt, id + "/L", "Route length", "L", c.lengthM(), Units.M, c.where().path() + ".length_m");
             lengths.put(c.id(), length);
@@ -442,11 +442,11 @@ public final class Engine {
                         "the exact form has no solution: the cable cannot deliver I_b over this length", "circuit theory", dropPct.id());
             }
             if (exactSolvable) {
-                dropExact = VoltageDropFormulas.EXACT.eval(vt, id + "/dU_exact", "phasor form",
+                dropExact = VoltageDropFormulas.EXACT.as("ΔU_exact").eval(vt, id + "/dU_exact", "phasor form",
                         bind(VoltageDropFormulas.U_N, un), bind(VoltageDropFormulas.R, z.r()), bind(VoltageDropFormulas.X, z.x()),
                         bind(VoltageDropFormulas.COS_PHI, pf), bind(VoltageDropFormulas.SIN_PHI, sin),
                         bind(VoltageDropFormulas.I, ib), bind(VoltageDropFormulas.L, length));
-                dropExactPct = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.eval(vt, id + "/dU_exact_pct", "exact form",
+                dropExactPct = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.as("ΔU_exact").eval(vt, id + "/dU_exact_pct", "exact form",
                         bind(VoltageDropFormulas.DU, relabel(dropExact, "ΔU")), bind(VoltageDropFormulas.U_N, un)), "ΔU_exact");
             }
             Q governing = dropPct;
@@ -590,7 +590,7 @@ public final class Engine {
             Q du = VoltageDropFormulas.MOTOR_STARTING.eval(t, id + "/dU", "",
                     bind(VoltageDropFormulas.R, z.r()), bind(VoltageDropFormulas.X, z.x()), bind(VoltageDropFormulas.COS_ST, cosSt),
                     bind(VoltageDropFormulas.SIN_ST, sinSt), bind(VoltageDropFormulas.I_ST, ist), bind(VoltageDropFormulas.L, length));
-            Q own = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.eval(t, id + "/dU_pct", "",
+            Q own = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.as("ΔU_st").eval(t, id + "/dU_pct", "",
                     bind(VoltageDropFormulas.DU, relabel(du, "ΔU")), bind(VoltageDropFormulas.U_N, un)), "ΔU_st(" + c.id() + ")");
             List<Q> terms = new ArrayList<>();
             String board = c.from();

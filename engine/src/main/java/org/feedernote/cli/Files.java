@@ -21,6 +21,11 @@ final class Files {
         try {
             java.nio.file.Files.write(tmp, bytes);
             try {
+                java.nio.file.Files.setPosixFilePermissions(tmp, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
+            } catch (UnsupportedOperationException notPosix) {
+                // Windows and the like: the default permissions of a new file apply.
+            }
+            try {
                 java.nio.file.Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
             } catch (AtomicMoveNotSupportedException e) {
                 java.nio.file.Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);

@@ -60,13 +60,13 @@ public final class ReferenceData {
     }
 
     public Step.Lookup resistance20(String stepId, Conductor conductor, double sizeMm2) {
-        return resistance.lookup(stepId, "Conductor resistance at 20 °C", "R₂₀", "Ω/km", sizeKey(sizeMm2), conductor.token(),
+        return resistance.lookup(stepId, "Conductor resistance at 20 °C", "R_20", "Ω/km", sizeKey(sizeMm2), conductor.token(),
                 sizeKey(sizeMm2) + " mm²", "class 2, " + (conductor == Conductor.COPPER ? "plain copper" : "aluminium"));
     }
 
     public Step.Lookup alpha20(String stepId, Conductor conductor) {
-        return materials.lookup(stepId, "Temperature coefficient of resistance at 20 °C", "α₂₀", "1/K",
-                conductor.token(), "alpha20", conductor.token(), "α₂₀");
+        return materials.lookup(stepId, "Temperature coefficient of resistance at 20 °C", "α_20", "1/K",
+                conductor.token(), "alpha20", conductor.token(), "α_20");
     }
 
     public Step.Lookup skinCoefficient(String stepId, Conductor conductor) {

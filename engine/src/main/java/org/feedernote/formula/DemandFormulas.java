@@ -19,7 +19,7 @@ public final class DemandFormulas {
     public static final Var P = var("P", "P", KW);
     public static final Var Q = var("Q", "Q", KVAR);
     public static final Var S = var("S", "S", KVA);
-    public static final Var U0 = var("U0", "U₀", V);
+    public static final Var U0 = var("U0", "U_0", V);
     public static final Var P1 = var("P1", "P_L1", KW);
     public static final Var P2 = var("P2", "P_L2", KW);
     public static final Var P3 = var("P3", "P_L3", KW);
@@ -58,7 +58,7 @@ public final class DemandFormulas {
             sqrt(add(sq(v(P)), sq(v(Q)))), "S = √(P² + Q²)");
 
     public static final Formula PHASE_CURRENT = new Formula("phase-current", "Phase current", "I", A,
-            div(mul(n(1000), v(S)), v(U0)), "I = S / U₀ per phase");
+            div(mul(n(1000), v(S)), v(U0)), "I = S / U0 per phase");
 
     public static final Var U = var("U", "U", V);
 
@@ -81,5 +81,5 @@ public final class DemandFormulas {
 
     public static final Formula NEUTRAL_CURRENT = new Formula("neutral-current", "Neutral current", "I_N", A,
             div(mul(n(1000), sqrt(add(sq(NEUTRAL_REAL), sq(NEUTRAL_IMAGINARY)))), v(U0)),
-            "Phasor sum of the line currents I_Lk = (P_k − jQ_k)/U₀ rotated to 0°, −120°, +120° (fundamental only)");
+            "Phasor sum of the line currents I_Lk = (P_k − jQ_k)/U0 rotated to 0°, −120°, +120° (fundamental only)");
 }

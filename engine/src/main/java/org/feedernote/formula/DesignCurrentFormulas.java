@@ -20,7 +20,7 @@ public final class DesignCurrentFormulas {
     public static final Var Q = var("Q", "Q", KVAR);
     public static final Var COS_PHI = var("cos_phi", "cos φ", NONE);
     public static final Var U_LINE = var("U", "U", V);
-    public static final Var U_PHASE = var("U0", "U₀", V);
+    public static final Var U_PHASE = var("U0", "U_0", V);
     public static final Var I = var("I", "I", A);
     public static final Var K_ST = var("k_st", "k_st", NONE);
     public static final Var I_B = var("I_b", "I_b", A);
@@ -56,7 +56,7 @@ public final class DesignCurrentFormulas {
             "Apparent power", "S", KVA, div(mul(SQRT3, v(U_LINE), v(I)), n(1000)), "S = √3 · U · I");
 
     public static final Formula APPARENT_SINGLE_PHASE_FROM_CURRENT = new Formula("s-1ph-current",
-            "Apparent power", "S", KVA, div(mul(v(U_PHASE), v(I)), n(1000)), "S = U₀ · I");
+            "Apparent power", "S", KVA, div(mul(v(U_PHASE), v(I)), n(1000)), "S = U0 · I");
 
     public static final Formula STARTING_CURRENT = new Formula("motor-starting-current",
             "Motor starting current", "I_st", A, mul(v(K_ST), v(I_B)),

@@ -37,6 +37,11 @@ public record Formula(String id, String title, String symbol, String unit, Expr 
         });
     }
 
+    /** The same formula with its result shown by another symbol (S_L1 rather than S). */
+    public Formula as(String resultSymbol) {
+        return new Formula(id, title, resultSymbol, unit, expr, reference);
+    }
+
     public static Step.Binding bind(Var var, Q q) {
         return new Step.Binding(var, q);
     }

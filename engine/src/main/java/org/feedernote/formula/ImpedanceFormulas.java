@@ -14,13 +14,13 @@ import org.feedernote.expr.Var;
 public final class ImpedanceFormulas {
     private ImpedanceFormulas() {}
 
-    private static final String IEC_60287_RESISTANCE = "IEC 60287-1-1:2006, 2.1.1 (R′ = R₀[1 + α₂₀(θ − 20)])";
+    private static final String IEC_60287_RESISTANCE = "IEC 60287-1-1:2006, 2.1.1 (R = R20·[1 + α20·(θ − 20)])";
     private static final String IEC_60287_SKIN = "IEC 60287-1-1:2006, 2.1.2 (skin effect factor)";
     private static final String IEC_60287_PROXIMITY = "IEC 60287-1-1:2006, 2.1.4 (proximity effect factor, three-core and three single-core cables)";
-    private static final String INDUCTANCE = "Inductance of a three-phase line, L = μ₀/2π · (1/4 + ln(s/r)) per conductor (common practice, electromagnetics textbooks)";
+    private static final String INDUCTANCE = "Inductance of a three-phase line, L = μ0/2π · (1/4 + ln(s/r)) per conductor (common practice, electromagnetics textbooks)";
 
-    public static final Var R20 = var("R20", "R₂₀", OHM_PER_KM);
-    public static final Var ALPHA = var("alpha20", "α₂₀", PER_K);
+    public static final Var R20 = var("R20", "R_20", OHM_PER_KM);
+    public static final Var ALPHA = var("alpha20", "α_20", PER_K);
     public static final Var THETA = var("theta", "θ", DEG_C);
     public static final Var THETA_A = var("theta_a", "θ_a", DEG_C);
     public static final Var THETA_MAX = var("theta_max", "θ_max", DEG_C);
@@ -64,7 +64,7 @@ public final class ImpedanceFormulas {
             "Temperature rise proportional to I² (IEC 60287-1-1:2006, 1.4 / 2.1; same relation as BS 7671:2018 Appendix 4, 6.1), from memory");
 
     private static Expr xSquared(Var k) {
-        return div(mul(n(8), PI, v(F), new Expr.Num(1e-4, "10⁻⁴"), v(k)), v(R_THETA));
+        return div(mul(n(8), PI, v(F), new Expr.Num(1e-4, "0.0001"), v(k)), v(R_THETA));
     }
 
     public static final Formula SKIN_ARGUMENT = new Formula("xs2", "Skin effect argument", "x_s²", NONE,
@@ -113,7 +113,7 @@ public final class ImpedanceFormulas {
             "Flat spaced: clearance of one cable diameter, as IEC 60364-5-52:2009, Table B.52.12 (spaced)");
 
     public static final Formula GMD_FLAT = new Formula("gmd-flat", "Geometric mean distance, flat formation", "s_g", MM,
-            mul(CBRT2, v(S_AXIS)), "s_g = ∛(s · s · 2s) = ∛2 · s (common practice)");
+            mul(CBRT2, v(S_AXIS)), "s_g = ³√(s · s · 2s) = ³√2 · s (common practice)");
 
     public static final Var S_G = var("s_g", "s_g", MM);
 

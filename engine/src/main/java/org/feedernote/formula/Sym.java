@@ -13,5 +13,5 @@ final class Sym {
 
     static final Expr SQRT3 = Expr.sqrt(Expr.n(3));
     static final Expr PI = new Expr.Num(Math.PI, "π");
-    static final Expr CBRT2 = new Expr.Num(Math.cbrt(2), "∛2");
+    static final Expr CBRT2 = new Expr.Num(Math.cbrt(2), "³√2");
 }

@@ -44,7 +44,7 @@ public final class InputReader {
         Node root = TreeReader.read(name, text, json, r.errors);
         if (root == null) throw new InputException(r.errors);
         new StructureValidator(name, r.errors).check(root, InputSchema.ROOT, "");
-        Installation model = r.errors.isEmpty() || root instanceof Node.Obj ? r.bind(root) : null;
+        Installation model = r.errors.isEmpty() || root instanceof Node.Obj ? r.bind(root, text) : null;
         if (!r.errors.isEmpty() || model == null) {
             List<InputError> sorted = new ArrayList<>(new java.util.LinkedHashSet<>(r.errors));
             Collections.sort(sorted);
@@ -129,7 +129,7 @@ public final class InputReader {
 
     // ---- binding and the rules that span several keys ----
 
-    private Installation bind(Node root) {
+    private Installation bind(Node root, String text) {
         Project project = project(at(root, "project"));
         Basis basis = basis(at(root, "basis"));
         Supply supply = supply(at(root, "supply"));
@@ -158,7 +158,9 @@ public final class InputReader {
         }
         topology(boards, circuits, circuitNodes);
         voltages(at(root, "supply"), supply);
-        return errors.isEmpty() ? new Installation(file, project, basis, supply, List.copyOf(boards), List.copyOf(circuits)) : null;
+        return errors.isEmpty()
+                ? new Installation(file, project, basis, supply, List.copyOf(boards), List.copyOf(circuits), Canonical.json(root), text)
+                : null;
     }
 
     private void unique(String id, Node node, String path, Map<String, Node> seen, Map<String, String> paths) {

@@ -55,6 +55,12 @@ public final class NumberFormatPolicy {
         return group(bd.toPlainString());
     }
 
+    /** A value as the designer wrote it: up to six significant figures, trailing zeros dropped. */
+    public static String given(double value, String unit) {
+        String n = group(trimmed(new BigDecimal(value).round(new MathContext(6, RoundingMode.HALF_UP))));
+        return unit.isEmpty() ? n : n + " " + unit;
+    }
+
     /** The number with its unit, as it appears in substituted working. */
     public static String quantity(double value, String unit) {
         String n = number(value, unit);

@@ -27,7 +27,7 @@ public final class TerminalSummary {
                     NumberFormatPolicy.number(c.dropPercent().value(), Units.PERCENT),
                     NumberFormatPolicy.number(c.cumulativePercent().value(), Units.PERCENT),
                     c.limitPercent() == null ? "—" : NumberFormatPolicy.number(c.limitPercent().value(), Units.PERCENT),
-                    c.pass() ? "PASS" : "FAIL ✗",
+                    c.pass() ? "PASS" : "FAIL ×",
                     c.pass() ? c.governingCheck() : failing});
         }
         int[] width = new int[rows.get(0).length];

@@ -1,0 +1,102 @@
+package org.feedernote.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import java.util.stream.Collectors;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+import org.feedernote.Version;
+import org.feedernote.calc.CircuitResult;
+import org.feedernote.calc.Engine;
+import org.feedernote.calc.Result;
+import org.feedernote.data.ReferenceData;
+import org.feedernote.input.Canonical;
+import org.feedernote.model.Installation;
+import org.feedernote.model.Status;
+import org.feedernote.report.NoteBuilder;
+import org.feedernote.report.NoteRenderer;
+import org.feedernote.report.view.NoteView;
+import org.feedernote.trace.TraceJson;
+
+@Command(name = "note", mixinStandardHelpOptions = true,
+        description = "Writes the worked, stamped calculation note (PDF) and the trace (JSON) for a design input.",
+        exitCodeListHeading = "%nExit status:%n",
+        exitCodeList = {"0:written; every check passes", "1:written, stamped as not conforming (or refused: an issued note must conform)",
+                "2:the input or the command line is wrong; nothing written", "3:internal error (a bug; please report it)"})
+final class NoteCommand implements Callable<Integer> {
+    @Spec CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "INPUT", description = "design input, YAML or JSON (format 1)")
+    Path input;
+
+    @Option(names = {"-o", "--output"}, paramLabel = "DIR", description = "folder to write into (default: the current folder)")
+    Path output = Path.of(".");
+
+    @Option(names = "--templates", paramLabel = "DIR", description = "a folder with a copy of the note templates (note.ftlh, steps.ftlh, note.css) to use instead of the packaged ones")
+    Path templates;
+
+    @Override public Integer call() throws IOException {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        Installation inst = Loading.load(input, err);
+        if (inst == null) return ExitStatus.BAD_INPUT;
+        if (templates != null && !java.nio.file.Files.isRegularFile(templates.resolve("note.ftlh"))) {
+            err.println("feedernote: --templates " + templates + ": no note.ftlh in that folder");
+            return ExitStatus.BAD_INPUT;
+        }
+        ReferenceData data = ReferenceData.standard();
+        Result result;
+        try {
+            result = new Engine(data).run(inst);
+        } catch (Engine.UnsupportedSizing e) {
+            err.println(inst.sourceName() + ": circuit " + e.getMessage()
+                    + ": size_mm2: auto needs the capacity checks, which this version does not make yet; give a size");
+            return ExitStatus.BAD_INPUT;
+        }
+        if (inst.project().status() == Status.ISSUED && (!result.pass() || !result.notPerformed().isEmpty())) {
+            err.println("feedernote: refused: project.status is 'issued' but the design does not conform:");
+            for (CircuitResult c : result.circuits()) {
+                if (!c.pass()) {
+                    err.println("  " + c.id() + ": " + c.failing().stream().map(k -> k.name()).collect(Collectors.joining(", ")));
+                }
+            }
+            if (!result.notPerformed().isEmpty()) {
+                err.println("  not checked by this version: " + String.join(", ", result.notPerformed()));
+            }
+            err.println("A failing design is never issued. Correct the design, or set status to draft or for-review.");
+            return ExitStatus.FAIL;
+        }
+        String engine = Version.engine();
+        String fingerprint = Canonical.fingerprint(inst.canonicalJson(), engine, data.version());
+        String base = safe(inst.project().reference()) + "-" + safe(inst.project().revision());
+        Path pdf = output.resolve(base + ".pdf");
+        Path traceFile = output.resolve(base + ".trace.json");
+        String trace = TraceJson.write(result.trace(), engine, data.version(), fingerprint);
+        NoteView view = NoteBuilder.build(result, data, fingerprint, engine);
+        byte[] bytes = new NoteRenderer(templates).pdf(view, inst.project().date(),
+                new NoteRenderer.Attachment("input.canonical.json", "Design input (canonical form)",
+                        inst.canonicalJson().getBytes(StandardCharsets.UTF_8)),
+                new NoteRenderer.Attachment("trace.json", "Calculation trace", trace.getBytes(StandardCharsets.UTF_8)));
+        Files.writeAtomically(pdf, bytes);
+        Files.writeAtomically(traceFile, trace);
+        out.println("wrote " + pdf);
+        out.println("wrote " + traceFile);
+        out.println(result.pass()
+                ? (result.notPerformed().isEmpty() ? "every check passes" : "the checks made pass; not checked by this version: " + String.join(", ", result.notPerformed()))
+                : result.failingChecks() + " check(s) fail; the note is stamped DOES NOT CONFORM");
+        return result.pass() ? ExitStatus.PASS : ExitStatus.FAIL;
+    }
+
+    static String safe(String s) {
+        String cleaned = s.replaceAll("[^A-Za-z0-9._-]+", "-").replaceAll("^-+|-+$", "");
+        return cleaned.isEmpty() ? "note" : cleaned;
+    }
+}

@@ -1,0 +1,73 @@
+package org.feedernote.input;
+
+import java.math.BigDecimal;
+import java.nio.charset.StandardCharsets;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
+import java.util.Map;
+import java.util.TreeMap;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+
+/**
+ * The canonical form of a design input: JSON with keys sorted, numbers in their shortest exact
+ * decimal form, no comments or layout. Reformatting a file, or writing it as JSON instead of
+ * YAML, does not change it.
+ */
+public final class Canonical {
+    private static final ObjectMapper MAPPER = new ObjectMapper();
+
+    private Canonical() {}
+
+    public static String json(Node root) {
+        try {
+            return MAPPER.writeValueAsString(tree(root));
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    /** The canonical form as a Jackson tree, for comparisons. */
+    public static JsonNode tree(Node node) {
+        JsonNodeFactory f = JsonNodeFactory.instance;
+        if (node instanceof Node.Obj obj) {
+            ObjectNode o = f.objectNode();
+            Map<String, Node> sorted = new TreeMap<>();
+            obj.entries().values().forEach(e -> sorted.put(e.key(), e.value()));
+            sorted.forEach((k, v) -> o.set(k, tree(v)));
+            return o;
+        }
+        if (node instanceof Node.Arr arr) {
+            ArrayNode a = f.arrayNode();
+            arr.items().forEach(i -> a.add(tree(i)));
+            return a;
+        }
+        Object v = ((Node.Scalar) node).value();
+        if (v == null) return f.nullNode();
+        if (v instanceof Boolean b) return f.booleanNode(b);
+        if (v instanceof Long l) return f.numberNode(BigDecimal.valueOf(l));
+        if (v instanceof Double d) {
+            BigDecimal bd = new BigDecimal(Double.toString(d)).stripTrailingZeros();
+            return f.numberNode(bd.scale() < 0 ? bd.setScale(0) : bd);
+        }
+        return f.textNode(v.toString());
+    }
+
+    /** SHA-256 over the canonical input, the engine version and the reference-data version. */
+    public static String fingerprint(String canonicalJson, String engineVersion, String dataVersion) {
+        try {
+            MessageDigest md = MessageDigest.getInstance("SHA-256");
+            md.update(("feedernote-input\n" + canonicalJson + "\nengine " + engineVersion + "\ndata " + dataVersion + "\n")
+                    .getBytes(StandardCharsets.UTF_8));
+            return HexFormat.of().formatHex(md.digest());
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+}

@@ -1,0 +1,55 @@
+package org.feedernote.report;
+
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * Safe markup for the note: every piece of text is escaped first; only then are symbol
+ * subscripts (I_b → I<sub>b</sub>) marked up. Nothing from an input can inject markup.
+ */
+public final class Html {
+    /**
+     * A symbol with a subscript: a base of one or two letters (I, ΔU, θ) standing alone, then '_'
+     * and the subscript. Key paths such as length_m or basis.voltage_drop_method are left as
+     * they are because their base is part of a longer word.
+     */
+    private static final Pattern SUBSCRIPT =
+            Pattern.compile("(?<![\\p{L}\\p{N}_.\\[\\]])(\\p{L}{1,2}′?)_([\\p{L}\\p{N}]+(?:,[\\p{L}\\p{N}]+)*)");
+
+    private Html() {}
+
+    public static String escape(String text) {
+        StringBuilder b = new StringBuilder(text.length() + 16);
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            switch (c) {
+                case '<': b.append("&lt;"); break;
+                case '>': b.append("&gt;"); break;
+                case '&': b.append("&amp;"); break;
+                case '"': b.append("&quot;"); break;
+                case '\'': b.append("&#39;"); break;
+                default:
+                    if (c < 0x20 && c != '\n' && c != '\t') b.append(' ');
+                    else b.append(c);
+            }
+        }
+        return b.toString();
+    }
+
+    /** Escaped text with subscripts marked up. */
+    public static String math(String text) {
+        String escaped = escape(text);
+        Matcher m = SUBSCRIPT.matcher(escaped);
+        StringBuilder b = new StringBuilder();
+        while (m.find()) {
+            m.appendReplacement(b, Matcher.quoteReplacement(m.group(1) + "<sub>" + m.group(2) + "</sub>"));
+        }
+        m.appendTail(b);
+        return b.toString();
+    }
+
+    /** Plain text for the terminal and for tests: subscripts written inline. */
+    public static String plain(String symbol) {
+        return symbol;
+    }
+}

@@ -1,0 +1,309 @@
+package org.feedernote.report;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Collectors;
+
+import org.feedernote.calc.CheckResult;
+import org.feedernote.calc.CircuitResult;
+import org.feedernote.calc.Result;
+import org.feedernote.data.ReferenceData;
+import org.feedernote.expr.Printer;
+import org.feedernote.formula.Units;
+import org.feedernote.model.Basis;
+import org.feedernote.model.Installation;
+import org.feedernote.model.Project;
+import org.feedernote.model.Setting;
+import org.feedernote.model.Status;
+import org.feedernote.model.Token;
+import org.feedernote.report.view.*;
+import org.feedernote.trace.Q;
+import org.feedernote.trace.Section;
+import org.feedernote.trace.Step;
+import org.feedernote.trace.TableRef;
+import org.feedernote.trace.TraceWalk;
+
+/** Turns a result and its trace into the view the note's templates lay out. */
+public final class NoteBuilder {
+    /** Document identifiers such as "IEC 60364-5-52:2009" or "BS 7671:2018" inside a reference. */
+    static final Pattern DOCUMENT = Pattern.compile("\\b(IEC|BS|EN|ISO|IEEE)\\s+[0-9][0-9A-Za-z\\-]*(?::\\d{4})?");
+
+    public static final List<String> CAUTIONS = List.of(
+            "This note supports, and does not replace, the judgement of a competent, licensed person, who must review and sign it before it is relied on.",
+            "The applicable local wiring code and the manufacturer's data for the cables and devices actually installed govern wherever they differ from the values used here.",
+            "Verify site conditions — route lengths, installation methods, grouping, ambient temperatures, and the supply's fault level and loop impedance — before construction and again at commissioning.",
+            "Tabulated values marked \u201cfrom memory\u201d in Appendix A were recalled from the published standards; check them against the current edition before relying on them.");
+
+    private NoteBuilder() {}
+
+    public static NoteView build(Result result, ReferenceData data, String fingerprint, String engineVersion) {
+        Installation inst = result.input();
+        Project p = inst.project();
+        int failing = result.failingChecks();
+        int checks = result.circuits().stream().mapToInt(c -> c.checks().size()).sum();
+        boolean complete = result.notPerformed().isEmpty();
+        String verdict;
+        String detail;
+        if (failing > 0) {
+            verdict = "DOES NOT CONFORM";
+            detail = failing + (failing == 1 ? " check fails" : " checks fail") + " — see the summary schedule";
+        } else if (!complete) {
+            verdict = "NOT SHOWN TO CONFORM";
+            detail = "the checks made pass, but " + result.notPerformed().size() + " kinds of check are not made by this version";
+        } else {
+            verdict = "CONFORMS";
+            detail = "all " + checks + " checks pass";
+        }
+        CoverView cover = new CoverView(p.title(), p.reference(), p.revision(), p.date(), p.client(), statusLabel(p.status()),
+                verdict, detail, failing == 0 && complete,
+                List.of(new CoverView.Signature("Prepared", p.preparedBy()), new CoverView.Signature("Checked", p.checkedBy()),
+                        new CoverView.Signature("Approved", p.approvedBy())),
+                p.revisions().stream().map(r -> new CoverView.RevisionRow(r.revision(), r.date(), r.description())).toList(),
+                result.notPerformed(), result.circuits().size(), checks);
+
+        Map<String, String> circuitSection = new LinkedHashMap<>();
+        List<SectionView> sections = new ArrayList<>();
+        int n = 3;
+        Map<String, Step> index = new java.util.HashMap<>();
+        for (Step s : TraceWalk.steps(result.trace())) index.put(s.id(), s);
+        for (Section s : result.trace().sections()) {
+            String number = Integer.toString(n++);
+            circuitSection.put(s.id(), number);
+            sections.add(section(s, number, !s.id().equals("supply"), index));
+        }
+
+        List<SummaryRow> summary = new ArrayList<>();
+        for (CircuitResult c : result.circuits()) summary.add(summaryRow(c, circuitSection.get(c.id())));
+
+        List<Step> steps = TraceWalk.steps(result.trace());
+        Set<String> documents = new TreeSet<>();
+        Set<String> other = new TreeSet<>();
+        Map<String, TableRef> tables = new LinkedHashMap<>();
+        for (Step s : steps) {
+            if (s instanceof Step.Lookup l) tables.putIfAbsent(l.table().id(), l.table());
+            String ref = s.reference() == null ? "" : s.reference();
+            Matcher m = DOCUMENT.matcher(ref);
+            boolean any = false;
+            while (m.find()) {
+                documents.add(m.group());
+                any = true;
+            }
+            if (!any && !ref.isEmpty()) other.add(ref);
+        }
+        for (String standard : standards()) {
+            Matcher m = DOCUMENT.matcher(standard);
+            while (m.find()) documents.add(m.group());
+        }
+        List<SourceView> docs = documents.stream().map(d -> new SourceView(d, documentTitle(d), false)).toList();
+        List<SourceView> tableViews = tables.values().stream()
+                .map(t -> new SourceView(t.citation(), t.title() + (t.notes().isEmpty() ? "" : ". " + t.notes()), t.fromMemory()))
+                .toList();
+        List<SourceView> others = other.stream().map(o -> new SourceView(o, "", false)).toList();
+
+        List<String> listing = List.of(inst.sourceText().replace("\r\n", "\n").split("\n", -1));
+        if (!listing.isEmpty() && listing.get(listing.size() - 1).isEmpty()) listing = listing.subList(0, listing.size() - 1);
+        String shortPrint = fingerprint.substring(0, 12);
+        String running = p.title() + " · " + p.reference() + " rev " + p.revision();
+        return new NoteView(cover, basis(inst), standards(), CAUTIONS, assumptions(), summary, sections, docs, tableViews, others,
+                listing, fileName(inst.sourceName()), fingerprint, shortPrint, p.status() == Status.DRAFT, engineVersion,
+                data.version(), running);
+    }
+
+    static String fileName(String path) {
+        int slash = Math.max(path.lastIndexOf('/'), path.lastIndexOf('\\'));
+        return slash < 0 ? path : path.substring(slash + 1);
+    }
+
+    public static String statusLabel(Status s) {
+        return s.token().replace('-', ' ').toUpperCase(Locale.ROOT);
+    }
+
+    static List<String> standards() {
+        return List.of(
+                "IEC 60364-4-41:2005 — Protection for safety: protection against electric shock",
+                "IEC 60364-4-43:2008 — Protection for safety: protection against overcurrent",
+                "IEC 60364-5-52:2009 — Selection and erection: wiring systems (current-carrying capacity, voltage drop, Annex G)",
+                "IEC 60228:2004 — Conductors of insulated cables",
+                "IEC 60287-1-1:2006 — Electric cables: calculation of the current rating (resistance, skin and proximity effect)",
+                "IEC 60502-1:2004 — Power cables with extruded insulation, 1 kV (dimensions used for reactance)",
+                "BS 7671:2018 Appendix 4 — voltage drop in mV/A/m (the form of the figures; values here are derived)");
+    }
+
+    static String documentTitle(String doc) {
+        for (String s : standards()) if (s.startsWith(doc)) return s.substring(doc.length()).replaceFirst("^\\s*—\\s*", "");
+        return "";
+    }
+
+    static List<String> assumptions() {
+        return List.of(
+                "Values are kept unrounded throughout; the working shows them rounded for display, so a result may differ in its last digit from a recalculation with the displayed figures.",
+                "Voltage drops are referred to the nominal voltage: line-to-line for three-phase circuits, line-to-neutral for single-phase circuits; the same percentage either way for a balanced load.",
+                "Feeder design currents come from the complex sum (P and Q separately) of the circuits of the board they feed, per phase, times the board's diversity; the most loaded phase governs.",
+                "Cable reactance is derived from the geometry (round conductors of the nominal area, IEC 60502-1 insulation thickness); shaped conductors and armour change it slightly.");
+    }
+
+    static List<BasisRow> basis(Installation inst) {
+        Basis b = inst.basis();
+        List<BasisRow> rows = new ArrayList<>();
+        rows.add(new BasisRow("Nominal voltage", trim(inst.supply().lineVoltageV()) + " V line / " + trim(inst.supply().phaseVoltageV()) + " V phase", "given", "supply"));
+        rows.add(row("Frequency", b.frequencyHz(), " Hz", "IEC 60038"));
+        rows.add(new BasisRow("System earthing", b.earthing().value().token(), b.earthing().given() ? "given" : "default", "IEC 60364-1"));
+        if (b.limitsByKind()) {
+            String limits = b.voltageDropLimitsByKind().entrySet().stream()
+                    .map(e -> e.getKey() + " " + trim(e.getValue()) + " %").collect(Collectors.joining(", "));
+            rows.add(new BasisRow("Voltage-drop limits, origin to terminals", limits + " ('other' applies to kinds not listed)", "given", "IEC 60364-5-52:2009, 525"));
+        } else {
+            rows.add(row("Voltage-drop limit, origin to terminals", b.voltageDropLimitPercent(), " %", "IEC 60364-5-52:2009, 525 and Annex G"));
+        }
+        rows.add(new BasisRow("Voltage-drop form checked", b.voltageDropMethod().value().token(), b.voltageDropMethod().given() ? "given" : "default", "IEC 60364-5-52:2009, Annex G"));
+        rows.add(new BasisRow("Conductor temperature for the voltage drop", b.conductorTemperature().value().token(),
+                b.conductorTemperature().given() ? "given" : "default", "IEC 60364-5-52:2009, Table 52.1"));
+        rows.add(row("Ambient air temperature", b.ambientAirC(), " °C", "IEC 60364-5-52:2009, 523.1"));
+        rows.add(row("Ground temperature", b.ambientGroundC(), " °C", "IEC 60364-5-52:2009, 523.1"));
+        rows.add(row("Disconnection time, final circuits", b.disconnectionTimeFinalS(), " s", "IEC 60364-4-41:2005, Table 41.1"));
+        rows.add(row("Disconnection time, distribution circuits", b.disconnectionTimeDistributionS(), " s", "IEC 60364-4-41:2005, 411.3.2.3"));
+        rows.add(row("Motor-starting dip limit", b.motorStartingLimitPercent(), " %", "common practice, no source"));
+        return rows;
+    }
+
+    private static BasisRow row(String item, Setting<?> s, String unit, String basis) {
+        Object v = s.value();
+        String text = v instanceof Double d ? trim(d) + unit : (v instanceof Token t ? t.token() : String.valueOf(v));
+        return new BasisRow(item, text, s.given() ? "given" : "default", basis);
+    }
+
+    static String trim(double v) {
+        return NumberFormatPolicy.number(v, Units.M);
+    }
+
+    static SummaryRow summaryRow(CircuitResult c, String section) {
+        var circuit = c.circuit();
+        String fromTo = circuit.isFeeder() ? circuit.from() + " → " + circuit.to() : circuit.from();
+        String load = circuit.isFeeder() ? "feeder" : circuit.load().kind().token() + ", " + c.connection();
+        String cable = (circuit.cable().parallel() > 1 ? circuit.cable().parallel() + " × " : "")
+                + ReferenceData.sizeKey(circuit.cable().size().mm2()) + " / " + ReferenceData.sizeKey(circuit.cable().cpc().mm2());
+        String rating = circuit.device().ratingA() == null ? "—" : trim(circuit.device().ratingA());
+        String governing = c.pass() ? c.governingCheck()
+                : c.failing().stream().map(CheckResult::name).collect(Collectors.joining(", "));
+        return new SummaryRow(c.id(), fromTo, load, fmt(c.designCurrent()), rating, cable, fmt(c.dropPercent()),
+                fmt(c.cumulativePercent()), c.limitPercent() == null ? "—" : fmt(c.limitPercent()),
+                c.pass() ? "PASS" : "FAIL", c.pass(), governing, section);
+    }
+
+    static String fmt(Q q) {
+        return NumberFormatPolicy.number(q.value(), q.unit());
+    }
+
+    // ---------------- worked steps ----------------
+
+    static SectionView section(Section s, String number, boolean newPage, Map<String, Step> index) {
+        List<StepView> steps = new ArrayList<>();
+        List<SectionView> subs = new ArrayList<>();
+        int i = 1;
+        for (Step step : s.steps()) steps.add(step(step, number + "." + i++, index));
+        for (Section sub : s.sections()) subs.add(section(sub, number + "." + i++, false, index));
+        return new SectionView(number, "s-" + number, s.title(), s.subtitle(), newPage, steps, subs);
+    }
+
+    static String valueHtml(double value, String unit) {
+        String text = NumberFormatPolicy.quantity(value, unit);
+        return Html.math(value < 0 ? "(" + text + ")" : text);
+    }
+
+    /** A bound value at its display precision; a value the designer gave is shown as given. */
+    static String boundHtml(Q q, Map<String, Step> index) {
+        if (index.get(q.id()) instanceof Step.Input) {
+            String text = NumberFormatPolicy.given(q.value(), q.unit());
+            return Html.math(q.value() < 0 ? "(" + text + ")" : text);
+        }
+        return valueHtml(q.value(), q.unit());
+    }
+
+    static StepView step(Step step, String number, Map<String, Step> index) {
+        if (step instanceof Step.Formula f) {
+            Map<String, Q> bound = new LinkedHashMap<>();
+            f.bindings().forEach(b -> bound.put(b.var().key(), b.q()));
+            String symbolic = Html.math(f.symbol()) + " = " + Html.math(Printer.symbolic(f.expr()));
+            String substituted = "= " + Printer.substituted(f.expr(), v -> {
+                Q q = bound.get(v.key());
+                return "\u0001" + boundHtml(q, index) + "\u0002";
+            });
+            substituted = unwrapMarked(substituted);
+            String result = "= " + valueHtml(f.value(), f.unit());
+            return view(number, "formula", f.title(), f.form(), symbolic, substituted, result, f.reference(), "", "", "", true);
+        }
+        if (step instanceof Step.Input in) {
+            String origin = switch (in.origin()) {
+                case GIVEN -> "design input, " + in.keyPath();
+                case DEFAULT -> "default (" + in.keyPath() + " not given): " + in.reference();
+                case DERIVED -> in.reference();
+            };
+            return view(number, "input", in.title(), "", Html.math(in.symbol()) + " = " + Html.math(NumberFormatPolicy.given(in.value(), in.unit())),
+                    "", "", origin, "", "", "", true);
+        }
+        if (step instanceof Step.Lookup l) {
+            String source = l.table().citation() + " — " + l.row() + ", " + l.column() + (l.table().fromMemory() ? " (from memory)" : "");
+            return view(number, "lookup", l.title(), "", Html.math(l.symbol()) + " = " + valueHtml(l.value(), l.unit()),
+                    "", "", source, "", "", "", true);
+        }
+        if (step instanceof Step.Factor fa) {
+            return view(number, "factor", fa.title(), "", Html.math(fa.symbol()) + " = " + valueHtml(fa.value(), ""),
+                    "", "", fa.reference(), fa.reason(), "", "", true);
+        }
+        if (step instanceof Step.Check c) {
+            String line = Html.math(c.value().symbol()) + " = " + valueHtml(c.value().value(), c.value().unit()) + " " + Html.escape(c.comparison())
+                    + " " + valueHtml(c.limit().value(), c.limit().unit()) + " = " + Html.math(c.limit().symbol());
+            return view(number, "check", c.title(), "limit " + NumberFormatPolicy.quantity(c.limit().value(), c.limit().unit()),
+                    line, "", "", c.reference(), "", "", "", c.pass());
+        }
+        if (step instanceof Step.Decision d) {
+            return view(number, "decision", d.title(), "", "", "", "", d.reference(), d.because(), d.outcome(), "", true);
+        }
+        Step.Note note = (Step.Note) step;
+        return view(number, "note", note.title(), "", "", "", "", note.reference(), "", "", note.text(), true);
+    }
+
+    /** Every text field of a step view is escaped, with symbol subscripts marked up. */
+    private static StepView view(String number, String kind, String title, String form, String symbolic, String substituted,
+                                 String result, String source, String because, String outcome, String text, boolean pass) {
+        return new StepView(number, kind, Html.math(title), Html.math(form), symbolic, substituted, result, Html.math(source),
+                Html.math(because), Html.math(outcome), Html.math(text), pass);
+    }
+
+    /**
+     * The printer works on plain text; values were inserted as pre-escaped markup between marker
+     * characters. Escape everything outside the markers, keep what is inside.
+     */
+    static String unwrapMarked(String text) {
+        StringBuilder out = new StringBuilder();
+        int i = 0;
+        while (i < text.length()) {
+            int start = text.indexOf('\u0001', i);
+            if (start < 0) {
+                out.append(Html.math(text.substring(i)));
+                break;
+            }
+            out.append(Html.math(text.substring(i, start)));
+            int end = text.indexOf('\u0002', start);
+            out.append(text, start + 1, end);
+            i = end + 1;
+        }
+        return out.toString();
+    }
+
+    /** Every document identifier a reference string names (for tests of the sources appendix). */
+    public static Set<String> documentsIn(String reference) {
+        Set<String> out = new LinkedHashSet<>();
+        Matcher m = DOCUMENT.matcher(reference == null ? "" : reference);
+        while (m.find()) out.add(m.group());
+        return out;
+    }
+}
