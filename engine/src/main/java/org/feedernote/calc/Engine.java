@@ -12,7 +12,10 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
+import org.feedernote.data.CapacityData;
+import org.feedernote.data.DataGapException;
 import org.feedernote.data.ReferenceData;
+import org.feedernote.formula.CapacityFormulas;
 import org.feedernote.expr.Expr;
 import org.feedernote.expr.Var;
 import org.feedernote.formula.DemandFormulas;
@@ -33,15 +36,16 @@ import org.feedernote.trace.TraceRecorder;
  */
 public final class Engine {
     /** Contract checks that later capabilities add; reported so that nobody reads a partial result as complete. */
-    static final List<String> NOT_YET = List.of("capacity", "overload", "disconnection", "short-circuit",
-            "protective-conductor", "breaking-capacity");
+    static final List<String> NOT_YET = List.of("disconnection", "short-circuit", "protective-conductor", "breaking-capacity");
 
     private final ReferenceData data;
     private final ImpedanceCalc impedance;
+    private final CapacityData capacityData;
 
     public Engine(ReferenceData data) {
         this.data = data;
         this.impedance = new ImpedanceCalc(data);
+        this.capacityData = new CapacityData(data);
     }
 
     public Result run(Installation inst) {
@@ -52,7 +56,7 @@ public final class Engine {
     }
 
     /** The state of one calculation; discarded when it returns. */
-    private final class Run {
+    final class Run {
         final Installation inst;
         final TraceRecorder root;
         final Map<String, Board> boards = new LinkedHashMap<>();
@@ -69,8 +73,8 @@ public final class Engine {
         final Map<String, String> connection = new HashMap<>();
         final Map<String, Q> boardDrop = new HashMap<>();
         final Map<String, CircuitResult> results = new HashMap<>();
-        final Map<String, ImpedanceResult> feederImpedance = new HashMap<>();
-        final Map<String, Q> lengths = new HashMap<>();
+        final Map<String, Circuit> originals = new HashMap<>();
+
         Q u;
         Q u0;
         Q f;
@@ -102,12 +106,20 @@ public final class Engine {
             Q zero = Given.derived(supplyTrace, "origin/dU", "Voltage drop at the origin", "ΔU", 0, Units.PERCENT,
                     "the origin is the reference point of the cumulative drop");
             boardDrop.put(boardOrder.get(0), zero);
-            for (String b : boardOrder) {
-                for (Circuit c : outgoing.getOrDefault(b, List.of())) circuit(c);
+            Sizing sizing = new Sizing(this);
+            Map<String, Circuit> sized = sizing.run();
+            for (Circuit original : order()) {
+                Circuit c = sized.get(original.id());
+                Trace ct = circuitTrace.get(c.id());
+                sizing.record(ct, original, c);
+                CircuitResult r = evaluate(c, ct, results);
+                results.put(c.id(), r.withGoverning(sizing.governing(c.id(), r)));
+                if (c.isFeeder()) boardDrop.put(c.to(), relabel(r.cumulativePercent(), "ΔU(" + c.to() + ")"));
             }
         }
 
         void topology() {
+            for (Circuit c : inst.circuits()) originals.put(c.id(), c);
             for (Board b : inst.boards()) boards.put(b.id(), b);
             for (Circuit c : inst.circuits()) {
                 outgoing.computeIfAbsent(c.from(), k -> new ArrayList<>()).add(c);
@@ -302,7 +314,7 @@ public final class Engine {
                 String ph = "L" + (k + 1);
                 Q pk = p[k] != null ? p[k] : zero(t, id + "/P0_" + ph, "P_" + ph, Units.KW);
                 Q qk = q[k] != null ? q[k] : zero(t, id + "/Q0_" + ph, "Q_" + ph, Units.KVAR);
-                Q sk = DemandFormulas.APPARENT.as("S_" + ph).eval(t, id + "/S_" + ph, ph, bind(DemandFormulas.P, pk), bind(DemandFormulas.Q, qk));
+                Q sk = DemandFormulas.APPARENT.as(su[k] != null ? "S_pq," + ph : "S_" + ph).eval(t, id + "/S_" + ph, ph, bind(DemandFormulas.P, pk), bind(DemandFormulas.Q, qk));
                 if (su[k] != null) {
                     sk = DemandFormulas.sum("apparent-with-unknown", "Apparent power on " + ph + " with loads of unknown power factor",
                             "S_" + ph, Units.KVA, List.of(var("a", sk), var("b", su[k])),
@@ -398,116 +410,246 @@ public final class Engine {
             return f.eval(t, id, "", bindings.toArray(new Step.Binding[0]));
         }
 
-        // ---------------- impedance, drop and checks ----------------
+        // ---------------- one circuit: device, capacity, impedance, drop, checks ----------------
 
-        void circuit(Circuit c) {
-            Trace ct = circuitTrace.get(c.id());
+        /** Circuits in the order they are calculated: board by board from the origin. */
+        List<Circuit> order() {
+            List<Circuit> out = new ArrayList<>();
+            for (String b : boardOrder) out.addAll(outgoing.getOrDefault(b, List.of()));
+            return out;
+        }
+
+        /** The feeders from the origin down to the board a circuit starts at, origin first. */
+        List<Circuit> pathTo(String board) {
+            List<Circuit> path = new ArrayList<>();
+            while (feederOf.containsKey(board)) {
+                Circuit f = feederOf.get(board);
+                path.add(0, f);
+                board = f.from();
+            }
+            return path;
+        }
+
+        /**
+         * Calculates one circuit with fixed sizes. done holds the results of the upstream feeders.
+         * With a no-op trace this is the cheap evaluation the sizing loop uses.
+         */
+        CircuitResult evaluate(Circuit c, Trace ct, Map<String, CircuitResult> done) {
+            try {
+                return evaluateUnchecked(c, ct, done);
+            } catch (DataGapException e) {
+                if (e.located()) throw e;
+                throw new DataGapException(c.where().text() + ": " + c.where().path() + " (" + c.id() + "): " + e.getMessage(), true);
+            }
+        }
+
+        private CircuitResult evaluateUnchecked(Circuit c, Trace ct, Map<String, CircuitResult> done) {
             int phases = c.isFeeder() ? 3 : c.load().phases();
             Q ib = designCurrent.get(c.id());
             Q pf = powerFactor.get(c.id());
-            Trace zt = ct.section(c.id() + "/z", "Cable impedance", describeCable(c.cable()));
-            Q theta = temperature(zt, c, ib);
-            if (c.cable().size().auto()) {
-                throw new UnsupportedSizing(c.id());
-            }
-            ImpedanceResult z = impedance.impedance(zt, c.id() + "/z", c.cable(), theta, f, phases);
-            if (c.isFeeder()) feederImpedance.put(c.id(), z);
+            String id = c.id();
 
-            Trace vt = ct.section(c.id() + "/vd", "Voltage drop", phases == 3 ? "three-phase, referred to U" : "single-phase, referred to U0");
-            String id = c.id() + "/vd";
-            Q length = Given.input(vt, id + "/L", "Route length", "L", c.lengthM(), Units.M, c.where().path() + ".length_m");
-            lengths.put(c.id(), length);
+            Trace dt = ct.section(id + "/dev", "Protective device", describeDevice(c.device()));
+            Q in = c.device().ratingA() != null
+                    ? Given.input(dt, id + "/dev/I_n", "Rated current of the device", "I_n", c.device().ratingA(), Units.A,
+                    c.where().path() + ".device.rating_a")
+                    : Given.lookupUsing(dt, capacityData.ratingAtLeast(id + "/dev/I_n", c.device().kind(), ib.value()), List.of(ib.id()));
+            Q k2 = Given.lookup(dt, capacityData.k2(id + "/dev/k2", c.device().kind()));
+            Q i2 = CapacityFormulas.CONVENTIONAL_TRIPPING.eval(dt, id + "/dev/I_2", "", bind(CapacityFormulas.K2, k2),
+                    bind(CapacityFormulas.I_N, in));
+
+            Trace kt = ct.section(id + "/cap", "Current-carrying capacity", describeConditions(c));
+            Capacity cap = capacity(kt, c, phases, ib);
+
+            List<CheckResult> checks = new ArrayList<>();
+            Q demand = cap.neutralDesign() != null ? cap.neutralDesign() : ib;
+            checks.add(capacityCheck(kt, id + "/cap/check", demand, in, cap.iz()));
+            Q limit145 = CapacityFormulas.OVERLOAD_LIMIT.eval(kt, id + "/cap/1.45Iz", "", bind(CapacityFormulas.I_Z, cap.iz()));
+            checks.add(check(kt, id + "/cap/overload", "overload", "Overload: I_2 ≤ 1.45 · I_z", relabel(i2, "I_2"), limit145,
+                    "IEC 60364-4-43:2008, 433.1"));
+
+            Trace zt = ct.section(id + "/z", "Cable impedance", describeCable(c.cable()));
+            Q theta = temperature(zt, c, ib, cap.iz());
+            ImpedanceResult z = impedance.impedance(zt, id + "/z", c.cable(), theta, f, phases);
+
+            Trace vt = ct.section(id + "/vd", "Voltage drop", phases == 3 ? "three-phase, referred to U" : "single-phase, referred to U_0");
+            String vid = id + "/vd";
+            Q length = Given.input(vt, vid + "/L", "Route length", "L", c.lengthM(), Units.M, c.where().path() + ".length_m");
             Q un = Given.alias(phases == 3 ? u.id() : u0.id(), "U_n", phases == 3 ? u : u0);
             Q dropV;
-            Q dropExact = null;
             Q sin = null;
             if (pf != null) {
-                sin = VoltageDropFormulas.SIN_FROM_COS.eval(vt, id + "/sin_phi", "", bind(VoltageDropFormulas.COS_PHI, pf));
-                dropV = VoltageDropFormulas.APPROXIMATE.eval(vt, id + "/dU", "power factor known",
+                sin = VoltageDropFormulas.SIN_FROM_COS.eval(vt, vid + "/sin_phi", "", bind(VoltageDropFormulas.COS_PHI, pf));
+                dropV = VoltageDropFormulas.APPROXIMATE.eval(vt, vid + "/dU", "power factor known",
                         bind(VoltageDropFormulas.R, z.r()), bind(VoltageDropFormulas.X, z.x()), bind(VoltageDropFormulas.COS_PHI, pf),
                         bind(VoltageDropFormulas.SIN_PHI, sin), bind(VoltageDropFormulas.I, ib), bind(VoltageDropFormulas.L, length));
             } else {
-                dropV = VoltageDropFormulas.UNKNOWN_POWER_FACTOR.eval(vt, id + "/dU", "power factor unknown",
+                dropV = VoltageDropFormulas.UNKNOWN_POWER_FACTOR.eval(vt, vid + "/dU", "power factor unknown",
                         bind(VoltageDropFormulas.Z, z.z()), bind(VoltageDropFormulas.I, ib), bind(VoltageDropFormulas.L, length));
             }
-            Q dropPct = VoltageDropFormulas.PERCENT_OF_NOMINAL.eval(vt, id + "/dU_pct", "",
+            Q dropPct = VoltageDropFormulas.PERCENT_OF_NOMINAL.eval(vt, vid + "/dU_pct", "",
                     bind(VoltageDropFormulas.DU, dropV), bind(VoltageDropFormulas.U_N, un));
             Q dropExactPct = null;
             double quadrature = pf == null ? 0
                     : ib.value() * length.value() * (z.x().value() * pf.value() - z.r().value() * sin.value()) / 1000;
             boolean exactSolvable = pf != null && Math.abs(quadrature) < un.value();
             if (pf != null && !exactSolvable) {
-                Given.decision(vt, id + "/exact-none", "Voltage drop, exact phasor form",
+                Given.decision(vt, vid + "/exact-none", "Voltage drop, exact phasor form",
                         "the quadrature drop I_b·L·(x·cos φ − r·sin φ) exceeds U_n",
                         "the exact form has no solution: the cable cannot deliver I_b over this length", "circuit theory", dropPct.id());
             }
             if (exactSolvable) {
-                dropExact = VoltageDropFormulas.EXACT.as("ΔU_exact").eval(vt, id + "/dU_exact", "phasor form",
+                Q dropExact = VoltageDropFormulas.EXACT.as("ΔU_exact").eval(vt, vid + "/dU_exact", "phasor form",
                         bind(VoltageDropFormulas.U_N, un), bind(VoltageDropFormulas.R, z.r()), bind(VoltageDropFormulas.X, z.x()),
                         bind(VoltageDropFormulas.COS_PHI, pf), bind(VoltageDropFormulas.SIN_PHI, sin),
                         bind(VoltageDropFormulas.I, ib), bind(VoltageDropFormulas.L, length));
-                dropExactPct = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.as("ΔU_exact").eval(vt, id + "/dU_exact_pct", "exact form",
+                dropExactPct = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.as("ΔU_exact").eval(vt, vid + "/dU_exact_pct", "exact form",
                         bind(VoltageDropFormulas.DU, relabel(dropExact, "ΔU")), bind(VoltageDropFormulas.U_N, un)), "ΔU_exact");
             }
-            Q governing = dropPct;
+            boolean exactGoverns = inst.basis().voltageDropMethod().value() == DropMethod.EXACT && dropExactPct != null;
             if (inst.basis().voltageDropMethod().value() == DropMethod.EXACT) {
-                if (dropExactPct != null) {
-                    governing = dropExactPct;
-                    Given.decision(vt, id + "/method", "Voltage-drop form checked", "basis.voltage_drop_method = exact",
-                            "the exact phasor form governs", "design input", dropExactPct.id());
-                } else {
-                    Given.decision(vt, id + "/method", "Voltage-drop form checked",
-                            "basis.voltage_drop_method = exact, but the power factor is unknown",
-                            "the z form governs (the exact form needs the phase angle)", "design input", dropPct.id());
-                }
+                Given.decision(vt, vid + "/method", "Voltage-drop form checked", "basis.voltage_drop_method = exact"
+                                + (dropExactPct == null ? ", but the exact form is not available" : ""),
+                        dropExactPct == null ? "the approximate form governs" : "the exact phasor form governs",
+                        "design input", (dropExactPct == null ? dropPct : dropExactPct).id());
             } else {
-                Given.decision(vt, id + "/method", "Voltage-drop form checked",
+                Given.decision(vt, vid + "/method", "Voltage-drop form checked",
                         "basis.voltage_drop_method = approximate" + (inst.basis().voltageDropMethod().given() ? "" : " (default)"),
                         "the approximate form governs" + (dropExactPct != null ? "; the exact form is shown for comparison" : ""),
-                        "IEC 60364-5-52:2009, Annex G", governing.id());
+                        "IEC 60364-5-52:2009, Annex G", dropPct.id());
             }
-            governing = relabel(governing, "ΔU(" + c.id() + ")");
-
-            Q upstream = boardDrop.get(c.from());
-            Q cumulative = cumulative(vt, c, upstream, governing);
-            List<CheckResult> checks = new ArrayList<>();
+            Q own = relabel(exactGoverns ? dropExactPct : dropPct, "ΔU(" + id + ")");
+            Q cumulative = cumulative(vt, c, own, done);
             Q limit = null;
             Q dip = null;
             if (c.isFeeder()) {
-                boardDrop.put(c.to(), relabel(cumulative, "ΔU(" + c.to() + ")"));
-                Given.note(vt, id + "/board", "Cumulative drop at board " + c.to(),
+                Given.note(vt, vid + "/board", "Cumulative drop at board " + c.to(),
                         "Checked against the limit at the terminals of each load supplied from " + c.to() + ".", "");
             } else {
                 limit = limit(vt, c);
-                checks.add(check(vt, id + "/check", "voltage-drop", "Voltage drop, origin to terminals", cumulative, limit,
-                        limitReference(c)));
+                checks.add(check(vt, vid + "/check", "voltage-drop", "Voltage drop, origin to terminals", cumulative, limit,
+                        "IEC 60364-5-52:2009, 525 and Annex G"));
                 if (c.load().kind() == LoadKind.MOTOR && c.load().startingCurrentMultiple() != null) {
-                    Trace st = ct.section(c.id() + "/st", "Motor starting", "voltage dip at the motor terminals while it starts");
-                    dip = starting(st, c, z, ib, length, un);
-                    Q stLimit = Given.setting(st, c.id() + "/st/limit", "Limit of the starting dip", "ΔU_st,max",
+                    Trace st = ct.section(id + "/st", "Motor starting", "voltage dip at the motor terminals while it starts");
+                    dip = starting(st, c, z, ib, length, un, done);
+                    Q stLimit = Given.setting(st, id + "/st/limit", "Limit of the starting dip", "ΔU_st,max",
                             inst.basis().motorStartingLimitPercent(), Units.PERCENT, "default of this program (common practice, no source)");
-                    checks.add(check(st, c.id() + "/st/check", "motor-starting", "Voltage dip while the motor starts", dip, stLimit,
+                    checks.add(check(st, id + "/st/check", "motor-starting", "Voltage dip while the motor starts", dip, stLimit,
                             "common practice, no source"));
                 } else if (c.load().kind() == LoadKind.MOTOR) {
-                    Given.note(vt, c.id() + "/st/none", "Motor starting",
+                    Given.note(vt, id + "/st/none", "Motor starting",
                             "No starting_current_multiple is given: the starting dip is not checked.", "");
                 }
             }
-            String governingCheck = checks.stream().max(Comparator.comparingDouble(CheckResult::utilisation))
-                    .map(CheckResult::name).orElse("voltage-drop");
-            results.put(c.id(), new CircuitResult(c.id(), c, phases, connection.getOrDefault(c.id(), "L1 L2 L3"), ib, pf,
-                    c.isFeeder() ? neutral.get(c.to()) : null, z, dropV, dropPct, dropExactPct, cumulative, limit, dip,
-                    List.copyOf(checks), governingCheck));
+            String governing = closestToLimit(checks);
+            return new CircuitResult(id, c, phases, connection.getOrDefault(id, "L1 L2 L3"), ib, pf,
+                    c.isFeeder() ? neutral.get(c.to()) : null, in, i2, cap.it(), cap.factor(), cap.iz(), z, length, dropV, dropPct,
+                    dropExactPct, cumulative, limit, dip, List.copyOf(checks), governing);
         }
 
-        Q temperature(Trace t, Circuit c, Q ib) {
+        /** The check nearest its limit; on a tie, the one listed first. */
+        String closestToLimit(List<CheckResult> checks) {
+            CheckResult best = null;
+            for (CheckResult k : checks) if (best == null || k.utilisation() > best.utilisation() + 1e-9) best = k;
+            return best == null ? "voltage-drop" : best.name();
+        }
+
+        /** Tabulated capacity, the correction factors that apply, and I_z. */
+        record Capacity(Q it, Q factor, Q iz, Q neutralDesign) {}
+
+        Capacity capacity(Trace t, Circuit c, int phases, Q ib) {
+            String id = c.id() + "/cap";
+            Cable cable = c.cable();
+            Method method = c.conditions().method();
+            int loaded = phases == 3 ? 3 : 2;
+            Given.decision(t, id + "/loaded", "Loaded conductors", phases == 3 ? "three-phase circuit (neutral current not counted)"
+                    : "single-phase circuit: line and neutral", loaded + " loaded conductors", "IEC 60364-5-52:2009, 523.6");
+            Q it = Given.lookup(t, capacityData.tabulated(id + "/I_t", cable.insulation(), cable.conductor(), method, loaded,
+                    cable.type(), cable.formation(), cable.size().mm2()));
+            List<Q> factors = new ArrayList<>();
+            boolean ground = method == Method.D1 || method == Method.D2;
+            Setting<Double> amb = c.conditions().ambientC().given() ? c.conditions().ambientC()
+                    : (ground ? inst.basis().ambientGroundC() : inst.basis().ambientAirC());
+            Q thetaA = Given.setting(t, id + "/theta_a", ground ? "Ground temperature" : "Ambient air temperature", "θ_a", amb,
+                    Units.DEG_C, ground ? "IEC 60364-5-52:2009, reference ground temperature 20 °C" : "IEC 60364-5-52:2009, reference ambient 30 °C");
+            factors.add(Given.lookupUsing(t, ground ? capacityData.ambientGround(id + "/C_a", cable.insulation(), amb.value())
+                    : capacityData.ambientAir(id + "/C_a", cable.insulation(), amb.value()), List.of(thetaA.id())));
+            int n = c.conditions().groupedCircuits();
+            if (n > 1) {
+                factors.add(Given.lookup(t, capacityData.grouping(id + "/C_g", method, c.conditions().groupArrangement(), n)));
+            } else {
+                Given.decision(t, id + "/C_g", "Grouping", "grouped_circuits = 1" + (c.conditions().groupedCircuits() == 1 ? " (alone)" : ""),
+                        "no grouping factor", "IEC 60364-5-52:2009, Table B.52.17");
+            }
+            if (c.conditions().thermalInsulationMm() > 0) {
+                factors.add(Given.lookup(t, capacityData.thermalInsulation(id + "/C_i", c.conditions().thermalInsulationMm())));
+            }
+            if (ground) {
+                Q rho = Given.setting(t, id + "/rho", "Soil thermal resistivity", "ρ_T", c.conditions().soilResistivityKmW(), "K·m/W",
+                        "IEC 60364-5-52:2009, reference 2.5 K·m/W");
+                factors.add(Given.lookupUsing(t, capacityData.soil(id + "/C_s", method, rho.value()), List.of(rho.id())));
+            }
+            Q neutralDesign = null;
+            Double h = c.conditions().thirdHarmonicPercent();
+            boolean fourCore = cable.type() == CableType.MULTICORE && cable.cores() >= 4 && phases == 3;
+            if (h != null && h > 0 && fourCore) {
+                CapacityData.Harmonic band = capacityData.harmonic(id + "/C_h", h);
+                factors.add(Given.lookup(t, band.factor()));
+                if (band.neutralBasis()) {
+                    Q hq = Given.input(t, id + "/h", "Third-harmonic content", "h", h, Units.PERCENT,
+                            c.where().path() + ".installation.third_harmonic_percent");
+                    neutralDesign = CapacityFormulas.NEUTRAL_FROM_HARMONICS.eval(t, id + "/I_N", "size by the neutral current",
+                            bind(CapacityFormulas.H, hq), bind(CapacityFormulas.I_B, ib));
+                }
+            } else if (h != null && h > 0) {
+                Given.note(t, id + "/C_h", "Third-harmonic currents", "The harmonic reduction of IEC 60364-5-52 Annex E applies to four- and five-core cables of three-phase circuits only; not applied here.",
+                        "IEC 60364-5-52:2009, Annex E");
+            }
+            List<Var> vars = new ArrayList<>();
+            List<Step.Binding> bindings = new ArrayList<>();
+            for (int i = 0; i < factors.size(); i++) {
+                Var v = new Var("c" + i, factors.get(i).symbol(), Units.NONE);
+                vars.add(v);
+                bindings.add(bind(v, factors.get(i)));
+            }
+            Q product = CapacityFormulas.correctionProduct(vars).eval(t, id + "/C", "", bindings.toArray(new Step.Binding[0]));
+            Q iz;
+            if (cable.parallel() > 1) {
+                Q np = Given.derived(t, id + "/n", "Conductors in parallel per phase", "n", cable.parallel(), Units.NONE,
+                        "design input (cable.parallel)");
+                iz = CapacityFormulas.CAPACITY_PARALLEL.eval(t, id + "/I_z", "", bind(CapacityFormulas.N, np),
+                        bind(CapacityFormulas.I_T, it), bind(CapacityFormulas.C, product));
+            } else {
+                iz = CapacityFormulas.CAPACITY.eval(t, id + "/I_z", "", bind(CapacityFormulas.I_T, it), bind(CapacityFormulas.C, product));
+            }
+            return new Capacity(it, product, iz, neutralDesign);
+        }
+
+        /**
+         * Ib ≤ In ≤ Iz, reported with the contract's convention: value I_z against limit I_n, or,
+         * where I_b exceeds I_n, value I_n against limit I_b (the comparison that fails).
+         */
+        CheckResult capacityCheck(Trace t, String id, Q ib, Q in, Q iz) {
+            boolean first = ib.value() <= in.value() + 1e-9;
+            boolean second = in.value() <= iz.value() + 1e-9;
+            if (t.recording()) {
+                t.add(new Step.Check(id + "1", "Coordination: I_b ≤ I_n", "capacity", relabel(ib, ib.symbol()), "≤", relabel(in, "I_n"),
+                        first, "IEC 60364-4-43:2008, 433.1", List.of(ib.id(), in.id())));
+                t.add(new Step.Check(id + "2", "Coordination: I_n ≤ I_z", "capacity", relabel(in, "I_n"), "≤", relabel(iz, "I_z"),
+                        second, "IEC 60364-4-43:2008, 433.1", List.of(in.id(), iz.id())));
+            }
+            if (!first) return new CheckResult("capacity", "Ib ≤ In ≤ Iz", false, in.value(), ib.value(), Units.A, true, id + "1");
+            return new CheckResult("capacity", "Ib ≤ In ≤ Iz", second, iz.value(), in.value(), Units.A, true, id + "2");
+        }
+
+        Q temperature(Trace t, Circuit c, Q ib, Q iz) {
             String id = c.id() + "/z";
             Q thetaMax = Given.lookup(t, data.maxTemperature(id + "/theta_max", c.cable().insulation()));
             Setting<ConductorTemperature> setting = inst.basis().conductorTemperature();
-            if (setting.value() == ConductorTemperature.MAXIMUM || c.device().ratingA() == null) {
+            if (setting.value() == ConductorTemperature.MAXIMUM || ib.value() >= iz.value()) {
                 String because = setting.value() == ConductorTemperature.MAXIMUM
                         ? "basis.conductor_temperature = maximum" + (setting.given() ? "" : " (default)")
-                        : "basis.conductor_temperature = estimated, but the device rating is auto";
+                        : "basis.conductor_temperature = estimated, but I_b ≥ I_z";
                 Given.decision(t, id + "/theta", "Conductor temperature for the voltage drop", because,
                         "θ = θ_max of " + c.cable().insulation().token().toUpperCase(Locale.ROOT) + " = " + trim(thetaMax.value()) + " °C",
                         "IEC 60364-5-52:2009, Table 52.1", thetaMax.id());
@@ -517,32 +659,19 @@ public final class Engine {
             Setting<Double> amb = c.conditions().ambientC().given() ? c.conditions().ambientC()
                     : (ground ? inst.basis().ambientGroundC() : inst.basis().ambientAirC());
             Q thetaA = Given.setting(t, id + "/theta_a", ground ? "Ground temperature" : "Ambient air temperature", "θ_a",
-                    amb, Units.DEG_C, "IEC 60364-5-52:2009, 523.1 reference ambient (30 °C air, 20 °C ground)");
-            Q in = Given.input(t, id + "/I_n", "Rated current of the device", "I_n", c.device().ratingA(), Units.A,
-                    c.where().path() + ".device.rating_a");
-            Given.decision(t, id + "/theta_ref", "Reference current for the estimated temperature",
-                    "basis.conductor_temperature = estimated; the cable's capacity I_z is not yet calculated by this version",
-                    "I_z is taken as I_n, which is ≤ I_z when the cable is correctly protected, so the estimate is on the high (safe) side",
-                    "IEC 60364-4-43:2008, 433.1 (I_n ≤ I_z)", in.id());
-            Q theta = ImpedanceFormulas.ESTIMATED_TEMPERATURE.eval(t, id + "/theta", "estimated",
+                    amb, Units.DEG_C, "IEC 60364-5-52:2009, reference ambient");
+            return ImpedanceFormulas.ESTIMATED_TEMPERATURE.eval(t, id + "/theta", "estimated",
                     bind(ImpedanceFormulas.THETA_A, thetaA), bind(ImpedanceFormulas.THETA_MAX, relabel(thetaMax, "θ_max")),
-                    bind(ImpedanceFormulas.I_B, ib), bind(ImpedanceFormulas.I_REF, relabel(in, "I_n")));
-            return theta;
+                    bind(ImpedanceFormulas.I_B, ib), bind(ImpedanceFormulas.I_REF, relabel(iz, "I_z")));
         }
 
-        Q cumulative(Trace t, Circuit c, Q upstream, Q own) {
+        Q cumulative(Trace t, Circuit c, Q own, Map<String, CircuitResult> done) {
             List<Q> terms = new ArrayList<>();
-            List<String> path = new ArrayList<>();
-            String board = c.from();
-            while (feederOf.containsKey(board)) {
-                Circuit f = feederOf.get(board);
-                path.add(0, f.id());
-                board = f.from();
-            }
-            for (String fid : path) {
-                CircuitResult r = results.get(fid);
-                terms.add(relabel(r.dropExactPercent() != null && inst.basis().voltageDropMethod().value() == DropMethod.EXACT
-                        ? r.dropExactPercent() : r.dropPercent(), "ΔU(" + fid + ")"));
+            for (Circuit f : pathTo(c.from())) {
+                CircuitResult r = done.get(f.id());
+                Q used = r.dropExactPercent() != null && inst.basis().voltageDropMethod().value() == DropMethod.EXACT
+                        ? r.dropExactPercent() : r.dropPercent();
+                terms.add(relabel(used, "ΔU(" + f.id() + ")"));
             }
             terms.add(own);
             if (terms.size() == 1) {
@@ -574,11 +703,7 @@ public final class Engine {
                     Units.PERCENT, "default of this program: 4 % (IEC 60364-5-52:2009, Annex G, Table G.52.1, other uses, public supply)");
         }
 
-        String limitReference(Circuit c) {
-            return "IEC 60364-5-52:2009, 525 and Annex G";
-        }
-
-        Q starting(Trace t, Circuit c, ImpedanceResult z, Q ib, Q length, Q un) {
+        Q starting(Trace t, Circuit c, ImpedanceResult z, Q ib, Q length, Q un, Map<String, CircuitResult> done) {
             String id = c.id() + "/st";
             Q k = Given.input(t, id + "/k_st", "Starting current multiple", "k_st", c.load().startingCurrentMultiple(), Units.NONE,
                     c.where().path() + ".load.starting_current_multiple");
@@ -593,24 +718,16 @@ public final class Engine {
             Q own = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.as("ΔU_st").eval(t, id + "/dU_pct", "",
                     bind(VoltageDropFormulas.DU, relabel(du, "ΔU")), bind(VoltageDropFormulas.U_N, un)), "ΔU_st(" + c.id() + ")");
             List<Q> terms = new ArrayList<>();
-            String board = c.from();
-            List<Circuit> path = new ArrayList<>();
-            while (feederOf.containsKey(board)) {
-                Circuit f = feederOf.get(board);
-                path.add(0, f);
-                board = f.from();
-            }
             int phases = c.load().phases();
-            for (Circuit f : path) {
-                CircuitResult fr = results.get(f.id());
+            for (Circuit f : pathTo(c.from())) {
+                CircuitResult fr = done.get(f.id());
                 ImpedanceResult fz = phases == 3 ? fr.impedance()
                         : impedance.mvPerAm(t, id + "/" + f.id() + "/z", fr.impedance().theta(), fr.impedance().resistance(),
                         fr.impedance().reactance(), 1);
-                Q fl = lengths.get(f.id());
                 Q inc = VoltageDropFormulas.STARTING_INCREMENT.eval(t, id + "/" + f.id() + "/inc", "feeder " + f.id(),
                         bind(VoltageDropFormulas.R, fz.r()), bind(VoltageDropFormulas.X, fz.x()), bind(VoltageDropFormulas.COS_ST, cosSt),
                         bind(VoltageDropFormulas.SIN_ST, sinSt), bind(VoltageDropFormulas.I_ST, ist), bind(VoltageDropFormulas.I_B, ib),
-                        bind(VoltageDropFormulas.L, fl), bind(VoltageDropFormulas.U_N, un));
+                        bind(VoltageDropFormulas.L, fr.length()), bind(VoltageDropFormulas.U_N, un));
                 terms.add(relabel(fr.dropPercent(), "ΔU(" + f.id() + ")"));
                 terms.add(relabel(inc, "ΔU_st(" + f.id() + ")"));
             }
@@ -629,17 +746,41 @@ public final class Engine {
         }
 
         CheckResult check(Trace t, String id, String name, String title, Q value, Q limit, String reference) {
-            boolean pass = value.value() <= limit.value();
+            boolean pass = value.value() <= limit.value() + 1e-12;
             if (t.recording()) {
                 t.add(new Step.Check(id, title, name, value, "≤", limit, pass, reference, List.of(value.id(), limit.id())));
             }
             return new CheckResult(name, title, pass, value.value(), limit.value(), limit.unit(), false, id);
         }
 
+        String describeDevice(Device d) {
+            String kind = switch (d.kind()) {
+                case MCB -> "MCB" + (d.curve() == null ? "" : " type " + d.curve().token());
+                case RCBO -> "RCBO" + (d.curve() == null ? "" : " type " + d.curve().token());
+                case MCCB -> "MCCB";
+                case FUSE -> "gG fuse";
+            };
+            return kind + (d.ratingA() == null ? ", rating auto" : ", " + trim(d.ratingA()) + " A");
+        }
+
+        String describeConditions(Circuit c) {
+            Conditions k = c.conditions();
+            return "method " + k.method().token() + (k.groupedCircuits() > 1 ? ", grouped with " + (k.groupedCircuits() - 1)
+                    + " other circuit" + (k.groupedCircuits() > 2 ? "s" : "") + " (" + k.groupArrangement().token() + ")" : ", alone");
+        }
+
         String describeCable(Cable cable) {
             String size = (cable.parallel() > 1 ? cable.parallel() + " × " : "") + ReferenceData.sizeKey(cable.size().mm2()) + " mm²";
             String kind = cable.type() == CableType.MULTICORE ? cable.cores() + "-core" : "single-core, " + cable.formation().token();
             return size + " " + cable.conductor().token() + ", " + cable.insulation().token().toUpperCase(Locale.ROOT) + ", " + kind;
+        }
+
+        Circuit original(String id) {
+            return originals.get(id);
+        }
+
+        CapacityData capacityData() {
+            return capacityData;
         }
 
         List<BoardResult> boardResults() {
@@ -661,12 +802,5 @@ public final class Engine {
         String s = String.format(Locale.ROOT, "%.3f", v);
         s = s.replaceAll("0+$", "");
         return s.endsWith(".") ? s.substring(0, s.length() - 1) : s;
-    }
-
-    /** A size is 'auto' but this version cannot yet size cables (capacity checks are needed first). */
-    public static final class UnsupportedSizing extends RuntimeException {
-        public UnsupportedSizing(String circuit) {
-            super(circuit);
-        }
     }
 }

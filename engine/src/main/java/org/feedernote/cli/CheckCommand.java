@@ -43,14 +43,8 @@ final class CheckCommand implements Callable<Integer> {
         Installation inst = Loading.load(input, err);
         if (inst == null) return ExitStatus.BAD_INPUT;
         ReferenceData data = ReferenceData.standard();
-        Result result;
-        try {
-            result = new Engine(data).run(inst);
-        } catch (Engine.UnsupportedSizing e) {
-            err.println(inst.sourceName() + ": circuit " + e.getMessage()
-                    + ": size_mm2: auto needs the capacity checks, which this version does not make yet; give a size");
-            return ExitStatus.BAD_INPUT;
-        }
+        Result result = Loading.calculate(inst, data, err);
+        if (result == null) return ExitStatus.BAD_INPUT;
         if (trace != null) {
             try {
                 Files.writeAtomically(trace, TraceJson.write(result.trace(), Version.engine(), data.version(), ""));

@@ -4,6 +4,10 @@ import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
+import org.feedernote.calc.Engine;
+import org.feedernote.calc.Result;
+import org.feedernote.data.DataGapException;
+import org.feedernote.data.ReferenceData;
 import org.feedernote.input.InputError;
 import org.feedernote.input.InputException;
 import org.feedernote.input.InputReader;
@@ -12,6 +16,20 @@ import org.feedernote.model.Installation;
 /** Reads a design input for a command, printing every error to standard error. */
 final class Loading {
     private Loading() {}
+
+    /**
+     * Calculates the installation, or prints why the packaged tables cannot (a method or
+     * condition they do not cover) and returns null: that is a problem of the input, exit 2.
+     */
+    static Result calculate(Installation inst, ReferenceData data, PrintWriter err) {
+        try {
+            return new Engine(data).run(inst);
+        } catch (DataGapException e) {
+            err.println(e.located() ? e.getMessage() : inst.sourceName() + ": " + e.getMessage());
+            err.println("Nothing was written.");
+            return null;
+        }
+    }
 
     /** The installation, or null after the errors were printed. */
     static Installation load(Path input, PrintWriter err) {

@@ -53,14 +53,8 @@ final class NoteCommand implements Callable<Integer> {
             return ExitStatus.BAD_INPUT;
         }
         ReferenceData data = ReferenceData.standard();
-        Result result;
-        try {
-            result = new Engine(data).run(inst);
-        } catch (Engine.UnsupportedSizing e) {
-            err.println(inst.sourceName() + ": circuit " + e.getMessage()
-                    + ": size_mm2: auto needs the capacity checks, which this version does not make yet; give a size");
-            return ExitStatus.BAD_INPUT;
-        }
+        Result result = Loading.calculate(inst, data, err);
+        if (result == null) return ExitStatus.BAD_INPUT;
         if (inst.project().status() == Status.ISSUED && (!result.pass() || !result.notPerformed().isEmpty())) {
             err.println("feedernote: refused: project.status is 'issued' but the design does not conform:");
             for (CircuitResult c : result.circuits()) {

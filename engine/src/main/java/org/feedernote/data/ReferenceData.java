@@ -17,8 +17,12 @@ import org.feedernote.trace.TableRef;
  */
 public final class ReferenceData {
     static final List<String> TABLE_FILES = List.of("conductor-resistance.csv", "conductor-materials.csv",
-            "insulation-temperatures.csv", "insulation-thickness.csv");
+            "insulation-temperatures.csv", "insulation-thickness.csv", "capacity-pvc-2.csv", "capacity-pvc-3.csv",
+            "capacity-xlpe-2.csv", "capacity-xlpe-3.csv", "capacity-pvc-efg.csv", "capacity-xlpe-efg.csv",
+            "ambient-air.csv", "ambient-ground.csv", "grouping.csv", "grouping-ground.csv", "soil-resistivity.csv",
+            "thermal-insulation.csv", "harmonics.csv", "devices.csv");
 
+    private final java.util.Map<String, ReferenceTable> byFile = new java.util.LinkedHashMap<>();
     private final ReferenceTable resistance;
     private final ReferenceTable materials;
     private final ReferenceTable temperatures;
@@ -26,11 +30,18 @@ public final class ReferenceData {
     private final List<ReferenceTable> all;
 
     private ReferenceData() {
-        resistance = ReferenceTable.resource("conductor-resistance.csv");
-        materials = ReferenceTable.resource("conductor-materials.csv");
-        temperatures = ReferenceTable.resource("insulation-temperatures.csv");
-        thickness = ReferenceTable.resource("insulation-thickness.csv");
-        all = List.of(resistance, materials, temperatures, thickness);
+        for (String f : TABLE_FILES) byFile.put(f, ReferenceTable.resource(f));
+        resistance = byFile.get("conductor-resistance.csv");
+        materials = byFile.get("conductor-materials.csv");
+        temperatures = byFile.get("insulation-temperatures.csv");
+        thickness = byFile.get("insulation-thickness.csv");
+        all = List.copyOf(byFile.values());
+    }
+
+    ReferenceTable table(String file) {
+        ReferenceTable t = byFile.get(file);
+        if (t == null) throw new IllegalStateException("no reference table " + file);
+        return t;
     }
 
     private static final class Holder {

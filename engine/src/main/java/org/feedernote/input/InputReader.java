@@ -261,12 +261,35 @@ public final class InputReader {
             error(at(at(c, "cable"), "cores"), path + ".cable.cores",
                     "a feeder supplies a three-phase board: give a cable of 3, 4 or 5 cores or single-core cables (single-phase sub-boards are not supported yet)");
         }
+        if (cable != null && conditions != null) methodSuitsCable(at(c, "installation"), path + ".installation.method", conditions.method(), cable);
+        if (conditions != null) {
+            boolean ground = conditions.method() == Method.D1 || conditions.method() == Method.D2;
+            int limit = ground ? 6 : 20;
+            if (conditions.groupedCircuits() > limit) {
+                error(at(at(c, "installation"), "grouped_circuits"), path + ".installation.grouped_circuits",
+                        "IEC 60364-5-52 grouping tables go to " + limit + " circuits" + (ground ? " in the ground" : "")
+                                + "; found " + conditions.groupedCircuits() + " (split the group or give the manufacturer's rating)");
+            }
+        }
         if (id == null || from == null || length == null || cable == null || conditions == null || device == null
                 || (load == null && to == null)) {
             return null;
         }
         return new Circuit(id, str(c, "description", ""), from, to, load, phase, length, cable, conditions, device,
                 num(c, "design_current_a"), where(c, path));
+    }
+
+    private void methodSuitsCable(Node installation, String path, Method method, Cable cable) {
+        Node at = at(installation, "method");
+        if (method == Method.E && cable.type() != CableType.MULTICORE) {
+            error(at, path, "method E is a multicore cable in free air; single-core cables are method F (touching) or G (spaced)");
+        } else if ((method == Method.F || method == Method.G) && cable.type() != CableType.SINGLE_CORE) {
+            error(at, path, "method " + method.token() + " is for single-core cables; a multicore cable in free air is method E");
+        } else if (method == Method.F && cable.formation() == Formation.FLAT_SPACED) {
+            error(at, path, "method F is single-core cables touching; spaced cables (formation: flat-spaced) are method G");
+        } else if (method == Method.G && cable.formation() != null && cable.formation() != Formation.FLAT_SPACED) {
+            error(at, path, "method G is single-core cables spaced one diameter apart: give formation: flat-spaced, or method F for touching cables");
+        }
     }
 
     private SizeChoice size(Node node) {

@@ -218,9 +218,10 @@ public final class NoteBuilder {
         return Html.math(value < 0 ? "(" + text + ")" : text);
     }
 
-    /** A bound value at its display precision; a value the designer gave is shown as given. */
+    /** A bound value at its display precision; a given or tabulated value is shown as written. */
     static String boundHtml(Q q, Map<String, Step> index) {
-        if (index.get(q.id()) instanceof Step.Input) {
+        Step source = index.get(q.id());
+        if (source instanceof Step.Input || source instanceof Step.Lookup) {
             String text = NumberFormatPolicy.given(q.value(), q.unit());
             return Html.math(q.value() < 0 ? "(" + text + ")" : text);
         }
@@ -251,7 +252,7 @@ public final class NoteBuilder {
         }
         if (step instanceof Step.Lookup l) {
             String source = l.table().citation() + " — " + l.row() + ", " + l.column() + (l.table().fromMemory() ? " (from memory)" : "");
-            return view(number, "lookup", l.title(), "", Html.math(l.symbol()) + " = " + valueHtml(l.value(), l.unit()),
+            return view(number, "lookup", l.title(), "", Html.math(l.symbol()) + " = " + Html.math(NumberFormatPolicy.given(l.value(), l.unit())),
                     "", "", source, "", "", "", true);
         }
         if (step instanceof Step.Factor fa) {

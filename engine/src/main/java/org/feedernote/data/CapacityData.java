@@ -1,0 +1,184 @@
+package org.feedernote.data;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+
+import org.feedernote.model.Arrangement;
+import org.feedernote.model.CableType;
+import org.feedernote.model.Conductor;
+import org.feedernote.model.DeviceKind;
+import org.feedernote.model.Formation;
+import org.feedernote.model.Insulation;
+import org.feedernote.model.Method;
+import org.feedernote.trace.Step;
+import org.feedernote.trace.TableRef;
+
+/**
+ * Lookups for current-carrying capacity (IEC 60364-5-52 Annex B), its correction factors and the
+ * protective devices. Where a table is entered at the next higher row (ambient, grouping,
+ * resistivity, length), the step says so: that choice is on the safe side.
+ */
+public final class CapacityData {
+    private static final String NEXT_HIGHER = "next higher tabulated row (on the safe side)";
+    private final ReferenceData data;
+
+    public CapacityData(ReferenceData data) {
+        this.data = data;
+    }
+
+    /** The column of the capacity tables for a cable and method, or a data gap. */
+    public Step.Lookup tabulated(String id, Insulation insulation, Conductor conductor, Method method, int loaded,
+                                 CableType type, Formation formation, double size) {
+        String ins = insulation.token();
+        ReferenceTable table;
+        String column;
+        String label;
+        switch (method) {
+            case E:
+                table = data.table("capacity-" + ins + "-efg.csv");
+                column = conductor.token() + "_E" + loaded;
+                label = "method E, multicore, " + loaded + " loaded conductors";
+                break;
+            case F:
+                table = data.table("capacity-" + ins + "-efg.csv");
+                if (loaded == 2) {
+                    column = conductor.token() + "_F2";
+                    label = "method F, single-core touching, 2 loaded conductors";
+                } else if (formation == Formation.TREFOIL) {
+                    column = conductor.token() + "_F3-trefoil";
+                    label = "method F, single-core in trefoil, 3 loaded conductors";
+                } else {
+                    column = conductor.token() + "_F3-flat";
+                    label = "method F, single-core flat touching, 3 loaded conductors";
+                }
+                break;
+            case G:
+                table = data.table("capacity-" + ins + "-efg.csv");
+                column = conductor.token() + "_G-horizontal";
+                label = "method G, single-core spaced, horizontal";
+                break;
+            default:
+                table = data.table("capacity-" + ins + "-" + loaded + ".csv");
+                column = conductor.token() + "_" + method.token();
+                label = "method " + method.token() + ", " + loaded + " loaded conductors, " + conductor.token();
+        }
+        if (!table.columns().contains(column)) {
+            throw new DataGapException(table.ref().citation() + " has no column for " + label
+                    + " in the packaged data; give a copper cable or another method");
+        }
+        return table.lookup(id, "Tabulated current-carrying capacity", "I_t", "A", ReferenceData.sizeKey(size), column,
+                ReferenceData.sizeKey(size) + " mm²", label);
+    }
+
+    /** Smallest size the capacity table covers for the cable, so sizing starts there. */
+    public boolean covers(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation, double size) {
+        try {
+            tabulated("probe", insulation, conductor, method, loaded,
+                    method == Method.E ? CableType.MULTICORE : CableType.SINGLE_CORE, formation, size);
+            return true;
+        } catch (DataGapException e) {
+            return false;
+        }
+    }
+
+    private Step.Lookup nextHigher(ReferenceTable table, String id, String title, String symbol, double key, String column,
+                                   String keyUnit, String columnLabel, String what) {
+        List<String> rows = table.rowKeys();
+        String chosen = null;
+        for (String r : rows) {
+            if (Double.parseDouble(r) >= key - 1e-9 && table.value(r, column) != null) {
+                chosen = r;
+                break;
+            }
+        }
+        if (chosen == null) {
+            throw new DataGapException(table.ref().citation() + " does not cover " + what + " = " + num(key) + " " + keyUnit
+                    + " for " + columnLabel);
+        }
+        boolean exact = Math.abs(Double.parseDouble(chosen) - key) < 1e-9;
+        Step.Lookup s = table.lookup(id, title, symbol, "", chosen, column, chosen + " " + keyUnit
+                + (exact ? "" : " (" + what + " " + num(key) + " " + keyUnit + ")"), columnLabel);
+        return new Step.Lookup(s.id(), s.title(), s.symbol(), s.value(), s.unit(), s.table(), s.row(), s.column(),
+                exact ? "exact" : NEXT_HIGHER, s.uses());
+    }
+
+    private static String num(double v) {
+        return ReferenceData.sizeKey(v);
+    }
+
+    public Step.Lookup ambientAir(String id, Insulation insulation, double ambient) {
+        return nextHigher(data.table("ambient-air.csv"), id, "Correction for ambient air temperature", "C_a",
+                Math.max(ambient, 10), insulation.token(), "°C", insulation.token().toUpperCase(Locale.ROOT), "θ_a");
+    }
+
+    public Step.Lookup ambientGround(String id, Insulation insulation, double ground) {
+        return nextHigher(data.table("ambient-ground.csv"), id, "Correction for ground temperature", "C_a",
+                Math.max(ground, 10), insulation.token(), "°C", insulation.token().toUpperCase(Locale.ROOT), "θ_a");
+    }
+
+    public Step.Lookup grouping(String id, Method method, Arrangement arrangement, int circuits) {
+        if (method == Method.D1 || method == Method.D2) {
+            return nextHigher(data.table("grouping-ground.csv"), id, "Reduction for grouping in the ground", "C_g",
+                    circuits, method.token(), "circuits", method == Method.D1 ? "ducts touching" : "cables touching", "n");
+        }
+        boolean singleLayer = arrangement != Arrangement.BUNCHED;
+        int n = singleLayer ? Math.min(circuits, 9) : circuits;
+        return nextHigher(data.table("grouping.csv"), id, "Reduction for grouping", "C_g", n, arrangement.token(),
+                "circuits", arrangement.token() + (singleLayer && circuits > 9 ? " (no further reduction beyond nine)" : ""), "n");
+    }
+
+    public Step.Lookup thermalInsulation(String id, double lengthMm) {
+        return nextHigher(data.table("thermal-insulation.csv"), id, "Reduction for thermal insulation", "C_i",
+                Math.min(lengthMm, 500), "factor", "mm", "surrounded length", "length");
+    }
+
+    public Step.Lookup soil(String id, Method method, double resistivity) {
+        return nextHigher(data.table("soil-resistivity.csv"), id, "Correction for soil thermal resistivity", "C_s",
+                resistivity, method.token(), "K·m/W", method == Method.D1 ? "buried ducts" : "direct in the ground", "ρ_T");
+    }
+
+    /** The harmonic band: factor, and whether the neutral current decides the size. */
+    public record Harmonic(Step.Lookup factor, boolean neutralBasis) {}
+
+    public Harmonic harmonic(String id, double percent) {
+        ReferenceTable t = data.table("harmonics.csv");
+        Step.Lookup s = nextHigher(t, id, "Reduction for third-harmonic currents", "C_h", Math.max(percent, 0.0001), "factor",
+                "%", "third-harmonic content " + num(percent) + " %", "band up to");
+        String band = s.row().split(" ")[0];
+        return new Harmonic(s, "neutral".equals(t.text(band, "basis")));
+    }
+
+    /** The row of the devices table, with its own standard as the citation. */
+    private TableRef deviceRef(DeviceKind kind) {
+        ReferenceTable t = data.table("devices.csv");
+        String k = kind.token();
+        return new TableRef("devices-" + k, "Conventional tripping current and standard ratings, " + k,
+                t.text(k, "standard"), t.text(k, "edition"), t.text(k, "clause"), t.ref().fromMemory(), t.ref().notes());
+    }
+
+    public Step.Lookup k2(String id, DeviceKind kind) {
+        ReferenceTable t = data.table("devices.csv");
+        return new Step.Lookup(id, "Conventional tripping current factor", "k_2", t.value(kind.token(), "k2"), "", deviceRef(kind),
+                kind.token(), "I_2 / I_n", "exact", List.of());
+    }
+
+    public List<Double> ratings(DeviceKind kind) {
+        String text = data.table("devices.csv").text(kind.token(), "ratings");
+        return Arrays.stream(text.trim().split("\\s+")).map(Double::parseDouble).toList();
+    }
+
+    /** The smallest standard rating at least the current, as a lookup step; a gap above the largest. */
+    public Step.Lookup ratingAtLeast(String id, DeviceKind kind, double current) {
+        List<Double> r = new ArrayList<>(ratings(kind));
+        for (double v : r) {
+            if (v >= current - 1e-9) {
+                return new Step.Lookup(id, "Rated current of the device (smallest standard rating ≥ I_b)", "I_n", v, "A",
+                        deviceRef(kind), num(v) + " A", "standard ratings of " + kind.token(), "next higher (smallest ≥ I_b)", List.of());
+            }
+        }
+        throw new DataGapException("no standard " + kind.token() + " rating reaches " + num(current) + " A (largest "
+                + num(r.get(r.size() - 1)) + " A); give rating_a or use parallel circuits");
+    }
+}
