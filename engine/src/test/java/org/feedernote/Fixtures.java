@@ -59,7 +59,7 @@ public final class Fixtures {
                   length_m: %s
                   cable: %s
                   installation: {method: C}
-                  device: {kind: mcb, curve: B, rating_a: 32}
+                  device: {kind: mcb, curve: B, rating_a: 32, breaking_capacity_ka: 10}
                 """.formatted(id, load, lengthM, cable);
     }
 }

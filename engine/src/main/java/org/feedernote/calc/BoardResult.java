@@ -4,6 +4,13 @@ import java.util.List;
 
 import org.feedernote.trace.Q;
 
-/** A board: the cumulative voltage drop from the origin to it and its demand per phase. */
+/**
+ * A board: the cumulative voltage drop from the origin to it, its demand per phase, its maximum
+ * three-phase fault current and its earth-fault loop impedance Ze, and its own checks (withstand).
+ */
 public record BoardResult(String id, String description, String fedBy, Q dropPercent, List<Q> phaseCurrents,
-                          Q neutralCurrent) {}
+                          Q neutralCurrent, Q faultKa, Q loopImpedance, List<CheckResult> checks) {
+    public boolean pass() {
+        return checks.stream().allMatch(CheckResult::pass);
+    }
+}

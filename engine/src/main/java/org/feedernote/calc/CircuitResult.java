@@ -13,6 +13,7 @@ public record CircuitResult(String id, Circuit circuit, int phases, String conne
                             Q powerFactor, Q neutralCurrent, Q rating, Q conventionalTripping, Q tabulatedCapacity,
                             Q correctionFactor, Q capacity, ImpedanceResult impedance, Q length, Q dropV, Q dropPercent,
                             Q dropExactPercent, Q cumulativePercent, Q limitPercent, Q startingDipPercent,
+                            Q faultAtOrigin, Q loopImpedance, Q maxLoopImpedance, Q minEarthFault, BoardFault downstream,
                             List<CheckResult> checks, String governingCheck) {
     public boolean pass() {
         return checks.stream().allMatch(CheckResult::pass);
@@ -29,6 +30,7 @@ public record CircuitResult(String id, Circuit circuit, int phases, String conne
     CircuitResult withGoverning(String governing) {
         return new CircuitResult(id, circuit, phases, connection, designCurrent, powerFactor, neutralCurrent, rating,
                 conventionalTripping, tabulatedCapacity, correctionFactor, capacity, impedance, length, dropV, dropPercent,
-                dropExactPercent, cumulativePercent, limitPercent, startingDipPercent, checks, governing);
+                dropExactPercent, cumulativePercent, limitPercent, startingDipPercent, faultAtOrigin, loopImpedance,
+                maxLoopImpedance, minEarthFault, downstream, checks, governing);
     }
 }

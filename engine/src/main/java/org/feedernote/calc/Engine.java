@@ -36,7 +36,7 @@ import org.feedernote.trace.TraceRecorder;
  */
 public final class Engine {
     /** Contract checks that later capabilities add; reported so that nobody reads a partial result as complete. */
-    static final List<String> NOT_YET = List.of("disconnection", "short-circuit", "protective-conductor", "breaking-capacity");
+    static final List<String> NOT_YET = List.of();
 
     private final ReferenceData data;
     private final ImpedanceCalc impedance;
@@ -79,6 +79,9 @@ public final class Engine {
         Q u0;
         Q f;
         Trace supplyTrace;
+        FaultPath faultPath;
+        BoardFault originFault;
+        final Map<String, List<CheckResult>> boardChecks = new HashMap<>();
         Trace originTrace;
 
         Run(Installation inst, TraceRecorder root) {
@@ -141,6 +144,11 @@ public final class Engine {
             u = Given.input(supplyTrace, "supply/U", "Nominal line voltage", "U", inst.supply().lineVoltageV(), Units.V, "supply.line_voltage_v");
             u0 = Given.input(supplyTrace, "supply/U0", "Nominal phase voltage", "U_0", inst.supply().phaseVoltageV(), Units.V, "supply.phase_voltage_v");
             f = Given.setting(supplyTrace, "basis/f", "Supply frequency", "f", basis.frequencyHz(), Units.HZ, "default of this program");
+            faultPath = new FaultPath(inst, data, u, u0);
+            String origin = boardOrder.get(0);
+            Trace ft = supplyTrace.section("fault/origin", "Fault level at the origin board " + origin, describeSource());
+            originFault = faultPath.origin(ft, origin);
+            boardChecks.put(origin, faultPath.boardWithstand(ft, boards.get(origin), originFault));
         }
 
         // ---------------- design current of final circuits ----------------
@@ -541,10 +549,18 @@ public final class Engine {
                             "No starting_current_multiple is given: the starting dip is not checked.", "");
                 }
             }
+            Trace ft = ct.section(id + "/fault", "Fault path", "earth-fault loop, disconnection, short-circuit withstand, breaking capacity");
+            Q thetaMax = Given.lookup(ft, data.maxTemperature(id + "/fault/theta_max", c.cable().insulation()));
+            FaultPath.CircuitFault fault = faultPath.circuit(ft, c, z, boardFault(c.from(), done), length, in, phases, thetaMax);
+            checks.addAll(fault.checks());
+            if (c.isFeeder() && ct.recording()) {
+                boardChecks.put(c.to(), faultPath.boardWithstand(ft, boards.get(c.to()), fault.downstream()));
+            }
             String governing = closestToLimit(checks);
             return new CircuitResult(id, c, phases, connection.getOrDefault(id, "L1 L2 L3"), ib, pf,
                     c.isFeeder() ? neutral.get(c.to()) : null, in, i2, cap.it(), cap.factor(), cap.iz(), z, length, dropV, dropPct,
-                    dropExactPct, cumulative, limit, dip, List.copyOf(checks), governing);
+                    dropExactPct, cumulative, limit, dip, fault.prospective(), fault.zs(), fault.zsMax(), fault.iefMin(),
+                    fault.downstream(), List.copyOf(checks), governing);
         }
 
         /** The check nearest its limit; on a tie, the one listed first. */
@@ -753,6 +769,17 @@ public final class Engine {
             return new CheckResult(name, title, pass, value.value(), limit.value(), limit.unit(), false, id);
         }
 
+        String describeSource() {
+            Supply.Source s = inst.supply().source();
+            if (s instanceof Supply.Transformer t) return trim(t.ratingKva()) + " kVA transformer, u_k " + trim(t.impedancePercent()) + " %";
+            return "supply from the distribution network";
+        }
+
+        BoardFault boardFault(String board, Map<String, CircuitResult> done) {
+            Circuit feeder = feederOf.get(board);
+            return feeder == null ? originFault : done.get(feeder.id()).downstream();
+        }
+
         String describeDevice(Device d) {
             String kind = switch (d.kind()) {
                 case MCB -> "MCB" + (d.curve() == null ? "" : " type " + d.curve().token());
@@ -787,8 +814,9 @@ public final class Engine {
             List<BoardResult> out = new ArrayList<>();
             for (Board b : inst.boards()) {
                 Circuit feeder = feederOf.get(b.id());
+                BoardFault bf = feeder == null ? originFault : results.get(feeder.id()).downstream();
                 out.add(new BoardResult(b.id(), b.description(), feeder == null ? null : feeder.id(), boardDrop.get(b.id()),
-                        phaseCurrents.get(b.id()), neutral.get(b.id())));
+                        phaseCurrents.get(b.id()), neutral.get(b.id()), bf.ik3(), bf.ze(), boardChecks.getOrDefault(b.id(), List.of())));
             }
             return out;
         }

@@ -100,7 +100,8 @@ final class ImpedanceCalc {
             resistance = Given.alias(rAc.id(), "R", rAc);
             reactance = Given.alias(xPer.id(), "X", xPer);
         }
-        return mvPerAm(t, id, theta, resistance, reactance, phases);
+        ImpedanceResult mv = mvPerAm(t, id, theta, resistance, reactance, phases);
+        return new ImpedanceResult(mv.theta(), mv.resistance(), mv.reactance(), mv.r(), mv.x(), mv.z(), phases, r20, alpha);
     }
 
     /** The mV/A/m figures of a conductor impedance for single-phase or three-phase use. */
@@ -109,6 +110,6 @@ final class ImpedanceCalc {
         Q r = (phases == 3 ? R_THREE_PHASE : R_SINGLE_PHASE).eval(t, id + "/r_" + tag, "", bind(R, resistance));
         Q x = (phases == 3 ? X_THREE_PHASE : X_SINGLE_PHASE).eval(t, id + "/x_" + tag, "", bind(X, reactance));
         Q z = Z_MV.eval(t, id + "/z_" + tag, "", bind(R_MV, r), bind(X_MV, x));
-        return new ImpedanceResult(theta, resistance, reactance, r, x, z, phases);
+        return new ImpedanceResult(theta, resistance, reactance, r, x, z, phases, null, null);
     }
 }

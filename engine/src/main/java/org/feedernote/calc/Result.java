@@ -13,10 +13,11 @@ import org.feedernote.trace.Section;
 public record Result(Installation input, List<BoardResult> boards, List<CircuitResult> circuits, Section trace,
                      List<String> notPerformed) {
     public boolean pass() {
-        return circuits.stream().allMatch(CircuitResult::pass);
+        return circuits.stream().allMatch(CircuitResult::pass) && boards.stream().allMatch(BoardResult::pass);
     }
 
     public int failingChecks() {
-        return circuits.stream().mapToInt(c -> c.failing().size()).sum();
+        return circuits.stream().mapToInt(c -> c.failing().size()).sum()
+                + boards.stream().mapToInt(b -> (int) b.checks().stream().filter(k -> !k.pass()).count()).sum();
     }
 }

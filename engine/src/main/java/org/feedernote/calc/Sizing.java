@@ -93,7 +93,7 @@ final class Sizing {
             String reason = ownFailure(r);
             if (reason == null) {
                 if (lastReason != null) decidedBy.put(c.id(), lastReasonCheck);
-                note(c.id(), "Size chosen", "the smallest standard size that passes the capacity and overload checks",
+                note(c.id(), "Size chosen", "the smallest standard size that passes the capacity, overload, disconnection and withstand checks",
                         mm2(size));
                 return candidate;
             }
@@ -122,6 +122,21 @@ final class Sizing {
         if (ol != null && !ol.pass()) {
             lastReasonCheck = "overload";
             return String.format(Locale.ROOT, "I_2 %s A > 1.45 · I_z = %s A", Engine.trim(ol.value()), Engine.trim(ol.limit()));
+        }
+        CheckResult dc = r.check("disconnection");
+        if (dc != null && !dc.pass() && dc.determined()) {
+            lastReasonCheck = "disconnection";
+            return String.format(Locale.ROOT, "Z_s %s Ω > Z_s,max %s Ω", Engine.trim(dc.value()), Engine.trim(dc.limit()));
+        }
+        CheckResult sc = r.check("short-circuit");
+        if (sc != null && !sc.pass() && sc.determined()) {
+            lastReasonCheck = "short-circuit";
+            return String.format(Locale.ROOT, "S below the adiabatic minimum %s mm²", Engine.trim(sc.limit()));
+        }
+        CheckResult pc = r.check("protective-conductor");
+        if (pc != null && !pc.pass() && pc.determined() && r.circuit().cable().cpc().mm2() < r.circuit().cable().size().mm2()) {
+            lastReasonCheck = "protective-conductor";
+            return String.format(Locale.ROOT, "protective conductor below the adiabatic minimum %s mm²", Engine.trim(pc.limit()));
         }
         return null;
     }

@@ -199,13 +199,18 @@ public final class InputReader {
             }
             byKind = Collections.unmodifiableMap(byKind);
         }
+        if (word(b, "earthing", Earthing.class, null) == Earthing.TT && num(b, "earth_electrode_resistance_ohm") == null) {
+            error(at(b, "earthing"), "basis.earthing", "a TT system needs basis.earth_electrode_resistance_ohm (R_A) for the RCD check R_A · I_Δn ≤ 50 V");
+        }
         return new Basis(setting(b, path, "frequency_hz", 50), setting(b, path, "earthing", Earthing.class, Earthing.TN_S),
                 setting(b, path, "voltage_drop_limit_percent", 4), byKind, "basis.voltage_drop_limits_percent",
                 setting(b, path, "ambient_air_c", 30), setting(b, path, "ambient_ground_c", 20),
                 setting(b, path, "conductor_temperature", ConductorTemperature.class, ConductorTemperature.MAXIMUM),
                 setting(b, path, "disconnection_time_final_s", 0.4), setting(b, path, "disconnection_time_distribution_s", 5),
                 setting(b, path, "motor_starting_limit_percent", 10),
-                setting(b, path, "voltage_drop_method", DropMethod.class, DropMethod.APPROXIMATE));
+                setting(b, path, "voltage_drop_method", DropMethod.class, DropMethod.APPROXIMATE),
+                setting(b, path, "voltage_factor_max", 1.10), setting(b, path, "voltage_factor_min", 0.95),
+                num(b, "earth_electrode_resistance_ohm"));
     }
 
     private Supply supply(Node s) {
@@ -352,9 +357,6 @@ public final class InputReader {
         if (kind != null && kind != DeviceKind.MCCB && at(d, "instantaneous_a") != null) {
             error(at(d, "instantaneous_a"), join(path, "instantaneous_a"), "instantaneous_a is the trip setting of an mccb; for "
                     + kind.token() + " it follows from the " + (kind == DeviceKind.FUSE ? "fuse characteristic (give disconnection_current_a)" : "curve"));
-        }
-        if (kind != null && kind != DeviceKind.FUSE && at(d, "disconnection_current_a") != null) {
-            error(at(d, "disconnection_current_a"), join(path, "disconnection_current_a"), "disconnection_current_a applies to fuses only");
         }
         Node rating = at(d, "rating_a");
         Double ratingA = num(rating);

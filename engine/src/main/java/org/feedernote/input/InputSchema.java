@@ -78,16 +78,19 @@ public final class InputSchema {
                 opt("disconnection_time_final_s", range("maximum disconnection time of final circuits in s", 0, true, 5, false), "0.4"),
                 opt("disconnection_time_distribution_s", range("maximum disconnection time of distribution circuits in s", 0, true, 5, false), "5"),
                 opt("motor_starting_limit_percent", range("limit of the voltage dip at a motor's terminals while it starts, per cent of nominal", 0, true, 50, false), "10"),
-                opt("voltage_drop_method", word("which voltage-drop form is checked against the limit", DropMethod.class), "approximate"));
+                opt("voltage_drop_method", word("which voltage-drop form is checked against the limit", DropMethod.class), "approximate"),
+                opt("voltage_factor_max", range("IEC 60909 voltage factor c_max for maximum fault currents", 1, false, 1.2, false), "1.10"),
+                opt("voltage_factor_min", range("IEC 60909 voltage factor c_min for minimum fault currents and maximum Zs", 0.8, false, 1, false), "0.95"),
+                opt("earth_electrode_resistance_ohm", positive("resistance R_A of the installation's earth electrode (TT systems) in Ω"), "none (required for TT)"));
 
         Spec.Obj transformer = obj("a transformer at the origin",
                 req("rating_kva", positive("rated power in kVA")),
                 req("impedance_percent", range("short-circuit impedance in per cent", 0, true, 100, true)),
-                opt("x_r_ratio", positive("X/R ratio of the transformer"), "not used until the fault path is calculated"));
+                opt("x_r_ratio", positive("X/R ratio of the transformer"), "5 (assumption, common practice)"));
         Spec.Obj utility = obj("a supply from the distribution network",
                 opt("fault_level_ka", positive("prospective fault current at the origin in kA"), "none"),
                 opt("loop_impedance_ohm", positive("external earth-fault loop impedance Ze in Ω"), "none"),
-                opt("x_r_ratio", positive("X/R ratio of the network"), "not used until the fault path is calculated"));
+                opt("x_r_ratio", positive("X/R ratio of the network"), "1 (assumption, common practice)"));
         Spec.Obj source = objOne("the source at the origin", List.of(List.of("transformer", "utility")),
                 opt("transformer", transformer, null),
                 opt("utility", utility, null));
@@ -135,7 +138,7 @@ public final class InputSchema {
                 opt("curve", word("MCB/RCBO instantaneous tripping type", Curve.class), "required for mcb and rcbo"),
                 opt("instantaneous_a", positive("MCCB instantaneous (magnetic) trip setting in A"), "none"),
                 opt("breaking_capacity_ka", positive("rated breaking capacity in kA"), "none"),
-                opt("disconnection_current_a", positive("fuse: current that disconnects within the required time, from the manufacturer's curve, in A"), "none"),
+                opt("disconnection_current_a", positive("current that operates the device within the required disconnection time, from the manufacturer's curve, in A (required for fuses; for circuit-breakers it replaces the instantaneous basis)"), "none"),
                 opt("residual_current_a", positive("rated residual operating current IΔn of an RCD or RCBO in A"), "none"),
                 opt("let_through_a2s", positive("let-through energy I²t from the manufacturer's data in A²s"), "none"));
         Spec.Obj circuit = objOne("a circuit", List.of(List.of("load", "to")),

@@ -9,7 +9,8 @@ public record Basis(Setting<Double> frequencyHz, Setting<Earthing> earthing,
                     Setting<Double> ambientAirC, Setting<Double> ambientGroundC,
                     Setting<ConductorTemperature> conductorTemperature,
                     Setting<Double> disconnectionTimeFinalS, Setting<Double> disconnectionTimeDistributionS,
-                    Setting<Double> motorStartingLimitPercent, Setting<DropMethod> voltageDropMethod) {
+                    Setting<Double> motorStartingLimitPercent, Setting<DropMethod> voltageDropMethod,
+                    Setting<Double> voltageFactorMax, Setting<Double> voltageFactorMin, Double earthElectrodeOhm) {
     /** True when limits are given per load kind rather than one for all. */
     public boolean limitsByKind() { return voltageDropLimitsByKind != null; }
 }

@@ -39,8 +39,9 @@ public final class ResultJson {
             ObjectNode n = boards.addObject();
             n.put("id", b.id());
             put(n, "voltage_drop_percent", b.dropPercent());
-            n.putNull("prospective_fault_ka");
-            n.putNull("loop_impedance_ohm");
+            put(n, "prospective_fault_ka", b.faultKa());
+            put(n, "loop_impedance_ohm", b.loopImpedance());
+            if (!b.checks().isEmpty()) checks(n, b.checks());
             if (b.neutralCurrent() != null) put(n, "neutral_current_a", b.neutralCurrent());
         }
         ArrayNode circuits = out.putArray("circuits");
@@ -48,35 +49,28 @@ public final class ResultJson {
             ObjectNode n = circuits.addObject();
             n.put("id", c.id());
             put(n, "design_current_a", c.designCurrent());
-            if (c.circuit().device().ratingA() == null) n.putNull("device_rating_a");
-            else n.put("device_rating_a", round(c.circuit().device().ratingA()));
+            put(n, "device_rating_a", c.rating());
             n.put("cable_size_mm2", c.circuit().cable().size().mm2());
             if (c.circuit().cable().cpc().auto()) n.putNull("cpc_size_mm2");
             else n.put("cpc_size_mm2", c.circuit().cable().cpc().mm2());
-            n.putNull("tabulated_capacity_a");
-            n.putNull("correction_factor");
-            n.putNull("capacity_a");
+            put(n, "tabulated_capacity_a", c.tabulatedCapacity());
+            put(n, "correction_factor", c.correctionFactor());
+            put(n, "capacity_a", c.capacity());
             put(n, "voltage_drop_v", c.dropV());
             put(n, "voltage_drop_percent", c.dropPercent());
             put(n, "cumulative_voltage_drop_percent", c.cumulativePercent());
-            n.putNull("loop_impedance_ohm");
-            n.putNull("max_loop_impedance_ohm");
-            n.putNull("prospective_fault_ka");
+            put(n, "loop_impedance_ohm", c.loopImpedance());
+            put(n, "max_loop_impedance_ohm", c.maxLoopImpedance());
+            put(n, "prospective_fault_ka", c.faultAtOrigin());
             n.put("governing_check", c.governingCheck());
             n.put("verdict", c.pass() ? "PASS" : "FAIL");
-            ArrayNode checks = n.putArray("checks");
-            for (CheckResult k : c.checks()) {
-                ObjectNode cn = checks.addObject();
-                cn.put("name", k.name());
-                cn.put("verdict", k.pass() ? "PASS" : "FAIL");
-                cn.put("value", round(k.value()));
-                cn.put("limit", round(k.limit()));
-                cn.put("unit", k.unit());
-            }
+            checks(n, c.checks());
             n.put("phase", c.connection());
             if (c.powerFactor() != null) put(n, "power_factor", c.powerFactor());
             if (c.dropExactPercent() != null) put(n, "voltage_drop_exact_percent", c.dropExactPercent());
             if (c.neutralCurrent() != null) put(n, "neutral_current_a", c.neutralCurrent());
+            put(n, "conventional_tripping_current_a", c.conventionalTripping());
+            put(n, "min_earth_fault_a", c.minEarthFault());
             put(n, "r_mv_per_a_m", c.impedance().r());
             put(n, "x_mv_per_a_m", c.impedance().x());
             put(n, "z_mv_per_a_m", c.impedance().z());
@@ -85,6 +79,24 @@ public final class ResultJson {
         ArrayNode missing = out.putArray("checks_not_performed");
         result.notPerformed().forEach(missing::add);
         return out;
+    }
+
+    private static void checks(ObjectNode n, java.util.List<CheckResult> list) {
+        ArrayNode checks = n.putArray("checks");
+        for (CheckResult k : list) {
+            ObjectNode cn = checks.addObject();
+            cn.put("name", k.name());
+            cn.put("verdict", k.pass() ? "PASS" : "FAIL");
+            if (k.determined()) {
+                cn.put("value", round(k.value()));
+                cn.put("limit", round(k.limit()));
+            } else {
+                cn.putNull("value");
+                cn.putNull("limit");
+                cn.put("note", "not determined: the input lacks data this check needs (see the trace)");
+            }
+            cn.put("unit", k.unit());
+        }
     }
 
     private static void put(ObjectNode n, String key, Q q) {

@@ -49,7 +49,8 @@ public final class TerminalSummary {
         long failingCircuits = result.circuits().stream().filter(c -> !c.pass()).count();
         b.append('\n');
         if (failing == 0) {
-            b.append("PASS: every performed check passes (").append(result.circuits().size()).append(" circuits).\n");
+            b.append(result.notPerformed().isEmpty() ? "PASS: every check passes (" : "PASS: every check made passes (")
+             .append(result.circuits().size()).append(" circuits).\n");
         } else {
             b.append("FAIL: ").append(failing).append(" check(s) fail in ").append(failingCircuits).append(" circuit(s).\n");
         }

@@ -89,14 +89,14 @@ class CapacityTest {
         // Hand calculation (IEC 60364-5-52:2009 Table B.52.5, XLPE three loaded conductors, method C,
         // from memory): I_b = 32 A, I_n = 32 A; 2.5 mm² gives 30 A < 32 A, 4 mm² gives 40 A ≥ 32 A → 4 mm².
         CircuitResult r = one("{conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}",
-                "{method: C}", "{kind: mcb, curve: C, rating_a: 32}", "{kind: other, current_a: 32, power_factor: 0.9, phases: 3}");
+                "{method: C}", "{kind: mcb, curve: C, rating_a: 32, breaking_capacity_ka: 10}", "{kind: other, current_a: 32, power_factor: 0.9, phases: 3}");
         assertEquals(4, r.circuit().cable().size().mm2());
         assertEquals(4, r.circuit().cable().cpc().mm2(), "IEC 60364-5-54 Table 54.2: S ≤ 16 mm² → cpc = S");
         assertEquals(40, r.tabulatedCapacity().value(), 1e-9);
         assertEquals("capacity", r.governingCheck());
         Result whole = Fixtures.run(Fixtures.oneBoard("", circuit(
                 "{conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}", "{method: C}",
-                "{kind: mcb, curve: C, rating_a: 32}", "{kind: other, current_a: 32, power_factor: 0.9, phases: 3}")));
+                "{kind: mcb, curve: C, rating_a: 32, breaking_capacity_ka: 10}", "{kind: other, current_a: 32, power_factor: 0.9, phases: 3}")));
         assertTrue(TraceWalk.steps(whole.trace()).stream()
                 .anyMatch(s -> s instanceof Step.Decision d && d.outcome().equals("rejected: I_z 30 A < I_n 32 A")),
                 "the note shows why 2.5 mm² was rejected");
@@ -108,7 +108,7 @@ class CapacityTest {
         // 35 °C (C_a 0.94, Table B.52.14), three circuits bunched (C_g 0.70, Table B.52.17); I_n = 20 A
         // needs I_t ≥ 20 / (0.94 × 0.70) = 30.4 A; 4 mm² gives 30 A (Table B.52.2) → 6 mm² (38 A).
         CircuitResult r = one("{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: auto, cpc_mm2: auto}",
-                "{method: B2, ambient_c: 35, grouped_circuits: 3, group_arrangement: bunched}", "{kind: mcb, curve: B, rating_a: 20}",
+                "{method: B2, ambient_c: 35, grouped_circuits: 3, group_arrangement: bunched}", "{kind: mcb, curve: B, rating_a: 20, breaking_capacity_ka: 10}",
                 "{kind: socket, current_a: 16, power_factor: 0.9, phases: 1}");
         assertEquals(6, r.circuit().cable().size().mm2());
         assertEquals(0.94 * 0.70, r.correctionFactor().value(), 1e-12);
@@ -119,7 +119,7 @@ class CapacityTest {
     void autoRatingIsTheSmallestStandardRatingNotBelowTheDesignCurrent() {
         // IEC 60898-1 preferred ratings (from memory): 6, 10, 13, 16, 20, 25, 32 … ; I_b = 14.4 A → 16 A.
         CircuitResult r = one("{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 2.5, cpc_mm2: 1.5}",
-                "{method: C}", "{kind: mcb, curve: B, rating_a: auto}", "{kind: heating, power_kw: 3.312, power_factor: 1.0, phases: 1}");
+                "{method: C}", "{kind: mcb, curve: B, rating_a: auto, breaking_capacity_ka: 10}", "{kind: heating, power_kw: 3.312, power_factor: 1.0, phases: 1}");
         assertEquals(16, r.rating().value(), 1e-12);
     }
 
@@ -127,11 +127,11 @@ class CapacityTest {
     void aFuseAtTheCableRatingFailsTheOverloadCheck() {
         // gG fuse I_2 = 1.6 I_n (IEC 60269-1, from memory): with I_n = I_z, I_2 = 1.6 I_z > 1.45 I_z.
         CircuitResult r = one("{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 4, cpc_mm2: 1.5}",
-                "{method: C}", "{kind: fuse, rating_a: 32}", "{kind: socket, current_a: 20, power_factor: 0.9, phases: 1}");
+                "{method: C}", "{kind: fuse, rating_a: 32, breaking_capacity_ka: 10, let_through_a2s: 30000, disconnection_current_a: 200}", "{kind: socket, current_a: 20, power_factor: 0.9, phases: 1}");
         // Table B.52.2 method C, 4 mm²: 36 A; I_2 = 1.6 × 32 = 51.2 A ≤ 1.45 × 36 = 52.2 A: passes.
         assertTrue(r.check("overload").pass());
         CircuitResult f = one("{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 2.5, cpc_mm2: 1.5}",
-                "{method: C}", "{kind: fuse, rating_a: 25}", "{kind: socket, current_a: 20, power_factor: 0.9, phases: 1}");
+                "{method: C}", "{kind: fuse, rating_a: 25, breaking_capacity_ka: 10, let_through_a2s: 30000, disconnection_current_a: 200}", "{kind: socket, current_a: 20, power_factor: 0.9, phases: 1}");
         // 25 A ≤ 27 A passes capacity, but I_2 = 40 A > 1.45 × 27 = 39.15 A fails overload.
         assertTrue(f.check("capacity").pass());
         assertFalse(f.check("overload").pass());
@@ -145,7 +145,7 @@ class CapacityTest {
             for (int n : List.of(1, 2, 3, 4, 6, 9, 12, 20)) {
                 CircuitResult r = one("{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 10, cpc_mm2: 4}",
                         "{method: C, ambient_c: " + ambient + ", grouped_circuits: " + n + ", group_arrangement: bunched}",
-                        "{kind: mcb, curve: B, rating_a: 6}", "{kind: other, current_a: 5, power_factor: 0.9, phases: 1}");
+                        "{kind: mcb, curve: B, rating_a: 6, breaking_capacity_ka: 10}", "{kind: other, current_a: 5, power_factor: 0.9, phases: 1}");
                 if (n == 1) previous = Double.POSITIVE_INFINITY;
                 assertTrue(r.capacity().value() <= previous + 1e-12, ambient + " °C, " + n + " circuits");
                 previous = r.capacity().value();
@@ -154,7 +154,7 @@ class CapacityTest {
         double last = Double.POSITIVE_INFINITY;
         for (int ambient = 10; ambient <= 60; ambient += 5) {
             CircuitResult r = one("{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 10, cpc_mm2: 4}",
-                    "{method: C, ambient_c: " + ambient + "}", "{kind: mcb, curve: B, rating_a: 6}",
+                    "{method: C, ambient_c: " + ambient + "}", "{kind: mcb, curve: B, rating_a: 6, breaking_capacity_ka: 10}",
                     "{kind: other, current_a: 5, power_factor: 0.9, phases: 1}");
             assertTrue(r.capacity().value() <= last + 1e-12);
             last = r.capacity().value();
@@ -162,10 +162,10 @@ class CapacityTest {
     }
 
     @ParameterizedTest(name = "I_b {0} A, method {1}")
-    @CsvSource({"9, C", "14, B2", "23, C", "31, B1", "45, E", "61, C", "88, C", "130, E"})
+    @CsvSource({"9, C", "14, B2", "23, C", "31, B1", "45, E", "61, C", "88, C", "100, E"})
     void anAutoSizedCablePassesAndTheNextSmallerFailsTheGoverningCheck(double current, String method) {
         String load = "{kind: other, current_a: " + current + ", power_factor: 0.9, phases: 3}";
-        String device = "{kind: mccb, rating_a: auto}";
+        String device = "{kind: mcb, curve: B, rating_a: auto, breaking_capacity_ka: 10}";
         CircuitResult r = one("{conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}",
                 "{method: " + method + "}", device, load);
         assertTrue(r.pass(), r.failing().toString());

@@ -29,21 +29,21 @@ class SizingTest {
                     length_m: 120
                     cable: {conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: %s, cpc_mm2: auto}
                     installation: {method: C}
-                    device: {kind: mccb, rating_a: 63}
+                    device: {kind: mccb, rating_a: 63, instantaneous_a: 630, breaking_capacity_ka: 25, let_through_a2s: 300000}
                   - id: M1
                     from: B1
                     load: {kind: heating, power_kw: 30, power_factor: 1.0, phases: 3}
                     length_m: 10
                     cable: {conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: 10, cpc_mm2: 10}
                     installation: {method: C}
-                    device: {kind: mcb, curve: C, rating_a: 50}
+                    device: {kind: mcb, curve: C, rating_a: 50, breaking_capacity_ka: 10, let_through_a2s: 60000}
                   - id: L1
                     from: B1
                     load: {kind: lighting, power_kw: 2.0, power_factor: 0.95, phases: 1}
                     length_m: %s
                     cable: {conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: %s, cpc_mm2: auto}
                     installation: {method: C}
-                    device: {kind: mcb, curve: B, rating_a: 10}
+                    device: {kind: mcb, curve: B, rating_a: 10, breaking_capacity_ka: 10}
                 """.formatted(feederSize, finalLength, finalSize);
     }
 

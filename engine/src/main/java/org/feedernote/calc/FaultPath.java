@@ -1,0 +1,365 @@
+package org.feedernote.calc;
+
+import static org.feedernote.formula.Formula.bind;
+import static org.feedernote.formula.FaultFormulas.*;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+import org.feedernote.data.FaultData;
+import org.feedernote.data.ReferenceData;
+import org.feedernote.expr.Var;
+import org.feedernote.formula.Units;
+import org.feedernote.model.*;
+import org.feedernote.trace.Q;
+import org.feedernote.trace.Step;
+import org.feedernote.trace.Trace;
+
+/**
+ * The fault path: source impedance, fault levels at every board (IEC 60909-0), earth-fault loop
+ * impedance and disconnection (IEC 60364-4-41), adiabatic withstand of line and protective
+ * conductors (IEC 60364-4-43 and 60364-5-54) and breaking capacity. Impedances are added as
+ * resistance and reactance separately, each sum a traced step.
+ */
+final class FaultPath {
+    private static final String T_INSTANT = "instantaneous region: operation within 0.1 s (IEC 60364-4-43:2008, 434.5.2)";
+
+    private final Installation inst;
+    private final ReferenceData data;
+    private final FaultData faults;
+    private final Q u;
+    private final Q u0;
+    private Q cmax;
+    private Q cmin;
+
+    FaultPath(Installation inst, ReferenceData data, Q u, Q u0) {
+        this.inst = inst;
+        this.data = data;
+        this.faults = new FaultData(data);
+        this.u = u;
+        this.u0 = u0;
+    }
+
+    /** The result for one circuit: its fault figures, its checks, and for a feeder the board it supplies. */
+    record CircuitFault(Q prospective, Q zs, Q zsMax, Q iefMin, List<CheckResult> checks, BoardFault downstream,
+                        List<CheckResult> boardChecks) {}
+
+    private static Q rel(Q q, String symbol) {
+        return new Q(q.id(), symbol, q.value(), q.unit());
+    }
+
+    private Q series(Trace t, String id, String title, String symbol, Q... terms) {
+        List<Var> vars = new ArrayList<>();
+        List<Step.Binding> b = new ArrayList<>();
+        for (int i = 0; i < terms.length; i++) {
+            Var v = new Var("z" + i, terms[i].symbol(), Units.OHM);
+            vars.add(v);
+            b.add(bind(v, terms[i]));
+        }
+        return sum(title, symbol, vars).eval(t, id, "", b.toArray(new Step.Binding[0]));
+    }
+
+    private Q magnitude(Trace t, String id, String symbol, Q r, Q x) {
+        return MAGNITUDE.as(symbol).eval(t, id, "", bind(R, r), bind(X, x));
+    }
+
+    // ---------------- the origin ----------------
+
+    BoardFault origin(Trace t, String board) {
+        Basis b = inst.basis();
+        cmax = Given.setting(t, "fault/c_max", "Voltage factor for maximum fault currents", "c_max", b.voltageFactorMax(), Units.NONE,
+                "IEC 60909-0:2016, Table 1 (low voltage, tolerance +10 %)");
+        cmin = Given.setting(t, "fault/c_min", "Voltage factor for minimum fault currents", "c_min", b.voltageFactorMin(), Units.NONE,
+                "IEC 60909-0:2016, Table 1 (low voltage)");
+        String id = "fault/origin";
+        Q r;
+        Q x;
+        Q rLoop;
+        Q xLoop;
+        Supply.Source src = inst.supply().source();
+        if (src instanceof Supply.Transformer tr) {
+            Q uk = Given.input(t, id + "/uk", "Transformer short-circuit impedance", "u_k", tr.impedancePercent(), Units.PERCENT,
+                    "supply.source.transformer.impedance_percent");
+            Q sr = Given.input(t, id + "/S_rT", "Transformer rating", "S_rT", tr.ratingKva(), Units.KVA, "supply.source.transformer.rating_kva");
+            Q xr = Given.setting(t, id + "/xr", "X/R of the transformer", "X/R", new Setting<>(tr.xrRatio() == null ? 5.0 : tr.xrRatio(),
+                    tr.xrRatio() != null, "supply.source.transformer.x_r_ratio"), Units.NONE, "assumption of this program: 5 (common practice, no source)");
+            Q z = TRANSFORMER_IMPEDANCE.eval(t, id + "/Z_T", "", bind(UK, uk), bind(U, u), bind(SR, sr));
+            r = RESISTANCE_FROM_XR.as("R_T").eval(t, id + "/R_T", "", bind(Z, z), bind(XR, xr));
+            x = REACTANCE_FROM_XR.as("X_T").eval(t, id + "/X_T", "", bind(R, r), bind(XR, xr));
+            Given.decision(t, id + "/loop", "Loop impedance of the source", "a transformer at the origin (upstream network taken as infinite; Dyn vector group, Z_0 ≈ Z_1)",
+                    "the line-neutral and line-earth loops at the origin have the impedance Z_T", "IEC 60909-0:2016, 6.3", z.id());
+            rLoop = r;
+            xLoop = x;
+        } else {
+            Supply.Utility ut = (Supply.Utility) src;
+            Q xr = Given.setting(t, id + "/xr", "X/R of the network", "X/R", new Setting<>(ut.xrRatio() == null ? 1.0 : ut.xrRatio(),
+                    ut.xrRatio() != null, "supply.source.utility.x_r_ratio"), Units.NONE, "assumption of this program: 1 (common practice, no source)");
+            Q zq;
+            Q ze;
+            if (ut.faultLevelKa() != null) {
+                Q ik = Given.input(t, id + "/Ik", "Prospective fault current at the origin", "I_k", ut.faultLevelKa(), Units.KA,
+                        "supply.source.utility.fault_level_ka");
+                zq = NETWORK_IMPEDANCE.eval(t, id + "/Z_Q", "", bind(C_MAX, cmax), bind(U, u), bind(IK, ik));
+            } else {
+                zq = null;
+            }
+            if (ut.loopImpedanceOhm() != null) {
+                ze = Given.input(t, id + "/Ze", "External earth-fault loop impedance", "Z_e", ut.loopImpedanceOhm(), Units.OHM,
+                        "supply.source.utility.loop_impedance_ohm");
+            } else {
+                ze = DOUBLE.eval(t, id + "/Ze", "no loop impedance given", bind(Z, zq));
+            }
+            if (zq == null) zq = HALF.as("Z_Q").eval(t, id + "/Z_Q", "no fault level given", bind(ZE, ze));
+            r = RESISTANCE_FROM_XR.as("R_Q").eval(t, id + "/R_Q", "", bind(Z, zq), bind(XR, xr));
+            x = REACTANCE_FROM_XR.as("X_Q").eval(t, id + "/X_Q", "", bind(R, r), bind(XR, xr));
+            rLoop = RESISTANCE_FROM_XR.as("R_e").eval(t, id + "/R_e", "", bind(Z, ze), bind(XR, xr));
+            xLoop = REACTANCE_FROM_XR.as("X_e").eval(t, id + "/X_e", "", bind(R, rLoop), bind(XR, xr));
+        }
+        return atBoard(t, id, board, r, x, rLoop, xLoop, rLoop, xLoop, rLoop, xLoop);
+    }
+
+    private BoardFault atBoard(Trace t, String id, String board, Q r3, Q x3, Q rN, Q xN, Q rE, Q xE, Q rF, Q xF) {
+        Q z3 = magnitude(t, id + "/Z3", "|Z_3|", rel(r3, "R"), rel(x3, "X"));
+        Q ik3 = THREE_PHASE_FAULT.as("I_k3(" + board + ")").eval(t, id + "/Ik3", "at board " + board, bind(C_MAX, cmax), bind(U, u), bind(Z, rel(z3, "Z")));
+        Q zn = magnitude(t, id + "/ZN", "|Z_N|", rel(rN, "R"), rel(xN, "X"));
+        Q ik1 = SINGLE_PHASE_FAULT.as("I_k1(" + board + ")").eval(t, id + "/Ik1", "at board " + board, bind(C_MAX, cmax), bind(U0, u0), bind(Z, rel(zn, "Z")));
+        Q ze = magnitude(t, id + "/Ze_mag", "Z_e(" + board + ")", rel(rE, "R"), rel(xE, "X"));
+        return new BoardFault(r3, x3, rN, xN, rE, xE, rF, xF, ik3, ik1, ze);
+    }
+
+    /** A board's rated short-circuit withstand against the fault level, where a rating is given. */
+    List<CheckResult> boardWithstand(Trace t, Board board, BoardFault at) {
+        if (board.faultRatingKa() == null) return List.of();
+        Q rating = Given.input(t, "fault/" + board.id() + "/Icw", "Rated short-circuit withstand of board " + board.id(), "I_cw",
+                board.faultRatingKa(), Units.KA, board.where().path() + ".fault_rating_ka");
+        Q ik = rel(at.ik3(), "I_k3");
+        boolean pass = rating.value() >= ik.value() - 1e-12;
+        if (t.recording()) t.add(new Step.Check("fault/" + board.id() + "/check", "Board withstand", "breaking-capacity", rating, "≥", ik, pass,
+                "IEC 61439-1:2011, 9.3 (rated short-circuit withstand ≥ prospective fault current)", List.of(rating.id(), ik.id())));
+        return List.of(new CheckResult("breaking-capacity", "Board withstand", pass, rating.value(), ik.value(), Units.KA, true,
+                "fault/" + board.id() + "/check"));
+    }
+
+    // ---------------- one circuit ----------------
+
+    CircuitFault circuit(Trace t, Circuit c, ImpedanceResult z, BoardFault at, Q length, Q in, int phases, Q thetaMax) {
+        String id = c.id() + "/fault";
+        Cable cable = c.cable();
+        Q n = Given.derived(t, id + "/n", "Conductors in parallel per phase", "n", cable.parallel(), Units.NONE, "design input (cable.parallel)");
+        Q r20 = rel(z.r20(), "R_20");
+        Q alpha = rel(z.alpha(), "α_20");
+        Q r1km20 = r20;
+        Q r1_20 = LENGTH_RESISTANCE.as("R_1,20").eval(t, id + "/R1_20", "line conductor at 20 °C", bind(R_KM, rel(r1km20, "R")), bind(L, length), bind(N, n));
+        Q x1 = LENGTH_REACTANCE.as("X_1").eval(t, id + "/X1", "line conductor", bind(X_KM, rel(z.reactance(), "X")), bind(L, length));
+        Q xLoop = LOOP_REACTANCE.as("X_loop").eval(t, id + "/Xloop", "line and protective conductor", bind(X_KM, rel(z.reactance(), "X")), bind(L, length));
+        Q thetaF = Given.lookup(t, faults.finalTemperature(id + "/theta_f", cable.insulation()));
+        Q cpc20 = Given.lookup(t, data.resistance20(id + "/R20_cpc", cable.conductor(), cable.cpc().mm2()));
+        Q r1kmMax = RESISTANCE_AT.as("R_1′").eval(t, id + "/R1km_max", "line, at θ_max", bind(R20, r20), bind(ALPHA, alpha), bind(THETA, rel(thetaMax, "θ")));
+        Q r2kmMax = RESISTANCE_AT.as("R_2′").eval(t, id + "/R2km_max", "cpc, at θ_max", bind(R20, rel(cpc20, "R_20")), bind(ALPHA, alpha), bind(THETA, rel(thetaMax, "θ")));
+        Q r1 = LENGTH_RESISTANCE.as("R_1").eval(t, id + "/R1", "at θ_max", bind(R_KM, rel(r1kmMax, "R")), bind(L, length), bind(N, n));
+        Q r2 = LENGTH_RESISTANCE.as("R_2").eval(t, id + "/R2", "at θ_max", bind(R_KM, rel(r2kmMax, "R")), bind(L, length), bind(N, n));
+        Q r1kmF = RESISTANCE_AT.as("R_1f′").eval(t, id + "/R1km_f", "line, at θ_f", bind(R20, r20), bind(ALPHA, alpha), bind(THETA, rel(thetaF, "θ")));
+        Q r2kmF = RESISTANCE_AT.as("R_2f′").eval(t, id + "/R2km_f", "cpc, at θ_f", bind(R20, rel(cpc20, "R_20")), bind(ALPHA, alpha), bind(THETA, rel(thetaF, "θ")));
+        Q r1f = LENGTH_RESISTANCE.as("R_1f").eval(t, id + "/R1f", "at θ_f", bind(R_KM, rel(r1kmF, "R")), bind(L, length), bind(N, n));
+        Q r2f = LENGTH_RESISTANCE.as("R_2f").eval(t, id + "/R2f", "at θ_f", bind(R_KM, rel(r2kmF, "R")), bind(L, length), bind(N, n));
+
+        Q rE = series(t, id + "/RE", "Loop resistance to the far end, at θ_max", "R_s", rel(at.rE(), "R_e"), r1, r2);
+        Q xE = series(t, id + "/XE", "Loop reactance to the far end", "X_s", rel(at.xE(), "X_e"), xLoop);
+        Q zs = magnitude(t, id + "/Zs", "Z_s", rE, xE);
+        Q rF = series(t, id + "/RF", "Loop resistance to the far end, at θ_f", "R_sf", rel(at.rF(), "R_ef"), r1f, r2f);
+        Q xF = series(t, id + "/XF", "Loop reactance to the far end, at θ_f", "X_sf", rel(at.xF(), "X_ef"), xLoop);
+        Q zsf = magnitude(t, id + "/Zsf", "Z_sf", rF, xF);
+        Q ief = MIN_EARTH_FAULT.as("I_ef,min").eval(t, id + "/Ief", "far end", bind(C_MIN, cmin), bind(U0, u0), bind(ZS, rel(zsf, "Z_s")));
+
+        List<CheckResult> checks = new ArrayList<>();
+        Disconnection d = disconnection(t, c, id, zs, in);
+        checks.add(d.check());
+        Q prospective = rel(phases == 3 ? at.ik3() : at.ik1(), phases == 3 ? "I_k3" : "I_k1");
+        checks.add(adiabatic(t, c, id + "/sc", "short-circuit", "Short-circuit withstand of the line conductor", prospective, null, d, in,
+                cable.size().mm2(), thetaMax, false));
+        checks.add(adiabatic(t, c, id + "/pc", "protective-conductor", "Withstand of the protective conductor", null, ief, d, in,
+                cable.cpc().mm2(), thetaMax, true));
+        checks.add(breaking(t, c, id + "/bc", prospective));
+
+        BoardFault downstream = null;
+        if (c.isFeeder()) {
+            Trace bt = t.section(id + "/board", "Fault levels at board " + c.to(), "");
+            String bid = "fault/" + c.to();
+            Q r3 = series(bt, bid + "/R3", "Phase resistance to board " + c.to() + ", 20 °C", "R_3", rel(at.r3(), "R_3(" + c.from() + ")"), r1_20);
+            Q x3 = series(bt, bid + "/X3", "Phase reactance to board " + c.to(), "X_3", rel(at.x3(), "X_3(" + c.from() + ")"), x1);
+            Q rN = series(bt, bid + "/RN", "Line-neutral loop resistance to board " + c.to() + ", 20 °C", "R_N",
+                    rel(at.rN(), "R_N(" + c.from() + ")"), rel(r1_20, "R_1,20"), rel(r1_20, "R_neutral,20"));
+            Q xN = series(bt, bid + "/XN", "Line-neutral loop reactance to board " + c.to(), "X_N", rel(at.xN(), "X_N(" + c.from() + ")"), xLoop);
+            downstream = atBoard(bt, bid, c.to(), r3, x3, rN, xN, rE, xE, rF, xF);
+        }
+        return new FaultPath.CircuitFault(prospective, zs, d.zsMax(), ief, checks, downstream, List.of());
+    }
+
+    record Disconnection(CheckResult check, Q zsMax, Q ia, Q time, boolean instantaneous) {}
+
+    private Disconnection disconnection(Trace t, Circuit c, String id, Q zs, Q in) {
+        Device dev = c.device();
+        Basis b = inst.basis();
+        boolean socket = c.load() != null && c.load().kind() == LoadKind.SOCKET;
+        boolean finalTime = !c.isFeeder() && (in.value() <= (socket ? 63 : 32) + 1e-9);
+        Setting<Double> ts = finalTime ? b.disconnectionTimeFinalS() : b.disconnectionTimeDistributionS();
+        Given.decision(t, id + "/t-rule", "Required disconnection time",
+                c.isFeeder() ? "a distribution circuit (feeder)" : (finalTime ? "a final circuit with I_n ≤ " + (socket ? "63 A (socket outlets)" : "32 A")
+                        : "a final circuit with I_n > " + (socket ? "63 A" : "32 A")),
+                finalTime ? "the final-circuit time applies" : "the distribution-circuit time applies",
+                "IEC 60364-4-41:2005, 411.3.2.2 and 411.3.2.3", in.id());
+        Q time = Given.setting(t, id + "/t", "Maximum disconnection time", "t", ts, Units.S,
+                finalTime ? "IEC 60364-4-41:2005, Table 41.1 (TN, 230 V: 0.4 s)" : "IEC 60364-4-41:2005, 411.3.2.3 (TN: 5 s)");
+        String name = "disconnection";
+        String title = "Automatic disconnection: Z_s ≤ Z_s,max";
+        if (b.earthing().value() == Earthing.TT && dev.rcdResidualA() != null) {
+            Q ra = Given.input(t, id + "/RA", "Earth electrode resistance", "R_A", b.earthElectrodeOhm(), Units.OHM, "basis.earth_electrode_resistance_ohm");
+            Q idn = Given.input(t, id + "/Idn", "Rated residual operating current", "I_Δn", dev.rcdResidualA(), Units.A, c.where().path() + ".device.residual_current_a");
+            Q ul = TOUCH_VOLTAGE.eval(t, id + "/UL", "TT system, RCD", bind(RA, ra), bind(IDN, idn));
+            Q limit = Given.derived(t, id + "/UL_max", "Conventional touch-voltage limit", "U_L,max", 50, Units.V, "IEC 60364-4-41:2005, 411.5.3");
+            boolean pass = ul.value() <= 50 + 1e-12;
+            if (t.recording()) t.add(new Step.Check(id + "/check", "Fault protection by RCD: R_A · I_Δn ≤ 50 V", name, ul, "≤", limit, pass,
+                    "IEC 60364-4-41:2005, 411.5.3", List.of(ul.id(), limit.id())));
+            Q ia = RCD_TRIP.eval(t, id + "/Ia", "RCD", bind(IDN, idn));
+            return new Disconnection(new CheckResult(name, "R_A · I_Δn ≤ 50 V", pass, ul.value(), 50, Units.V, false, id + "/check"), null, ia, time, true);
+        }
+        if (b.earthing().value() == Earthing.TT) {
+            Given.note(t, id + "/tt-ocpd", "TT system without an RCD", "Fault protection by the overcurrent device: Z_s · I_a ≤ U_0 (IEC 60364-4-41:2005, 411.5.4).", "");
+        }
+        Q ia = tripCurrent(t, c, id, in);
+        if (ia == null) {
+            String missing = dev.kind() == DeviceKind.MCCB ? "device.instantaneous_a (the MCCB's instantaneous setting)"
+                    : "device.disconnection_current_a (the fuse's current for disconnection within " + NumberFormatPolicyLite.s(time.value()) + " s, from the manufacturer's curve)";
+            Given.decision(t, id + "/check", "Automatic disconnection", "the input does not give " + missing,
+                    "FAIL: disconnection cannot be shown", "IEC 60364-4-41:2005, 411.4.4");
+            return new Disconnection(CheckResult.undetermined(name, title, Units.OHM, id + "/check"), null, null, time, false);
+        }
+        Q zmax = MAX_LOOP.eval(t, id + "/Zs_max", "", bind(C_MIN, cmin), bind(U0, u0), bind(IA, ia));
+        boolean pass = zs.value() <= zmax.value() + 1e-12;
+        if (t.recording()) t.add(new Step.Check(id + "/check1", title, name, rel(zs, "Z_s"), "≤", rel(zmax, "Z_s,max"), pass,
+                "IEC 60364-4-41:2005, 411.4.4", List.of(zs.id(), zmax.id())));
+        if (!pass && dev.rcdResidualA() != null) {
+            Q idn = Given.input(t, id + "/Idn", "Rated residual operating current", "I_Δn", dev.rcdResidualA(), Units.A, c.where().path() + ".device.residual_current_a");
+            Q iaR = RCD_TRIP.eval(t, id + "/Ia_rcd", "the RCD part of the device", bind(IDN, idn));
+            Q zmaxR = MAX_LOOP.as("Z_s,max(RCD)").eval(t, id + "/Zs_max_rcd", "RCD", bind(C_MIN, cmin), bind(U0, u0), bind(IA, iaR));
+            boolean passR = zs.value() <= zmaxR.value() + 1e-12;
+            if (t.recording()) t.add(new Step.Check(id + "/check2", "Automatic disconnection by the RCD: Z_s ≤ Z_s,max(RCD)", name, rel(zs, "Z_s"), "≤",
+                    zmaxR, passR, "IEC 60364-4-41:2005, 411.4.5", List.of(zs.id(), zmaxR.id())));
+            return new Disconnection(new CheckResult(name, title, passR, zs.value(), zmaxR.value(), Units.OHM, false, id + "/check2"),
+                    zmaxR, iaR, time, true);
+        }
+        return new Disconnection(new CheckResult(name, title, pass, zs.value(), zmax.value(), Units.OHM, false, id + "/check1"),
+                zmax, ia, time, true);
+    }
+
+    /** The current that operates the device within the required time, or null where the input lacks it. */
+    private Q tripCurrent(Trace t, Circuit c, String id, Q in) {
+        Device dev = c.device();
+        if (dev.disconnectionCurrentA() != null) {
+            return Given.input(t, id + "/Ia", "Current that operates the device within the time (manufacturer's curve)", "I_a",
+                    dev.disconnectionCurrentA(), Units.A, c.where().path() + ".device.disconnection_current_a");
+        }
+        switch (dev.kind()) {
+            case MCB:
+            case RCBO: {
+                double m = dev.curve() == Curve.B ? 5 : dev.curve() == Curve.C ? 10 : 20;
+                Q mq = Given.derived(t, id + "/m", "Instantaneous tripping multiple, type " + dev.curve().token(), "m", m, Units.NONE,
+                        "IEC 60898-1:2015, Table 7 (upper limit: B 5 I_n, C 10 I_n, D 20 I_n), from memory");
+                return TRIP_MULTIPLE.eval(t, id + "/Ia", "type " + dev.curve().token(), bind(MULT, mq), bind(IN, in));
+            }
+            case MCCB: {
+                if (dev.instantaneousA() == null) return null;
+                Q ii = Given.input(t, id + "/Ii", "Instantaneous trip setting", "I_i", dev.instantaneousA(), Units.A, c.where().path() + ".device.instantaneous_a");
+                return MCCB_TRIP.eval(t, id + "/Ia", "MCCB", bind(I_INST, ii));
+            }
+            default:
+                return null;
+        }
+    }
+
+    private CheckResult adiabatic(Trace t, Circuit c, String id, String name, String title, Q prospectiveKa, Q currentA,
+                                  Disconnection d, Q in, double size, Q thetaMax, boolean protective) {
+        Cable cable = c.cable();
+        Device dev = c.device();
+        Q current = currentA != null ? currentA
+                : rel(A_FROM_KA.eval(t, id + "/I", "", bind(IK_KA, prospectiveKa)), "I_k");
+        Q i2t;
+        if (dev.letThroughA2s() != null) {
+            i2t = Given.input(t, id + "/I2t", "Let-through energy of the device", "I²t", dev.letThroughA2s(), "A²s", c.where().path() + ".device.let_through_a2s");
+        } else {
+            boolean instantaneous = d.ia() != null && current.value() >= d.ia().value() - 1e-9;
+            Step.Lookup class3 = (dev.kind() == DeviceKind.MCB || dev.kind() == DeviceKind.RCBO) && instantaneous
+                    ? faults.classThreeLetThrough(id + "/I2t", dev.curve(), in.value(), current.value() / 1000) : null;
+            if (class3 != null) {
+                i2t = Given.lookupUsing(t, class3, List.of(current.id()));
+                Given.note(t, id + "/class3", "Energy-limiting class", "The circuit-breaker is taken as energy-limiting class 3, the usual class of modern MCBs; confirm with the manufacturer.", "");
+            } else if (dev.kind() == DeviceKind.FUSE && !protective) {
+                Given.decision(t, id + "/check", title, "the input gives no let_through_a2s for the fuse",
+                        "FAIL: the let-through energy cannot be shown (give device.let_through_a2s from the manufacturer's data)", "IEC 60364-4-43:2008, 434.5.2");
+                return CheckResult.undetermined(name, title, Units.MM2, id + "/check");
+            } else if (d.ia() == null) {
+                Given.decision(t, id + "/check", title, "the operating current of the device is not known", "FAIL: cannot be shown", "IEC 60364-4-43:2008, 434.5.2");
+                return CheckResult.undetermined(name, title, Units.MM2, id + "/check");
+            } else {
+                Q time = instantaneous
+                        ? Given.derived(t, id + "/t", "Operating time", "t", 0.1, Units.S, T_INSTANT)
+                        : Given.alias(d.time().id(), "t", d.time());
+                if (!instantaneous) {
+                    Given.decision(t, id + "/t-basis", "Operating time", "I = " + NumberFormatPolicyLite.a(current.value()) + " A is below I_a = "
+                            + NumberFormatPolicyLite.a(d.ia().value()) + " A", "the device is taken to operate within the required time t", "IEC 60364-4-43:2008, 434.5.2");
+                }
+                i2t = ENERGY.eval(t, id + "/I2t", instantaneous ? "instantaneous region" : "within the required time",
+                        bind(I, rel(current, "I")), bind(T, time));
+            }
+        }
+        Q k = kFactor(t, id, cable, thetaMax, protective);
+        Q smin = MIN_SIZE.as(protective ? "S_PE,min" : "S_min").eval(t, id + "/Smin", "", bind(I2T, rel(i2t, "I²t")), bind(KF, k));
+        Q installed = Given.derived(t, id + "/S", protective ? "Protective conductor installed" : "Line conductor installed",
+                protective ? "S_PE" : "S", size * cable.parallel(), Units.MM2,
+                "design input" + (cable.parallel() > 1 ? " (" + cable.parallel() + " conductors in parallel share the fault current)" : ""));
+        boolean pass = installed.value() >= smin.value() - 1e-12;
+        if (t.recording()) t.add(new Step.Check(id + "/check", title, name, installed, "≥", smin, pass,
+                "IEC 60364-4-43:2008, 434.5.2" + (protective ? "; IEC 60364-5-54:2011, 543.1.2" : ""), List.of(installed.id(), smin.id())));
+        return new CheckResult(name, title, pass, installed.value(), smin.value(), Units.MM2, true, id + "/check");
+    }
+
+    private Q kFactor(Trace t, String id, Cable cable, Q thetaMax, boolean protective) {
+        Q kc = Given.lookup(t, faults.materialConstant(id + "/K", cable.conductor()));
+        Q beta = Given.lookup(t, faults.beta(id + "/beta", cable.conductor()));
+        Q thetaF = Given.lookup(t, faults.finalTemperature(id + "/theta_f", cable.insulation()));
+        Q thetaI;
+        if (protective && cable.type() == CableType.SINGLE_CORE) {
+            thetaI = Given.lookup(t, faults.separateInitialTemperature(id + "/theta_i", cable.insulation()));
+            Given.decision(t, id + "/cpc-kind", "Kind of protective conductor", "single-core cables: the protective conductor is a separate insulated conductor",
+                    "initial temperature 30 °C (Table A.54.2)", "IEC 60364-5-54:2011, Table A.54.2", thetaI.id());
+        } else {
+            thetaI = rel(thetaMax, "θ_i");
+            Given.decision(t, id + "/theta-i", "Initial conductor temperature", protective ? "the protective conductor is a core of the cable or in its sheath"
+                    : "the line conductor starts at its maximum operating temperature", "θ_i = θ_max", "IEC 60364-5-54:2011, Tables A.54.3 and A.54.4", thetaMax.id());
+        }
+        return K_FACTOR.eval(t, id + "/k", "", bind(K, kc), bind(BETA, beta), bind(THETA_F, thetaF), bind(THETA_I, thetaI));
+    }
+
+    private CheckResult breaking(Trace t, Circuit c, String id, Q prospective) {
+        String title = "Breaking capacity ≥ prospective fault current";
+        if (c.device().breakingCapacityKa() == null) {
+            Given.decision(t, id + "/check", title, "the input gives no breaking_capacity_ka for the device",
+                    "FAIL: the device cannot be shown to break " + NumberFormatPolicyLite.ka(prospective.value()) + " kA", "IEC 60364-4-43:2008, 434.5.1");
+            return CheckResult.undetermined("breaking-capacity", title, Units.KA, id + "/check");
+        }
+        Q icu = Given.input(t, id + "/Icu", "Rated breaking capacity of the device", "I_cu", c.device().breakingCapacityKa(), Units.KA,
+                c.where().path() + ".device.breaking_capacity_ka");
+        boolean pass = icu.value() >= prospective.value() - 1e-12;
+        if (t.recording()) t.add(new Step.Check(id + "/check", title, "breaking-capacity", icu, "≥", prospective, pass,
+                "IEC 60364-4-43:2008, 434.5.1", List.of(icu.id(), prospective.id())));
+        return new CheckResult("breaking-capacity", title, pass, icu.value(), prospective.value(), Units.KA, true, id + "/check");
+    }
+
+    /** Plain number text for decisions (the report's policy is not reachable from calc). */
+    static final class NumberFormatPolicyLite {
+        static String s(double v) { return Engine.trim(v); }
+        static String a(double v) { return String.format(Locale.ROOT, "%.1f", v); }
+        static String ka(double v) { return String.format(Locale.ROOT, "%.2f", v); }
+    }
+}

@@ -1,0 +1,131 @@
+package org.feedernote.formula;
+
+import static org.feedernote.expr.Expr.*;
+import static org.feedernote.formula.Sym.SQRT3;
+import static org.feedernote.formula.Sym.var;
+import static org.feedernote.formula.Units.*;
+
+import java.util.List;
+
+import org.feedernote.expr.Expr;
+import org.feedernote.expr.Var;
+
+/** Source impedance, fault currents, earth-fault loop, disconnection and adiabatic withstand. */
+public final class FaultFormulas {
+    private FaultFormulas() {}
+
+    private static final String IEC_60909 = "IEC 60909-0:2016";
+
+    public static final Var UK = var("uk", "u_k", PERCENT);
+    public static final Var U = var("U", "U", V);
+    public static final Var U0 = var("U0", "U_0", V);
+    public static final Var SR = var("S_rT", "S_rT", KVA);
+    public static final Var Z = var("Z", "Z", OHM);
+    public static final Var R = var("R", "R", OHM);
+    public static final Var X = var("X", "X", OHM);
+    public static final Var XR = var("xr", "X/R", NONE);
+    public static final Var C_MAX = var("c_max", "c_max", NONE);
+    public static final Var C_MIN = var("c_min", "c_min", NONE);
+    public static final Var IK = var("Ik", "I_k", KA);
+    public static final Var ZE = var("Ze", "Z_e", OHM);
+    public static final Var R_KM = var("R_km", "R", OHM_PER_KM);
+    public static final Var X_KM = var("X_km", "X", OHM_PER_KM);
+    public static final Var L = var("L", "L", M);
+    public static final Var R20 = var("R20", "R_20", OHM_PER_KM);
+    public static final Var ALPHA = var("alpha20", "α_20", PER_K);
+    public static final Var THETA = var("theta", "θ", DEG_C);
+    public static final Var N = var("n", "n", NONE);
+    public static final Var ZS = var("Zs", "Z_s", OHM);
+    public static final Var IA = var("Ia", "I_a", A);
+    public static final Var MULT = var("m", "m", NONE);
+    public static final Var IN = var("In", "I_n", A);
+    public static final Var I_INST = var("Ii", "I_i", A);
+    public static final Var IDN = var("Idn", "I_Δn", A);
+    public static final Var RA = var("RA", "R_A", OHM);
+    public static final Var K = var("K", "K", "A·√s/mm²");
+    public static final Var BETA = var("beta", "β", DEG_C);
+    public static final Var THETA_I = var("theta_i", "θ_i", DEG_C);
+    public static final Var THETA_F = var("theta_f", "θ_f", DEG_C);
+    public static final Var I = var("I", "I", A);
+    public static final Var T = var("t", "t", S);
+    public static final Var I2T = var("I2t", "I²t", "A²s");
+    public static final Var KF = var("k", "k", "A·√s/mm²");
+
+    public static final Formula TRANSFORMER_IMPEDANCE = new Formula("z-transformer", "Transformer impedance", "Z_T", OHM,
+            div(mul(div(v(UK), n(100)), sq(v(U))), mul(n(1000), v(SR))), IEC_60909 + ", 6.3.1, eq. (7) (S_rT in kVA)");
+
+    public static final Formula NETWORK_IMPEDANCE = new Formula("z-network", "Network impedance at the origin", "Z_Q", OHM,
+            div(mul(v(C_MAX), v(U)), mul(SQRT3, n(1000), v(IK))), IEC_60909 + ", 6.2, eq. (5) (I_k in kA)");
+
+    public static final Formula RESISTANCE_FROM_XR = new Formula("r-from-xr", "Resistance from X/R", "R", OHM,
+            div(v(Z), sqrt(add(n(1), sq(v(XR))))), "R = Z / √(1 + (X/R)²)");
+
+    public static final Formula REACTANCE_FROM_XR = new Formula("x-from-xr", "Reactance from X/R", "X", OHM,
+            mul(v(R), v(XR)), "X = R · (X/R)");
+
+    public static final Formula HALF = new Formula("half-loop", "Phase impedance from the loop impedance", "Z", OHM,
+            div(v(ZE), n(2)), "line and return path of equal impedance (common practice, no source)");
+
+    public static final Formula DOUBLE = new Formula("double-phase", "Loop impedance from the phase impedance", "Z_e", OHM,
+            mul(n(2), v(Z)), "line and return path of equal impedance (common practice, no source)");
+
+    public static final Formula RESISTANCE_AT = new Formula("r-at-theta", "Resistance at temperature", "R", OHM_PER_KM,
+            mul(v(R20), add(n(1), mul(v(ALPHA), sub(v(THETA), n(20))))), "IEC 60909-0:2016, eq. (34) / IEC 60287-1-1:2006, 2.1.1");
+
+    public static final Formula LENGTH_RESISTANCE = new Formula("r-length", "Resistance of the run", "R", OHM,
+            div(mul(v(R_KM), v(L)), mul(n(1000), v(N))), "R = R′ · L / n (n conductors in parallel)");
+
+    public static final Formula LENGTH_REACTANCE = new Formula("x-length", "Reactance of the run", "X", OHM,
+            div(mul(v(X_KM), v(L)), n(1000)), "X = X′ · L (X′ per phase, parallel conductors included)");
+
+    public static final Formula LOOP_REACTANCE = new Formula("x-loop", "Reactance of the loop", "X", OHM,
+            div(mul(n(2), v(X_KM), v(L)), n(1000)), "outgoing and return conductor of the same geometry (common practice, no source)");
+
+    public static final Formula MAGNITUDE = new Formula("z-magnitude", "Impedance magnitude", "|Z|", OHM,
+            sqrt(add(sq(v(R)), sq(v(X)))), "|Z| = √(R² + X²)");
+
+    public static final Formula THREE_PHASE_FAULT = new Formula("ik3", "Maximum three-phase fault current", "I_k3", KA,
+            div(mul(v(C_MAX), v(U)), mul(SQRT3, v(Z), n(1000))), IEC_60909 + ", 7.1.1, eq. (29)");
+
+    public static final Formula SINGLE_PHASE_FAULT = new Formula("ik1", "Maximum line-to-neutral fault current", "I_k1", KA,
+            div(mul(v(C_MAX), v(U0)), mul(v(Z), n(1000))), IEC_60909 + ", c_max · U_0 / |Z_loop| (line-to-neutral loop)");
+
+    public static final Formula MIN_EARTH_FAULT = new Formula("ief-min", "Minimum earth-fault current", "I_ef", A,
+            div(mul(v(C_MIN), v(U0)), v(ZS)), IEC_60909 + ", c_min · U_0 / |Z_s| with conductors at the end-of-fault temperature");
+
+    public static final Formula MAX_LOOP = new Formula("zs-max", "Maximum earth-fault loop impedance", "Z_s,max", OHM,
+            div(mul(v(C_MIN), v(U0)), v(IA)), "IEC 60364-4-41:2005, 411.4.4 (Z_s · I_a ≤ U_0), with c_min = 0.95 as BS 7671:2018, Appendix 3");
+
+    public static final Formula TRIP_MULTIPLE = new Formula("ia-multiple", "Current that operates the device within the time", "I_a", A,
+            mul(v(MULT), v(IN)), "IEC 60898-1:2015, Table 7 (upper limit of the instantaneous tripping range)");
+
+    public static final Formula MCCB_TRIP = new Formula("ia-mccb", "Current that operates the device within the time", "I_a", A,
+            mul(new Expr.Num(1.2, "1.2"), v(I_INST)), "IEC 60947-2:2016, 8.3.3.1.2 (instantaneous setting, tolerance +20 %)");
+
+    public static final Formula RCD_TRIP = new Formula("ia-rcd", "Current that operates the RCD within 40 ms", "I_a", A,
+            mul(n(5), v(IDN)), "IEC 61008-1 / IEC 61009-1 (operation at 5 I_Δn)");
+
+    public static final Formula TOUCH_VOLTAGE = new Formula("tt-touch", "Touch voltage at the rated residual current", "U_L", V,
+            mul(v(RA), v(IDN)), "IEC 60364-4-41:2005, 411.5.3 (R_A · I_Δn ≤ 50 V)");
+
+    public static final Formula K_FACTOR = new Formula("k-factor", "Adiabatic factor", "k", "A·√s/mm²",
+            mul(v(K), sqrt(ln(add(n(1), div(sub(v(THETA_F), v(THETA_I)), add(v(BETA), v(THETA_I))))))),
+            "IEC 60364-5-54:2011, Annex A, formula (A.1)");
+
+    public static final Formula ENERGY = new Formula("i2t", "Let-through energy (operation within t)", "I²t", "A²s",
+            mul(sq(v(I)), v(T)), "IEC 60364-4-43:2008, 434.5.2 (I²t with t the operating time)");
+
+    public static final Formula MIN_SIZE = new Formula("s-min", "Minimum cross-section for the let-through energy", "S_min", MM2,
+            div(sqrt(v(I2T)), v(KF)), "IEC 60364-4-43:2008, 434.5.2 and IEC 60364-5-54:2011, 543.1.2 (S ≥ √(I²t) / k)");
+
+    public static final Var IK_KA = var("Ik_kA", "I_k", KA);
+
+    public static final Formula A_FROM_KA = new Formula("a-from-ka", "Fault current in A", "I", A, mul(n(1000), v(IK_KA)), "1 kA = 1000 A");
+
+    /** A sum of n impedance components along a path. */
+    public static Formula sum(String title, String symbol, List<Var> terms) {
+        Expr e = v(terms.get(0));
+        for (int i = 1; i < terms.size(); i++) e = add(e, v(terms.get(i)));
+        return new Formula("impedance-sum", title, symbol, OHM, e, "impedances in series add (R and X separately)");
+    }
+}
