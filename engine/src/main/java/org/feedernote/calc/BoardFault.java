@@ -3,9 +3,10 @@ package org.feedernote.calc;
 import org.feedernote.trace.Q;
 
 /**
- * The fault path from the source to a board, as series resistance and reactance: the phase path
- * at 20 °C (maximum three-phase fault), the line-neutral loop at 20 °C (maximum single-phase
- * fault), the line-protective-conductor loop at the maximum operating temperature (Ze) and at the
- * end-of-fault temperature (minimum earth fault); and the results at the board.
+ * The fault path from the source to a board. The phase path at 20 °C and the line-neutral loop at
+ * 20 °C are kept as resistance and reactance and added as complex quantities (maximum fault
+ * currents). The earth-fault loop impedance Ze is kept as a magnitude and cable loops are added to
+ * it arithmetically, Zs = Ze + Z_loop, as the hand method does and on the safe side; zeF is the
+ * same at the end-of-fault temperature (minimum earth fault).
  */
-public record BoardFault(Q r3, Q x3, Q rN, Q xN, Q rE, Q xE, Q rF, Q xF, Q ik3, Q ik1, Q ze) {}
+public record BoardFault(Q r3, Q x3, Q rN, Q xN, Q ze, Q zeF, Q ik3, Q ik1) {}

@@ -50,6 +50,14 @@ final class FaultPath {
     }
 
     private Q series(Trace t, String id, String title, String symbol, Q... terms) {
+        return add(t, id, title, symbol, false, terms);
+    }
+
+    private Q loop(Trace t, String id, String title, String symbol, Q... terms) {
+        return add(t, id, title, symbol, true, terms);
+    }
+
+    private Q add(Trace t, String id, String title, String symbol, boolean magnitudes, Q... terms) {
         List<Var> vars = new ArrayList<>();
         List<Step.Binding> b = new ArrayList<>();
         for (int i = 0; i < terms.length; i++) {
@@ -57,7 +65,7 @@ final class FaultPath {
             vars.add(v);
             b.add(bind(v, terms[i]));
         }
-        return sum(title, symbol, vars).eval(t, id, "", b.toArray(new Step.Binding[0]));
+        return (magnitudes ? arithmeticSum(title, symbol, vars) : sum(title, symbol, vars)).eval(t, id, "", b.toArray(new Step.Binding[0]));
     }
 
     private Q magnitude(Trace t, String id, String symbol, Q r, Q x) {
@@ -75,8 +83,7 @@ final class FaultPath {
         String id = "fault/origin";
         Q r;
         Q x;
-        Q rLoop;
-        Q xLoop;
+        Q ze;
         Supply.Source src = inst.supply().source();
         if (src instanceof Supply.Transformer tr) {
             Q uk = Given.input(t, id + "/uk", "Transformer short-circuit impedance", "u_k", tr.impedancePercent(), Units.PERCENT,
@@ -89,14 +96,12 @@ final class FaultPath {
             x = REACTANCE_FROM_XR.as("X_T").eval(t, id + "/X_T", "", bind(R, r), bind(XR, xr));
             Given.decision(t, id + "/loop", "Loop impedance of the source", "a transformer at the origin (upstream network taken as infinite; Dyn vector group, Z_0 ≈ Z_1)",
                     "the line-neutral and line-earth loops at the origin have the impedance Z_T", "IEC 60909-0:2016, 6.3", z.id());
-            rLoop = r;
-            xLoop = x;
+            ze = rel(z, "Z_e");
         } else {
             Supply.Utility ut = (Supply.Utility) src;
             Q xr = Given.setting(t, id + "/xr", "X/R of the network", "X/R", new Setting<>(ut.xrRatio() == null ? 1.0 : ut.xrRatio(),
                     ut.xrRatio() != null, "supply.source.utility.x_r_ratio"), Units.NONE, "assumption of this program: 1 (common practice, no source)");
             Q zq;
-            Q ze;
             if (ut.faultLevelKa() != null) {
                 Q ik = Given.input(t, id + "/Ik", "Prospective fault current at the origin", "I_k", ut.faultLevelKa(), Units.KA,
                         "supply.source.utility.fault_level_ka");
@@ -113,19 +118,24 @@ final class FaultPath {
             if (zq == null) zq = HALF.as("Z_Q").eval(t, id + "/Z_Q", "no fault level given", bind(ZE, ze));
             r = RESISTANCE_FROM_XR.as("R_Q").eval(t, id + "/R_Q", "", bind(Z, zq), bind(XR, xr));
             x = REACTANCE_FROM_XR.as("X_Q").eval(t, id + "/X_Q", "", bind(R, r), bind(XR, xr));
-            rLoop = RESISTANCE_FROM_XR.as("R_e").eval(t, id + "/R_e", "", bind(Z, ze), bind(XR, xr));
-            xLoop = REACTANCE_FROM_XR.as("X_e").eval(t, id + "/X_e", "", bind(R, rLoop), bind(XR, xr));
         }
-        return atBoard(t, id, board, r, x, rLoop, xLoop, rLoop, xLoop, rLoop, xLoop);
+        Q rN = r;
+        Q xN = x;
+        if (!(src instanceof Supply.Transformer)) {
+            Q zqLoop = DOUBLE.as("Z_QN").eval(t, id + "/Z_QN", "line-neutral loop of the network", bind(Z, rel(magnitude(t, id + "/ZQ_mag", "Z_Q", r, x), "Z")));
+            Q xr = rel(new Q(id + "/xr", "X/R", x.value() / r.value(), Units.NONE), "X/R");
+            rN = RESISTANCE_FROM_XR.as("R_QN").eval(t, id + "/R_QN", "", bind(Z, rel(zqLoop, "Z")), bind(XR, xr));
+            xN = REACTANCE_FROM_XR.as("X_QN").eval(t, id + "/X_QN", "", bind(R, rN), bind(XR, xr));
+        }
+        return atBoard(t, id, board, r, x, rN, xN, ze, ze);
     }
 
-    private BoardFault atBoard(Trace t, String id, String board, Q r3, Q x3, Q rN, Q xN, Q rE, Q xE, Q rF, Q xF) {
+    private BoardFault atBoard(Trace t, String id, String board, Q r3, Q x3, Q rN, Q xN, Q ze, Q zeF) {
         Q z3 = magnitude(t, id + "/Z3", "|Z_3|", rel(r3, "R"), rel(x3, "X"));
         Q ik3 = THREE_PHASE_FAULT.as("I_k3(" + board + ")").eval(t, id + "/Ik3", "at board " + board, bind(C_MAX, cmax), bind(U, u), bind(Z, rel(z3, "Z")));
         Q zn = magnitude(t, id + "/ZN", "|Z_N|", rel(rN, "R"), rel(xN, "X"));
         Q ik1 = SINGLE_PHASE_FAULT.as("I_k1(" + board + ")").eval(t, id + "/Ik1", "at board " + board, bind(C_MAX, cmax), bind(U0, u0), bind(Z, rel(zn, "Z")));
-        Q ze = magnitude(t, id + "/Ze_mag", "Z_e(" + board + ")", rel(rE, "R"), rel(xE, "X"));
-        return new BoardFault(r3, x3, rN, xN, rE, xE, rF, xF, ik3, ik1, ze);
+        return new BoardFault(r3, x3, rN, xN, rel(ze, "Z_e(" + board + ")"), rel(zeF, "Z_ef(" + board + ")"), ik3, ik1);
     }
 
     /** A board's rated short-circuit withstand against the fault level, where a rating is given. */
@@ -164,12 +174,12 @@ final class FaultPath {
         Q r1f = LENGTH_RESISTANCE.as("R_1f").eval(t, id + "/R1f", "at θ_f", bind(R_KM, rel(r1kmF, "R")), bind(L, length), bind(N, n));
         Q r2f = LENGTH_RESISTANCE.as("R_2f").eval(t, id + "/R2f", "at θ_f", bind(R_KM, rel(r2kmF, "R")), bind(L, length), bind(N, n));
 
-        Q rE = series(t, id + "/RE", "Loop resistance to the far end, at θ_max", "R_s", rel(at.rE(), "R_e"), r1, r2);
-        Q xE = series(t, id + "/XE", "Loop reactance to the far end", "X_s", rel(at.xE(), "X_e"), xLoop);
-        Q zs = magnitude(t, id + "/Zs", "Z_s", rE, xE);
-        Q rF = series(t, id + "/RF", "Loop resistance to the far end, at θ_f", "R_sf", rel(at.rF(), "R_ef"), r1f, r2f);
-        Q xF = series(t, id + "/XF", "Loop reactance to the far end, at θ_f", "X_sf", rel(at.xF(), "X_ef"), xLoop);
-        Q zsf = magnitude(t, id + "/Zsf", "Z_sf", rF, xF);
+        Q r12 = series(t, id + "/R12", "Resistance of the loop, at θ_max", "R_1 + R_2", r1, r2);
+        Q zLoop = magnitude(t, id + "/Zloop", "Z_loop", rel(r12, "R"), rel(xLoop, "X"));
+        Q zs = loop(t, id + "/Zs", "Earth-fault loop impedance at the far end", "Z_s", rel(at.ze(), "Z_e"), zLoop);
+        Q r12f = series(t, id + "/R12f", "Resistance of the loop, at θ_f", "R_1f + R_2f", r1f, r2f);
+        Q zLoopF = magnitude(t, id + "/Zloopf", "Z_loop,f", rel(r12f, "R"), rel(xLoop, "X"));
+        Q zsf = loop(t, id + "/Zsf", "Earth-fault loop impedance at the far end, at θ_f", "Z_sf", rel(at.zeF(), "Z_ef"), zLoopF);
         Q ief = MIN_EARTH_FAULT.as("I_ef,min").eval(t, id + "/Ief", "far end", bind(C_MIN, cmin), bind(U0, u0), bind(ZS, rel(zsf, "Z_s")));
 
         List<CheckResult> checks = new ArrayList<>();
@@ -191,7 +201,7 @@ final class FaultPath {
             Q rN = series(bt, bid + "/RN", "Line-neutral loop resistance to board " + c.to() + ", 20 °C", "R_N",
                     rel(at.rN(), "R_N(" + c.from() + ")"), rel(r1_20, "R_1,20"), rel(r1_20, "R_neutral,20"));
             Q xN = series(bt, bid + "/XN", "Line-neutral loop reactance to board " + c.to(), "X_N", rel(at.xN(), "X_N(" + c.from() + ")"), xLoop);
-            downstream = atBoard(bt, bid, c.to(), r3, x3, rN, xN, rE, xE, rF, xF);
+            downstream = atBoard(bt, bid, c.to(), r3, x3, rN, xN, zs, zsf);
         }
         return new FaultPath.CircuitFault(prospective, zs, d.zsMax(), ief, checks, downstream, List.of());
     }

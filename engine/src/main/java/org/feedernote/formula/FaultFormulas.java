@@ -122,6 +122,14 @@ public final class FaultFormulas {
 
     public static final Formula A_FROM_KA = new Formula("a-from-ka", "Fault current in A", "I", A, mul(n(1000), v(IK_KA)), "1 kA = 1000 A");
 
+    /** Magnitudes added arithmetically, Z_s = Z_e + Z_loop: the hand method, never below the phasor sum. */
+    public static Formula arithmeticSum(String title, String symbol, List<Var> terms) {
+        Expr e = v(terms.get(0));
+        for (int i = 1; i < terms.size(); i++) e = add(e, v(terms.get(i)));
+        return new Formula("loop-sum", title, symbol, OHM, e,
+                "IEC 60364-4-41:2005, 411.4.4 (Z_s = Z_e + Z_loop), magnitudes added arithmetically (on the safe side)");
+    }
+
     /** A sum of n impedance components along a path. */
     public static Formula sum(String title, String symbol, List<Var> terms) {
         Expr e = v(terms.get(0));
