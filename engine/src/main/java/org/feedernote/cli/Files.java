@@ -1,6 +1,7 @@
 package org.feedernote.cli;
 
 import java.io.IOException;
+import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Path;
@@ -10,16 +11,27 @@ import java.nio.file.StandardCopyOption;
 final class Files {
     private Files() {}
 
+    /** Something that writes a file's content. */
+    interface Content {
+        void writeTo(OutputStream out) throws IOException;
+    }
+
     static void writeAtomically(Path target, String text) throws IOException {
         writeAtomically(target, text.getBytes(StandardCharsets.UTF_8));
     }
 
     static void writeAtomically(Path target, byte[] bytes) throws IOException {
+        writeAtomically(target, out -> out.write(bytes));
+    }
+
+    static void writeAtomically(Path target, Content content) throws IOException {
         Path dir = target.toAbsolutePath().getParent();
         java.nio.file.Files.createDirectories(dir);
         Path tmp = java.nio.file.Files.createTempFile(dir, "." + target.getFileName(), ".part");
         try {
-            java.nio.file.Files.write(tmp, bytes);
+            try (OutputStream out = java.nio.file.Files.newOutputStream(tmp)) {
+                content.writeTo(out);
+            }
             try {
                 java.nio.file.Files.setPosixFilePermissions(tmp, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
             } catch (UnsupportedOperationException notPosix) {

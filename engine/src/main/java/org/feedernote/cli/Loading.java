@@ -31,6 +31,26 @@ final class Loading {
         }
     }
 
+    /** A design input, or the input embedded in a note (PDF); null after the errors were printed. */
+    static Installation loadAny(Path file, PrintWriter err) {
+        try {
+            if (Files.isRegularFile(file) && org.feedernote.archive.NoteArchive.looksLikePdf(file)) {
+                org.feedernote.archive.NoteArchive note = org.feedernote.archive.NoteArchive.read(file);
+                return InputReader.parse(file + " (embedded input)", note.canonicalInput(), true);
+            }
+        } catch (org.feedernote.archive.NoteArchive.NotANote e) {
+            err.println("feedernote: " + e.getMessage());
+            return null;
+        } catch (InputException e) {
+            for (InputError error : e.errors()) err.println(error.text());
+            return null;
+        } catch (java.io.IOException e) {
+            err.println("feedernote: " + file + ": " + e.getMessage());
+            return null;
+        }
+        return load(file, err);
+    }
+
     /** The installation, or null after the errors were printed. */
     static Installation load(Path input, PrintWriter err) {
         if (!Files.isRegularFile(input)) {

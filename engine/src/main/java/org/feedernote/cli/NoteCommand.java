@@ -13,7 +13,7 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
-import org.feedernote.Version;
+import org.feedernote.archive.Revisions;
 import org.feedernote.calc.CircuitResult;
 import org.feedernote.calc.Engine;
 import org.feedernote.calc.Result;
@@ -43,6 +43,20 @@ final class NoteCommand implements Callable<Integer> {
     @Option(names = "--templates", paramLabel = "DIR", description = "a folder with a copy of the note templates (note.ftlh, steps.ftlh, note.css) to use instead of the packaged ones")
     Path templates;
 
+    @Option(names = "--force", description = "replace an existing note that holds a different calculation")
+    boolean force;
+
+    @Option(names = "--previous", paramLabel = "OLD", description = "an earlier revision (input or note): the note gains a section listing the changes since it")
+    Path previous;
+
+    static String existingFingerprint(Path pdf) {
+        try {
+            return org.feedernote.archive.NoteArchive.read(pdf).fingerprint();
+        } catch (org.feedernote.archive.NoteArchive.NotANote e) {
+            return null;
+        }
+    }
+
     @Override public Integer call() throws IOException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
@@ -68,19 +82,34 @@ final class NoteCommand implements Callable<Integer> {
             err.println("A failing design is never issued. Correct the design, or set status to draft or for-review.");
             return ExitStatus.FAIL;
         }
-        String engine = Version.engine();
-        String fingerprint = Canonical.fingerprint(inst.canonicalJson(), engine, data.version());
         String base = safe(inst.project().reference()) + "-" + safe(inst.project().revision());
         Path pdf = output.resolve(base + ".pdf");
         Path traceFile = output.resolve(base + ".trace.json");
-        String trace = TraceJson.write(result.trace(), engine, data.version(), fingerprint);
-        NoteView view = NoteBuilder.build(result, data, fingerprint, engine);
-        byte[] bytes = new NoteRenderer(templates).pdf(view, inst.project().date(),
-                new NoteRenderer.Attachment("input.canonical.json", "Design input (canonical form)",
-                        inst.canonicalJson().getBytes(StandardCharsets.UTF_8)),
-                new NoteRenderer.Attachment("trace.json", "Calculation trace", trace.getBytes(StandardCharsets.UTF_8)));
-        Files.writeAtomically(pdf, bytes);
-        Files.writeAtomically(traceFile, trace);
+        String since = null;
+        java.util.List<String> changes = java.util.List.of();
+        if (previous != null) {
+            Installation old = Loading.loadAny(previous, err);
+            if (old == null) return ExitStatus.BAD_INPUT;
+            Result oldResult = Loading.calculate(old, data, err);
+            if (oldResult == null) return ExitStatus.BAD_INPUT;
+            Revisions.Report report = Revisions.compare(previous.getFileName().toString(), old, oldResult,
+                    input.getFileName().toString(), inst, result);
+            since = old.project().revision();
+            changes = report.all().stream().map(Revisions.Change::text).toList();
+        }
+        String fingerprint = NoteMaker.fingerprint(inst, data);
+        if (java.nio.file.Files.exists(pdf) && !force) {
+            String existing = existingFingerprint(pdf);
+            if (!fingerprint.equals(existing)) {
+                err.println("feedernote: " + pdf + " exists and holds a different calculation (fingerprint "
+                        + (existing == null ? "unknown" : existing.substring(0, 12)) + ", this one " + fingerprint.substring(0, 12)
+                        + "); give --force to replace it, or a new revision");
+                return ExitStatus.BAD_INPUT;
+            }
+        }
+        NoteMaker.Made made = NoteMaker.make(inst, result, data, templates, since, changes);
+        Files.writeAtomically(pdf, made.pdf());
+        Files.writeAtomically(traceFile, made.trace());
         out.println("wrote " + pdf);
         out.println("wrote " + traceFile);
         out.println(result.pass()

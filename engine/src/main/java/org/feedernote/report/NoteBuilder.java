@@ -45,6 +45,12 @@ public final class NoteBuilder {
     private NoteBuilder() {}
 
     public static NoteView build(Result result, ReferenceData data, String fingerprint, String engineVersion) {
+        return build(result, data, fingerprint, engineVersion, null, List.of());
+    }
+
+    /** @param changesSince the revision a list of changes is given against, or null for none */
+    public static NoteView build(Result result, ReferenceData data, String fingerprint, String engineVersion,
+                                 String changesSince, List<String> changes) {
         Installation inst = result.input();
         Project p = inst.project();
         int failing = result.failingChecks();
@@ -114,10 +120,10 @@ public final class NoteBuilder {
         String running = p.title() + " · " + p.reference() + " rev " + p.revision();
         return new NoteView(cover, basis(inst), standards(), CAUTIONS, assumptions(), summary, sections, docs, tableViews, others,
                 listing, fileName(inst.sourceName()), fingerprint, shortPrint, p.status() == Status.DRAFT, engineVersion,
-                data.version(), running);
+                data.version(), running, changesSince, changes);
     }
 
-    static String fileName(String path) {
+    public static String fileName(String path) {
         int slash = Math.max(path.lastIndexOf('/'), path.lastIndexOf('\\'));
         return slash < 0 ? path : path.substring(slash + 1);
     }

@@ -88,6 +88,16 @@ public final class NoteRenderer {
         ITextFontResolver fonts = renderer.getFontResolver();
         for (String f : FONTS) fonts.addFont(f, BaseFont.IDENTITY_H, BaseFont.EMBEDDED);
         renderer.setListener(new DefaultPDFCreationListener() {
+            @Override public void preOpen(ITextRenderer r) {
+                super.preOpen(r);
+                com.lowagie.text.pdf.PdfDictionary info = r.getWriter().getInfo();
+                info.put(new com.lowagie.text.pdf.PdfName("Fingerprint"), new com.lowagie.text.pdf.PdfString(note.fingerprint()));
+                info.put(new com.lowagie.text.pdf.PdfName("EngineVersion"), new com.lowagie.text.pdf.PdfString(note.engineVersion()));
+                info.put(new com.lowagie.text.pdf.PdfName("Reference"), new com.lowagie.text.pdf.PdfString(note.cover().reference(), com.lowagie.text.pdf.PdfObject.TEXT_UNICODE));
+                info.put(new com.lowagie.text.pdf.PdfName("Revision"), new com.lowagie.text.pdf.PdfString(note.cover().revision(), com.lowagie.text.pdf.PdfObject.TEXT_UNICODE));
+                info.put(new com.lowagie.text.pdf.PdfName("InputFile"), new com.lowagie.text.pdf.PdfString(note.listingName(), com.lowagie.text.pdf.PdfObject.TEXT_UNICODE));
+            }
+
             @Override public void onClose(ITextRenderer r) {
                 PdfWriter writer = r.getWriter();
                 try {

@@ -7,4 +7,5 @@ public record NoteView(CoverView cover, List<BasisRow> basis, List<String> stand
                        List<String> assumptions, List<SummaryRow> summary, List<SectionView> sections,
                        List<SourceView> documents, List<SourceView> tables, List<SourceView> otherBases,
                        List<String> listing, String listingName, String fingerprint, String fingerprintShort,
-                       boolean draft, String engineVersion, String dataVersion, String runningTitle) {}
+                       boolean draft, String engineVersion, String dataVersion, String runningTitle,
+                       String changesSince, List<String> changes) {}

@@ -1,0 +1,126 @@
+package org.feedernote.cli;
+
+import static org.junit.jupiter.api.Assertions.*;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.Map;
+
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.common.filespecification.PDComplexFileSpecification;
+import org.apache.pdfbox.pdmodel.common.filespecification.PDEmbeddedFile;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import org.feedernote.Fixtures;
+
+/** The archive: notes that verify, tampering detected, revisions compared, safe writes. */
+class ArchiveTest {
+    @TempDir static Path dir;
+    static Path note;
+
+    @BeforeAll
+    static void writeNote() {
+        CommandLineTest.Run r = CommandLineTest.run("note", Fixtures.inputs().resolve("bakery-small.yaml").toString(), "-o", dir.toString());
+        assertEquals(0, r.status(), r.err());
+        note = dir.resolve("KLB-E-CN-001-A.pdf");
+    }
+
+    @Test
+    void aFreshNoteVerifies() {
+        CommandLineTest.Run r = CommandLineTest.run("verify", note.toString());
+        assertEquals(0, r.status(), r.out() + r.err());
+        assertTrue(r.out().startsWith("verified:"), r.out());
+    }
+
+    @Test
+    void aNoteWhoseEmbeddedInputWasAlteredFails() throws Exception {
+        Path altered = dir.resolve("altered.pdf");
+        try (PDDocument doc = Loader.loadPDF(note.toFile())) {
+            Map<String, PDComplexFileSpecification> files = doc.getDocumentCatalog().getNames().getEmbeddedFiles().getNames();
+            for (PDComplexFileSpecification spec : files.values()) {
+                PDEmbeddedFile ef = spec.getEmbeddedFile();
+                String text = new String(ef.toByteArray(), StandardCharsets.UTF_8);
+                String changed = text.replace("\"length_m\":24", "\"length_m\":25").replace("length_m: 24", "length_m: 25");
+                try (var out = ef.getCOSObject().createOutputStream()) {
+                    out.write(changed.getBytes(StandardCharsets.UTF_8));
+                }
+            }
+            doc.save(altered.toFile());
+        }
+        CommandLineTest.Run r = CommandLineTest.run("verify", altered.toString());
+        assertEquals(1, r.status(), r.out() + r.err());
+        assertTrue(r.out().contains("fingerprint"), r.out());
+        assertTrue(r.out().contains("L-SHOP"), "the changed circuit is named: " + r.out());
+    }
+
+    @Test
+    void aTruncatedOrNonPdfFileExitsTwo() throws IOException {
+        Path truncated = dir.resolve("truncated.pdf");
+        byte[] bytes = java.nio.file.Files.readAllBytes(note);
+        java.nio.file.Files.write(truncated, java.util.Arrays.copyOf(bytes, bytes.length / 3));
+        CommandLineTest.Run t = CommandLineTest.run("verify", truncated.toString());
+        assertEquals(2, t.status());
+        assertTrue(t.err().contains("damaged") || t.err().contains("not a feedernote note"), t.err());
+        CommandLineTest.Run y = CommandLineTest.run("verify", Fixtures.inputs().resolve("bakery-small.yaml").toString());
+        assertEquals(2, y.status());
+        assertTrue(y.err().contains("not a PDF"), y.err());
+        assertFalse(y.err().contains("Exception"), "no stack trace");
+    }
+
+    @Test
+    void diffOfTwoRevisionsNamesWhatChanged() {
+        CommandLineTest.Run r = CommandLineTest.run("diff", Fixtures.inputs().resolve("bakery-small.yaml").toString(),
+                Fixtures.inputs().resolve("revisions/bakery-small-rev-b.yaml").toString());
+        assertEquals(1, r.status());
+        assertTrue(r.out().contains("M-PRV: circuit added"), r.out());
+        assertTrue(r.out().contains("M-OVEN: cable size: 6 mm² → 10 mm²"), r.out());
+        assertTrue(r.out().contains("L-SHOP: length_m: 24 → 38"), r.out());
+        CommandLineTest.Run same = CommandLineTest.run("diff", note.toString(), Fixtures.inputs().resolve("bakery-small.yaml").toString());
+        assertEquals(0, same.status(), "a note and its own input do not differ: " + same.out());
+        CommandLineTest.Run json = CommandLineTest.run("diff", "--json", Fixtures.inputs().resolve("bakery-small.yaml").toString(),
+                Fixtures.inputs().resolve("revisions/bakery-small-rev-b.yaml").toString());
+        assertTrue(json.out().contains("\"added\""), json.out());
+    }
+
+    @Test
+    void aNoteForADifferentCalculationIsNotOverwrittenWithoutForce() throws IOException {
+        Path other = dir.resolve("other");
+        java.nio.file.Files.createDirectories(other);
+        java.nio.file.Files.copy(note, other.resolve("KLB-E-CN-001-A.pdf"));
+        Path changed = dir.resolve("changed.yaml");
+        java.nio.file.Files.writeString(changed, java.nio.file.Files.readString(Fixtures.inputs().resolve("bakery-small.yaml"))
+                .replace("length_m: 24", "length_m: 25"));
+        CommandLineTest.Run refused = CommandLineTest.run("note", changed.toString(), "-o", other.toString());
+        assertEquals(2, refused.status());
+        assertTrue(refused.err().contains("--force"), refused.err());
+        assertEquals(0, CommandLineTest.run("note", changed.toString(), "-o", other.toString(), "--force").status());
+    }
+
+    @Test
+    void theNoteListsTheChangesSinceThePreviousRevision() throws Exception {
+        Path out = dir.resolve("rev-b");
+        CommandLineTest.Run r = CommandLineTest.run("note", Fixtures.inputs().resolve("revisions/bakery-small-rev-b.yaml").toString(),
+                "-o", out.toString(), "--previous", note.toString());
+        assertEquals(0, r.status(), r.err());
+        try (PDDocument doc = Loader.loadPDF(out.resolve("KLB-E-CN-001-B.pdf").toFile())) {
+            String text = new org.apache.pdfbox.text.PDFTextStripper().getText(doc);
+            assertTrue(text.contains("Changes since revision A"), "section present");
+            assertTrue(text.contains("M-PRV: circuit added"));
+        }
+    }
+
+    @Test
+    void aWriteThatDiesLeavesNoPartialFile(@TempDir Path target) {
+        Path file = target.resolve("note.pdf");
+        assertThrows(IOException.class, () -> Files.writeAtomically(file, out -> {
+            out.write(new byte[1000]);
+            throw new IOException("killed");
+        }));
+        assertFalse(java.nio.file.Files.exists(file));
+        assertEquals(0, target.toFile().list().length, "no temporary file is left behind");
+    }
+}
