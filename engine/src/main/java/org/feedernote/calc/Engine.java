@@ -49,8 +49,16 @@ public final class Engine {
     }
 
     public Result run(Installation inst) {
+        return run(inst, true);
+    }
+
+    /**
+     * @param record false where only the figures are wanted (the terminal summary, JSON): the
+     *               same calculation with the no-op trace, and an empty trace in the result
+     */
+    public Result run(Installation inst, boolean record) {
         TraceRecorder root = new TraceRecorder();
-        Run run = new Run(inst, root);
+        Run run = new Run(inst, root, record ? root : Trace.noop());
         run.calculate();
         return new Result(inst, run.boardResults(), run.circuitResults(), root.toSection(), NOT_YET);
     }
@@ -58,7 +66,7 @@ public final class Engine {
     /** The state of one calculation; discarded when it returns. */
     final class Run {
         final Installation inst;
-        final TraceRecorder root;
+        final Trace root;
         final Map<String, Board> boards = new LinkedHashMap<>();
         final Map<String, List<Circuit>> outgoing = new HashMap<>();
         final Map<String, Circuit> feederOf = new HashMap<>();
@@ -84,7 +92,7 @@ public final class Engine {
         final Map<String, List<CheckResult>> boardChecks = new HashMap<>();
         Trace originTrace;
 
-        Run(Installation inst, TraceRecorder root) {
+        Run(Installation inst, TraceRecorder recorder, Trace root) {
             this.inst = inst;
             this.root = root;
         }
@@ -561,6 +569,24 @@ public final class Engine {
                     c.isFeeder() ? neutral.get(c.to()) : null, in, i2, cap.it(), cap.factor(), cap.iz(), z, length, dropV, dropPct,
                     dropExactPct, cumulative, limit, dip, fault.prospective(), fault.zs(), fault.zsMax(), fault.iefMin(),
                     fault.downstream(), List.copyOf(checks), governing);
+        }
+
+        /**
+         * The capacity check alone (device and tabulated capacity), for skipping sizes quickly while
+         * sizing; the reason in words, or null when it passes.
+         */
+        String capacityShortfall(Circuit c) {
+            Trace t = Trace.noop();
+            int phases = c.isFeeder() ? 3 : c.load().phases();
+            Q ib = designCurrent.get(c.id());
+            double in = c.device().ratingA() != null ? c.device().ratingA()
+                    : capacityData.ratingAtLeast("probe", c.device().kind(), ib.value()).value();
+            Capacity cap = capacity(t, c, phases, ib);
+            double need = cap.neutralDesign() != null ? Math.max(in, cap.neutralDesign().value()) : in;
+            if (cap.iz().value() + 1e-9 < need) {
+                return String.format(Locale.ROOT, "I_z %s A < I_n %s A", trim(cap.iz().value()), trim(in));
+            }
+            return null;
         }
 
         /** The check nearest its limit; on a tie, the one listed first. */

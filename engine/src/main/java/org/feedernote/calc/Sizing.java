@@ -32,6 +32,7 @@ final class Sizing {
     private final Map<String, List<String[]>> notes = new HashMap<>();
     private final Map<String, String> decidedBy = new HashMap<>();
     private final List<String> upsized = new ArrayList<>();
+    private final Map<String, Double> firstChoice = new HashMap<>();
 
     Sizing(Engine.Run run) {
         this.run = run;
@@ -50,31 +51,88 @@ final class Sizing {
     }
 
     Map<String, Circuit> run() {
-        Map<String, CircuitResult> working = new HashMap<>();
         for (Circuit c : run.order()) {
-            Circuit chosen = auto(c) ? smallestPassingOwnChecks(c, working) : withCpc(c, c.cable().size().mm2());
+            Circuit chosen = auto(c) ? smallestPassingOwnChecks(c, results) : withCpc(c, c.cable().size().mm2());
             current.put(c.id(), chosen);
-            working.put(c.id(), run.evaluate(chosen, Trace.noop(), working));
+            results.put(c.id(), run.evaluate(chosen, Trace.noop(), results));
         }
-        for (int step = 0; step < MAX_STEPS; step++) {
-            Map<String, CircuitResult> results = evaluateAll();
-            List<CircuitResult> failing = results.values().stream()
-                    .filter(r -> !r.circuit().isFeeder() && failsDrop(r)).toList();
-            if (failing.isEmpty()) break;
-            if (!upsizeBest(failing, results)) break;
+        for (Circuit c : run.order()) {
+            List<Circuit> path = run.pathTo(c.from());
+            paths.put(c.id(), path);
+            for (Circuit f : path) descendants.computeIfAbsent(f.id(), k -> new ArrayList<>()).add(c.id());
+            ownPct.put(c.id(), governingOwn(results.get(c.id())));
+        }
+        for (Circuit c : run.order()) track(c.id());
+        for (int step = 0; step < MAX_STEPS && !failingDrop.isEmpty(); step++) {
+            if (!upsizeBest(new ArrayList<>(failingDrop))) break;
         }
         trim();
         return current;
     }
 
-    private static boolean failsDrop(CircuitResult r) {
-        return r.checks().stream().anyMatch(k -> !k.pass() && (k.name().equals("voltage-drop") || k.name().equals("motor-starting")));
+    /** Results of the sizes chosen by the first pass; motors are recalculated as their paths change. */
+    private final Map<String, CircuitResult> results = new LinkedHashMap<>();
+    /** For each feeder, the circuits below it, in calculation order. */
+    private final Map<String, List<String>> descendants = new HashMap<>();
+    /** Own voltage drop per circuit and size: it does not depend on anything upstream. */
+    private final Map<String, Map<Double, Double>> ownDrop = new HashMap<>();
+    /** The own drop of each circuit at its current size; the drop from the origin is the sum along the path. */
+    private final Map<String, Double> ownPct = new HashMap<>();
+    /** Final circuits that fail their drop or starting limit. */
+    private final java.util.Set<String> failingDrop = new java.util.LinkedHashSet<>();
+    private final Map<String, List<Circuit>> paths = new HashMap<>();
+
+    private double governingOwn(CircuitResult r) {
+        boolean exact = run.inst.basis().voltageDropMethod().value() == org.feedernote.model.DropMethod.EXACT;
+        return exact && r.dropExactPercent() != null ? r.dropExactPercent().value() : r.dropPercent().value();
     }
 
-    private Map<String, CircuitResult> evaluateAll() {
-        Map<String, CircuitResult> results = new LinkedHashMap<>();
-        for (Circuit c : run.order()) results.put(c.id(), run.evaluate(current.get(c.id()), Trace.noop(), results));
-        return results;
+    private double cumulative(String id) {
+        double sum = ownPct.get(id);
+        for (Circuit f : paths.get(id)) sum += ownPct.get(f.id());
+        return sum;
+    }
+
+    private boolean motorStartingFails(String id) {
+        CheckResult st = results.get(id).check("motor-starting");
+        return st != null && !st.pass();
+    }
+
+    /** Whether a final circuit fails its drop or starting limit with the current sizes. */
+    private void track(String id) {
+        CircuitResult r = results.get(id);
+        if (r.circuit().isFeeder()) return;
+        boolean fails = cumulative(id) > r.limitPercent().value() + 1e-9 || motorStartingFails(id);
+        if (fails) failingDrop.add(id);
+        else failingDrop.remove(id);
+    }
+
+    /** After a size change: the motors whose starting dip depends on it are recalculated, the drops re-summed. */
+    private void changed(String id) {
+        List<String> affected = new ArrayList<>();
+        affected.add(id);
+        affected.addAll(descendants.getOrDefault(id, List.of()));
+        for (String a : affected) {
+            Circuit c = current.get(a);
+            if (!c.isFeeder() && c.load().startingCurrentMultiple() != null) {
+                results.put(a, run.evaluate(c, Trace.noop(), results));
+            }
+            track(a);
+        }
+    }
+
+    private double ownDropAt(Circuit k, double size) {
+        return ownDrop.computeIfAbsent(k.id(), key -> new HashMap<>()).computeIfAbsent(size, sz -> {
+            Circuit candidate = withCpc(run.original(k.id()), sz);
+            return governingOwn(run.evaluate(candidate, Trace.noop(), results));
+        });
+    }
+
+    private final Map<String, List<Double>> coveredSizes = new HashMap<>();
+
+    /** The standard sizes the tables cover for this circuit's cable and method, ascending. */
+    private List<Double> sizesFor(Circuit c) {
+        return coveredSizes.computeIfAbsent(c.id(), k -> sizes.stream().filter(s -> covered(c, s)).toList());
     }
 
     private boolean covered(Circuit c, double size) {
@@ -89,9 +147,18 @@ final class Sizing {
         for (double size : sizes) {
             if (!covered(c, size)) continue;
             Circuit candidate = withCpc(c, size);
+            String quick = run.capacityShortfall(candidate);
+            if (quick != null && size < sizes.get(sizes.size() - 1)) {
+                note(c.id(), "Size rejected", mm2(size), "rejected: " + quick);
+                lastReason = quick;
+                lastReasonCheck = "capacity";
+                last = candidate;
+                continue;
+            }
             CircuitResult r = run.evaluate(candidate, Trace.noop(), working);
             String reason = ownFailure(r);
             if (reason == null) {
+                firstChoice.put(c.id(), size);
                 if (lastReason != null) decidedBy.put(c.id(), lastReasonCheck);
                 note(c.id(), "Size chosen", "the smallest standard size that passes the capacity, overload, disconnection and withstand checks",
                         mm2(size));
@@ -158,14 +225,14 @@ final class Sizing {
 
     private Double nextSize(Circuit c) {
         double now = c.cable().size().mm2();
-        for (double s : sizes) if (s > now + 1e-9 && covered(c, s)) return s;
+        for (double s : sizesFor(c)) if (s > now + 1e-9) return s;
         return null;
     }
 
     private Double previousSize(Circuit c) {
         double now = c.cable().size().mm2();
         Double prev = null;
-        for (double s : sizes) if (s < now - 1e-9 && covered(c, s)) prev = s;
+        for (double s : sizesFor(c)) if (s < now - 1e-9) prev = s;
         return prev;
     }
 
@@ -176,78 +243,99 @@ final class Sizing {
         return 2;
     }
 
-    private boolean upsizeBest(List<CircuitResult> failing, Map<String, CircuitResult> results) {
-        Map<String, List<String>> helps = new LinkedHashMap<>();
+    private boolean upsizeBest(List<String> failingIds) {
+        List<CircuitResult> failing = failingIds.stream().map(results::get).toList();
+        Map<String, Integer> helps = new LinkedHashMap<>();
         for (CircuitResult load : failing) {
-            List<Circuit> path = new ArrayList<>(run.pathTo(load.circuit().from()));
-            path.add(current.get(load.id()));
-            for (Circuit k : path) {
-                Circuit orig = run.original(k.id());
-                if (auto(orig) && nextSize(current.get(k.id())) != null) helps.computeIfAbsent(k.id(), x -> new ArrayList<>()).add(load.id());
+            for (Circuit k : paths.get(load.id())) {
+                if (auto(run.original(k.id())) && nextSize(current.get(k.id())) != null) helps.merge(k.id(), 1, Integer::sum);
             }
+            Circuit own = current.get(load.id());
+            if (auto(run.original(own.id())) && nextSize(own) != null) helps.merge(own.id(), 1, Integer::sum);
         }
-        String best = null;
-        double bestRatio = -1;
-        double bestGain = 0;
-        double bestCost = 0;
-        StringBuilder others = new StringBuilder();
+        record Candidate(String id, double from, double to, double gain, double cost) {
+            double ratio() { return cost > 0 ? gain / cost : 0; }
+        }
+        List<Candidate> candidates = new ArrayList<>();
         for (var e : helps.entrySet()) {
             Circuit k = current.get(e.getKey());
+            double now = k.cable().size().mm2();
             double next = nextSize(k);
-            Circuit up = withCpc(run.original(k.id()), next);
-            CircuitResult now = results.get(k.id());
-            CircuitResult after = run.evaluate(up, Trace.noop(), results);
-            double gain = (now.dropPercent().value() - after.dropPercent().value()) * e.getValue().size();
-            double cost = (next - k.cable().size().mm2()) * k.lengthM() * k.cable().parallel() * conductors(k) / 1000.0;
-            double ratio = cost > 0 ? gain / cost : 0;
-            if (others.length() > 0) others.append("; ");
-            others.append(String.format(Locale.ROOT, "%s %s → %s: %.3f %%·load per %.3f dm³", k.id(), mm2(k.cable().size().mm2()),
-                    mm2(next), gain, cost));
-            if (ratio > bestRatio + 1e-15) {
-                bestRatio = ratio;
-                best = k.id();
-                bestGain = gain;
-                bestCost = cost;
-            }
+            double gain = (ownPct.get(k.id()) - ownDropAt(k, next)) * e.getValue();
+            double cost = (next - now) * k.lengthM() * k.cable().parallel() * conductors(k) / 1000.0;
+            candidates.add(new Candidate(k.id(), now, next, gain, cost));
         }
-        if (best == null || bestGain <= 0) {
+        candidates.sort((a, b) -> Double.compare(b.ratio(), a.ratio()));
+        if (candidates.isEmpty() || candidates.get(0).gain() <= 0) {
             for (CircuitResult load : failing) {
+                if (notes.getOrDefault(load.id(), List.of()).stream().anyMatch(n -> n[0].equals("Voltage drop cannot be met"))) continue;
                 note(load.id(), "Voltage drop cannot be met", "no auto-sized circuit on the path of " + load.id() + " can be enlarged further",
                         "the circuit fails its drop limit");
             }
             return false;
         }
-        Circuit k = current.get(best);
-        double next = nextSize(k);
-        String failingIds = failing.stream().map(CircuitResult::id).reduce((a, b) -> a + ", " + b).orElse("");
-        note(best, "Enlarged for the cumulative voltage drop", "the drop limit fails at " + failingIds + "; candidates: " + others,
+        Candidate best = candidates.get(0);
+        StringBuilder others = new StringBuilder();
+        for (Candidate c : candidates.subList(0, Math.min(3, candidates.size()))) {
+            if (others.length() > 0) others.append("; ");
+            others.append(String.format(Locale.ROOT, "%s %s → %s: %.3f %%·load per %.3f dm³", c.id(), mm2(c.from()), mm2(c.to()), c.gain(), c.cost()));
+        }
+        String failingList = failing.stream().limit(5).map(CircuitResult::id).reduce((a, b) -> a + ", " + b).orElse("")
+                + (failing.size() > 5 ? " and " + (failing.size() - 5) + " more" : "");
+        note(best.id(), "Enlarged for the cumulative voltage drop", "the drop limit fails at " + failingList + "; best candidates: " + others,
                 String.format(Locale.ROOT, "%s → %s, the most drop per added conductor volume (%.3f %% per %.3f dm³)",
-                        mm2(k.cable().size().mm2()), mm2(next), bestGain, bestCost));
-        current.put(best, withCpc(run.original(best), next));
-        upsized.add(best);
-        decidedBy.put(best, failing.get(0).checks().stream().anyMatch(c -> !c.pass() && c.name().equals("voltage-drop"))
-                ? "voltage-drop" : "motor-starting");
+                        mm2(best.from()), mm2(best.to()), best.gain(), best.cost()));
+        apply(best.id(), best.to(), failing);
+        // Circuits of their own (no circuit below them) whose step buys at least as much as the best
+        // feeder step would be chosen next anyway, one after another: a final circuit's gain does
+        // not change when another final circuit grows, and a feeder's only falls. Take them now.
+        double bestFeeder = candidates.stream().filter(c -> run.original(c.id()).isFeeder()).mapToDouble(Candidate::ratio).max().orElse(0);
+        if (!run.original(best.id()).isFeeder()) {
+            for (Candidate c : candidates.subList(1, candidates.size())) {
+                if (run.original(c.id()).isFeeder() || c.ratio() < bestFeeder || c.gain() <= 0) continue;
+                note(c.id(), "Enlarged for the cumulative voltage drop", "its own drop limit fails; no feeder step buys more drop per volume",
+                        String.format(Locale.ROOT, "%s → %s (%.3f %% per %.3f dm³)", mm2(c.from()), mm2(c.to()), c.gain(), c.cost()));
+                apply(c.id(), c.to(), failing);
+            }
+        }
         return true;
+    }
+
+    private void apply(String id, double size, List<CircuitResult> failing) {
+        boolean ownDropFails = failing.stream().anyMatch(f -> f.id().equals(id) && cumulative(id) > f.limitPercent().value() + 1e-9);
+        Circuit k = current.get(id);
+        current.put(id, withCpc(run.original(id), size));
+        ownPct.put(id, ownDropAt(k, size));
+        changed(id);
+        upsized.add(id);
+        boolean starting = !k.isFeeder() && !ownDropFails && k.load().startingCurrentMultiple() != null;
+        decidedBy.put(id, starting ? "motor-starting" : "voltage-drop");
     }
 
     /** Undoes enlargements that turned out unnecessary once others were made (last first). */
     private void trim() {
+        List<String> done = new ArrayList<>();
         for (int i = upsized.size() - 1; i >= 0; i--) {
             String id = upsized.get(i);
+            if (done.contains(id)) continue;
+            done.add(id);
             Circuit k = current.get(id);
             Double prev = previousSize(k);
-            if (prev == null) continue;
-            Map<String, CircuitResult> before = evaluateAll();
-            long failingBefore = before.values().stream().filter(r -> !r.pass()).count();
+            if (prev == null || prev < firstChoice.getOrDefault(id, 0.0) - 1e-9) continue;
+            List<String> affected = new ArrayList<>(List.of(id));
+            affected.addAll(descendants.getOrDefault(id, List.of()));
+            long failingBefore = affected.stream().filter(failingDrop::contains).count();
+            double savedPct = ownPct.get(id);
             current.put(id, withCpc(run.original(id), prev));
-            Map<String, CircuitResult> after = evaluateAll();
-            long failingAfter = after.values().stream().filter(r -> !r.pass()).count();
-            if (failingAfter > failingBefore || !after.get(id).checks().stream().filter(c -> !c.pass()).toList().isEmpty()
-                    && before.get(id).pass()) {
+            ownPct.put(id, ownDropAt(k, prev));
+            changed(id);
+            long failingAfter = affected.stream().filter(failingDrop::contains).count();
+            if (failingAfter > failingBefore) {
                 current.put(id, k);
+                ownPct.put(id, savedPct);
+                changed(id);
             } else {
                 note(id, "Enlargement undone", "later enlargements upstream made it unnecessary", mm2(k.cable().size().mm2()) + " → " + mm2(prev));
-                if (i < upsized.size()) upsized.remove(i);
             }
         }
     }

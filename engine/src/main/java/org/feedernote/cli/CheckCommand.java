@@ -43,7 +43,7 @@ final class CheckCommand implements Callable<Integer> {
         Installation inst = Loading.load(input, err);
         if (inst == null) return ExitStatus.BAD_INPUT;
         ReferenceData data = ReferenceData.standard();
-        Result result = Loading.calculate(inst, data, err);
+        Result result = Loading.calculate(inst, data, err, trace != null);
         if (result == null) return ExitStatus.BAD_INPUT;
         if (trace != null) {
             try {

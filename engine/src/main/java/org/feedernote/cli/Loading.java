@@ -22,8 +22,12 @@ final class Loading {
      * condition they do not cover) and returns null: that is a problem of the input, exit 2.
      */
     static Result calculate(Installation inst, ReferenceData data, PrintWriter err) {
+        return calculate(inst, data, err, true);
+    }
+
+    static Result calculate(Installation inst, ReferenceData data, PrintWriter err, boolean record) {
         try {
-            return new Engine(data).run(inst);
+            return new Engine(data).run(inst, record);
         } catch (DataGapException e) {
             err.println(e.located() ? e.getMessage() : inst.sourceName() + ": " + e.getMessage());
             err.println("Nothing was written.");

@@ -73,7 +73,14 @@ public final class CapacityData {
     }
 
     /** Smallest size the capacity table covers for the cable, so sizing starts there. */
+    private final java.util.concurrent.ConcurrentHashMap<String, Boolean> covered = new java.util.concurrent.ConcurrentHashMap<>();
+
     public boolean covers(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation, double size) {
+        String key = insulation + "|" + conductor + "|" + method + "|" + loaded + "|" + formation + "|" + size;
+        return covered.computeIfAbsent(key, k -> probe(insulation, conductor, method, loaded, formation, size));
+    }
+
+    private boolean probe(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation, double size) {
         try {
             tabulated("probe", insulation, conductor, method, loaded,
                     method == Method.E ? CableType.MULTICORE : CableType.SINGLE_CORE, formation, size);

@@ -66,8 +66,10 @@ public final class ReferenceData {
         return resistance.value(sizeKey(sizeMm2), conductor.token()) != null;
     }
 
+    private static final java.util.concurrent.ConcurrentHashMap<Double, String> KEYS = new java.util.concurrent.ConcurrentHashMap<>();
+
     public static String sizeKey(double mm2) {
-        return mm2 == Math.rint(mm2) ? Long.toString((long) mm2) : Double.toString(mm2);
+        return KEYS.computeIfAbsent(mm2, v -> v == Math.rint(v) && Math.abs(v) < 1e15 ? Long.toString(v.longValue()) : Double.toString(v));
     }
 
     public Step.Lookup resistance20(String stepId, Conductor conductor, double sizeMm2) {

@@ -24,6 +24,7 @@ public final class ReferenceTable {
     private final Map<String, String> header;
     private final List<String> columns;
     private final Map<String, Map<String, String>> rows;
+    private final Map<String, Map<String, Double>> numbers = new java.util.HashMap<>();
 
     private ReferenceTable(TableRef ref, Map<String, String> header, List<String> columns,
                            Map<String, Map<String, String>> rows) {
@@ -31,6 +32,17 @@ public final class ReferenceTable {
         this.header = header;
         this.columns = columns;
         this.rows = rows;
+        for (var r : rows.entrySet()) {
+            Map<String, Double> parsed = new java.util.HashMap<>();
+            for (var c : r.getValue().entrySet()) {
+                try {
+                    if (!c.getValue().isEmpty()) parsed.put(c.getKey(), Double.parseDouble(c.getValue()));
+                } catch (NumberFormatException text) {
+                    // a text column (a standard's name, a list of ratings)
+                }
+            }
+            numbers.put(r.getKey(), parsed);
+        }
     }
 
     public static ReferenceTable resource(String name) {
@@ -87,11 +99,8 @@ public final class ReferenceTable {
 
     /** The value at (row, column), or null where the table has none. */
     public Double value(String row, String column) {
-        Map<String, String> r = rows.get(row);
-        if (r == null) return null;
-        String cell = r.get(column);
-        if (cell == null || cell.isEmpty()) return null;
-        return Double.parseDouble(cell);
+        Map<String, Double> r = numbers.get(row);
+        return r == null ? null : r.get(column);
     }
 
     public String text(String row, String column) {

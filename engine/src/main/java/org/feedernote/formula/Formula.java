@@ -17,14 +17,49 @@ import org.feedernote.trace.Trace;
 /**
  * One formula of the catalogue: the result's symbol and unit, the expression tree and the
  * reference it comes from. The only way the engine obtains a computed number is {@link #eval},
- * which records the step and returns the value.
+ * which records the step and returns the value. Immutable; the variables of the tree are found
+ * once, when the formula is made.
  */
-public record Formula(String id, String title, String symbol, String unit, Expr expr, String reference) {
+public final class Formula {
+    private final String id;
+    private final String title;
+    private final String symbol;
+    private final String unit;
+    private final Expr expr;
+    private final String reference;
+    private final List<Var> vars;
+
+    public Formula(String id, String title, String symbol, String unit, Expr expr, String reference) {
+        this.id = id;
+        this.title = title;
+        this.symbol = symbol;
+        this.unit = unit;
+        this.expr = expr;
+        this.reference = reference;
+        Set<Var> found = new LinkedHashSet<>();
+        collect(expr, found);
+        this.vars = List.copyOf(found);
+    }
+
+    private Formula(Formula f, String symbol) {
+        this.id = f.id;
+        this.title = f.title;
+        this.symbol = symbol;
+        this.unit = f.unit;
+        this.expr = f.expr;
+        this.reference = f.reference;
+        this.vars = f.vars;
+    }
+
+    public String id() { return id; }
+    public String title() { return title; }
+    public String symbol() { return symbol; }
+    public String unit() { return unit; }
+    public Expr expr() { return expr; }
+    public String reference() { return reference; }
 
     /** The variables the expression refers to, in order of first appearance. */
-    public Set<Var> vars() {
-        Set<Var> vars = new LinkedHashSet<>();
-        collect(expr, vars);
+    public List<Var> vars() {
         return vars;
     }
 
@@ -39,7 +74,7 @@ public record Formula(String id, String title, String symbol, String unit, Expr 
 
     /** The same formula with its result shown by another symbol (S_L1 rather than S). */
     public Formula as(String resultSymbol) {
-        return new Formula(id, title, resultSymbol, unit, expr, reference);
+        return new Formula(this, resultSymbol);
     }
 
     public static Step.Binding bind(Var var, Q q) {
@@ -53,16 +88,15 @@ public record Formula(String id, String title, String symbol, String unit, Expr 
      * @param form why this form of the formula applies (shown on the step's heading), or ""
      */
     public Q eval(Trace trace, String stepId, String form, Step.Binding... bindings) {
-        List<Step.Binding> list = List.of(bindings);
-        Map<String, Double> values = new HashMap<>();
-        for (Step.Binding b : list) {
+        Map<String, Double> values = new HashMap<>(bindings.length * 2);
+        for (Step.Binding b : bindings) {
             if (!b.var().unit().equals(b.q().unit())) {
                 throw new IllegalStateException(stepId + ": " + b.var().symbol() + " must be in '" + b.var().unit()
                         + "' but " + b.q().id() + " is in '" + b.q().unit() + "'");
             }
             values.put(b.var().key(), b.q().value());
         }
-        for (Var v : vars()) {
+        for (Var v : vars) {
             if (!values.containsKey(v.key())) {
                 throw new IllegalStateException(stepId + ": formula " + id + " needs " + v.symbol() + " bound");
             }
@@ -70,8 +104,7 @@ public record Formula(String id, String title, String symbol, String unit, Expr 
         double value = Evaluator.evaluate(expr, values, stepId);
         if (trace.recording()) {
             List<Step.Binding> used = new ArrayList<>();
-            Set<Var> needed = vars();
-            for (Step.Binding b : list) if (needed.contains(b.var())) used.add(b);
+            for (Step.Binding b : bindings) if (vars.contains(b.var())) used.add(b);
             trace.add(new Step.Formula(stepId, title, symbol, unit, id, expr, List.copyOf(used), value, form, reference));
         }
         return new Q(stepId, symbol, value, unit);
