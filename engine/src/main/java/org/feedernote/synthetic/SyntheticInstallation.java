@@ -34,12 +34,12 @@ public final class SyntheticInstallation {
         int wantedBoards = Math.max(1, circuits / perBoard);
         int made = 0;
         int boardNo = 0;
-        // Feeders first: a balanced tree, eight sub-boards under the origin, six under each of those, then four, then three.
+        // Feeders first: a balanced tree, eight sub-boards (more for large files) under the origin, six under each of those, then four, then three.
         int parentIndex = 0;
         int childrenOfParent = 0;
         while (boards.size() < wantedBoards && made < circuits - 1 && parentIndex < boards.size()) {
             Board parent = boards.get(parentIndex);
-            int[] children = {8, 6, 4, 3, 3, 3};
+            int[] children = {Math.max(8, wantedBoards / 30), 6, 4, 3, 3, 3};
             if (parent.depth() >= children.length - 1 || childrenOfParent >= children[parent.depth()]) {
                 parentIndex++;
                 childrenOfParent = 0;
@@ -71,6 +71,15 @@ public final class SyntheticInstallation {
         b.append("circuits:\n");
         for (String line : lines) b.append(line).append('\n');
         return b.toString();
+    }
+
+    /** The same document as JSON (keys in canonical order). */
+    public static String toJson(String yaml) {
+        try {
+            return org.feedernote.input.Canonical.json(org.feedernote.input.InputReader.tree("synthetic", yaml, false)) + "\n";
+        } catch (org.feedernote.input.InputException e) {
+            throw new IllegalStateException("the generator wrote invalid YAML: " + e.errors(), e);
+        }
     }
 
     private static String finalCircuit(String id, String board, SplittableRandom rnd) {

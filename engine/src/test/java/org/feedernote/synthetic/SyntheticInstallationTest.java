@@ -1,0 +1,28 @@
+package org.feedernote.synthetic;
+
+import static org.junit.jupiter.api.Assertions.*;
+
+import org.junit.jupiter.api.Test;
+
+import org.feedernote.Fixtures;
+import org.feedernote.input.InputReader;
+
+/** The generator: seeded, valid input, and a design the engine can size (common practice, no source). */
+class SyntheticInstallationTest {
+    @Test
+    void theSameSeedGivesTheSameFile() {
+        assertEquals(SyntheticInstallation.generate(300, 7), SyntheticInstallation.generate(300, 7));
+        assertNotEquals(SyntheticInstallation.generate(300, 7), SyntheticInstallation.generate(300, 8));
+    }
+
+    @Test
+    void aGeneratedInstallationIsValidInBothFormsAndSizes() throws Exception {
+        String yaml = SyntheticInstallation.generate(400, 3);
+        var fromYaml = Fixtures.parse(yaml);
+        var fromJson = InputReader.parse("g.json", SyntheticInstallation.toJson(yaml), true);
+        assertEquals(fromYaml.canonicalJson(), fromJson.canonicalJson());
+        assertEquals(400, fromYaml.circuits().size());
+        var result = new org.feedernote.calc.Engine(org.feedernote.data.ReferenceData.standard()).run(fromJson, false);
+        assertTrue(result.pass(), () -> result.circuits().stream().filter(c -> !c.pass()).map(c -> c.id() + " " + c.failing()).toList().toString());
+    }
+}
