@@ -149,7 +149,7 @@ final class Sizing {
             Circuit candidate = withCpc(c, size);
             String quick = run.capacityShortfall(candidate);
             if (quick != null && size < sizes.get(sizes.size() - 1)) {
-                note(c.id(), "Size rejected", mm2(size), "rejected: " + quick);
+                note(c.id(), "Size rejected", quick, mm2(size) + " rejected");
                 lastReason = quick;
                 lastReasonCheck = "capacity";
                 last = candidate;
@@ -164,7 +164,7 @@ final class Sizing {
                         mm2(size));
                 return candidate;
             }
-            note(c.id(), "Size rejected", mm2(size), "rejected: " + reason);
+            note(c.id(), "Size rejected", reason, mm2(size) + " rejected");
             last = candidate;
             lastReason = reason;
         }

@@ -98,7 +98,7 @@ class CapacityTest {
                 "{conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}", "{method: C}",
                 "{kind: mcb, curve: C, rating_a: 32, breaking_capacity_ka: 10}", "{kind: other, current_a: 32, power_factor: 0.9, phases: 3}")));
         assertTrue(TraceWalk.steps(whole.trace()).stream()
-                .anyMatch(s -> s instanceof Step.Decision d && d.outcome().equals("rejected: I_z 30 A < I_n 32 A")),
+                .anyMatch(s -> s instanceof Step.Decision d && d.because().equals("I_z 30 A < I_n 32 A") && d.outcome().equals("2.5 mm² rejected")),
                 "the note shows why 2.5 mm² was rejected");
     }
 
