@@ -647,14 +647,8 @@ public final class Engine {
                 Given.note(t, id + "/C_h", "Third-harmonic currents", "The harmonic reduction of IEC 60364-5-52 Annex E applies to four- and five-core cables of three-phase circuits only; not applied here.",
                         "IEC 60364-5-52:2009, Annex E");
             }
-            List<Var> vars = new ArrayList<>();
-            List<Step.Binding> bindings = new ArrayList<>();
-            for (int i = 0; i < factors.size(); i++) {
-                Var v = new Var("c" + i, factors.get(i).symbol(), Units.NONE);
-                vars.add(v);
-                bindings.add(bind(v, factors.get(i)));
-            }
-            Q product = CapacityFormulas.correctionProduct(vars).eval(t, id + "/C", "", bindings.toArray(new Step.Binding[0]));
+            Formula.Terms terms = Formula.terms("c", Units.NONE, factors);
+            Q product = CapacityFormulas.correctionProduct(terms.vars()).eval(t, id + "/C", "", terms.bindings());
             Q iz;
             if (cable.parallel() > 1) {
                 Q np = Given.derived(t, id + "/n", "Conductors in parallel per phase", "n", cable.parallel(), Units.NONE,
@@ -719,16 +713,10 @@ public final class Engine {
             if (terms.size() == 1) {
                 return relabel(own, "ΔU_total");
             }
-            List<Var> vars = new ArrayList<>();
-            List<Step.Binding> bindings = new ArrayList<>();
-            for (int i = 0; i < terms.size(); i++) {
-                Var v = new Var("d" + i, terms.get(i).symbol(), Units.PERCENT);
-                vars.add(v);
-                bindings.add(bind(v, terms.get(i)));
-            }
+            Formula.Terms sumTerms = Formula.terms("d", Units.PERCENT, terms);
             Formula sum = DemandFormulas.sum("cumulative-drop", "Voltage drop, origin to " + (c.isFeeder() ? "board " + c.to() : "terminals"),
-                    "ΔU_total", Units.PERCENT, vars, "Drops add along the path from the origin (each feeder's percentage plus the circuit's own)");
-            return sum.eval(t, c.id() + "/vd/dU_total", "", bindings.toArray(new Step.Binding[0]));
+                    "ΔU_total", Units.PERCENT, sumTerms.vars(), "Drops add along the path from the origin (each feeder's percentage plus the circuit's own)");
+            return sum.eval(t, c.id() + "/vd/dU_total", "", sumTerms.bindings());
         }
 
         Q limit(Trace t, Circuit c) {
@@ -775,16 +763,10 @@ public final class Engine {
             }
             terms.add(own);
             if (terms.size() == 1) return relabel(own, "ΔU_st,total");
-            List<Var> vars = new ArrayList<>();
-            List<Step.Binding> bindings = new ArrayList<>();
-            for (int i = 0; i < terms.size(); i++) {
-                Var v = new Var("d" + i, terms.get(i).symbol(), Units.PERCENT);
-                vars.add(v);
-                bindings.add(bind(v, terms.get(i)));
-            }
+            Formula.Terms dipTerms = Formula.terms("d", Units.PERCENT, terms);
             return DemandFormulas.sum("starting-dip-total", "Voltage dip at the motor terminals while it starts", "ΔU_st,total",
-                    Units.PERCENT, vars, "Running drop of each upstream feeder, its added drop from the starting current, and the motor circuit's drop at starting current")
-                    .eval(t, id + "/dU_total", "", bindings.toArray(new Step.Binding[0]));
+                    Units.PERCENT, dipTerms.vars(), "Running drop of each upstream feeder, its added drop from the starting current, and the motor circuit's drop at starting current")
+                    .eval(t, id + "/dU_total", "", dipTerms.bindings());
         }
 
         CheckResult check(Trace t, String id, String name, String title, Q value, Q limit, String reference) {

@@ -58,14 +58,8 @@ final class FaultPath {
     }
 
     private Q add(Trace t, String id, String title, String symbol, boolean magnitudes, Q... terms) {
-        List<Var> vars = new ArrayList<>();
-        List<Step.Binding> b = new ArrayList<>();
-        for (int i = 0; i < terms.length; i++) {
-            Var v = new Var("z" + i, terms[i].symbol(), Units.OHM);
-            vars.add(v);
-            b.add(bind(v, terms[i]));
-        }
-        return (magnitudes ? arithmeticSum(title, symbol, vars) : sum(title, symbol, vars)).eval(t, id, "", b.toArray(new Step.Binding[0]));
+        org.feedernote.formula.Formula.Terms z = org.feedernote.formula.Formula.terms("z", Units.OHM, List.of(terms));
+        return (magnitudes ? arithmeticSum(title, symbol, z.vars()) : sum(title, symbol, z.vars())).eval(t, id, "", z.bindings());
     }
 
     private Q magnitude(Trace t, String id, String symbol, Q r, Q x) {

@@ -77,6 +77,20 @@ public final class Formula {
         return new Formula(this, resultSymbol);
     }
 
+    /** Variables named after the quantities they stand for, and their bindings: the terms of a sum or product. */
+    public record Terms(List<Var> vars, Step.Binding[] bindings) {}
+
+    public static Terms terms(String keyPrefix, String unit, List<Q> quantities) {
+        List<Var> vars = new ArrayList<>();
+        Step.Binding[] bindings = new Step.Binding[quantities.size()];
+        for (int i = 0; i < quantities.size(); i++) {
+            Var v = new Var(keyPrefix + i, quantities.get(i).symbol(), unit);
+            vars.add(v);
+            bindings[i] = bind(v, quantities.get(i));
+        }
+        return new Terms(List.copyOf(vars), bindings);
+    }
+
     public static Step.Binding bind(Var var, Q q) {
         return new Step.Binding(var, q);
     }
