@@ -45,6 +45,13 @@ final class ImpedanceCalc {
         Q ti = Given.lookup(t, data.insulationThickness(id + "/t_i", cable.insulation(), size));
         Q spacing;
         Q gmd;
+        if (cable.type() == CableType.MULTICORE && cable.formation() != null) {
+            Given.note(t, id + "/formation", "Formation", "formation: " + cable.formation().token()
+                    + " is given, but it applies to single-core cables; this multicore cable's geometry is that of its cores.", "");
+        }
+        if (cable.type() == CableType.SINGLE_CORE && cable.cores() > 0) {
+            Given.note(t, id + "/cores", "Cores", "cores: " + cable.cores() + " is given, but it applies to multicore cables; ignored for single-core cables.", "");
+        }
         if (cable.type() == CableType.MULTICORE) {
             spacing = CORE_SPACING.eval(t, id + "/s", "cores of a multicore cable", bind(DC, dc), bind(T_I, ti));
             gmd = Given.alias(spacing.id(), "s_g", spacing);

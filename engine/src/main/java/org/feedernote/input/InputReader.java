@@ -311,10 +311,8 @@ public final class InputReader {
         Formation formation = word(c, "formation", Formation.class, null);
         if (type == CableType.MULTICORE) {
             if (at(c, "cores") == null) error(c, join(path, "cores"), "a multicore cable needs 'cores' (2, 3, 4 or 5)");
-            if (at(c, "formation") != null) error(at(c, "formation"), join(path, "formation"), "formation applies to single-core cables only; remove it for a multicore cable");
         } else if (type == CableType.SINGLE_CORE) {
             if (at(c, "formation") == null) error(c, join(path, "formation"), "single-core cables need 'formation' (trefoil, flat-touching or flat-spaced)");
-            if (at(c, "cores") != null) error(at(c, "cores"), join(path, "cores"), "cores applies to multicore cables only; remove it for single-core cables");
         }
         SizeChoice size = size(at(c, "size_mm2"));
         SizeChoice cpc = size(at(c, "cpc_mm2"));
