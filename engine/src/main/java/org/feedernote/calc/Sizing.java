@@ -142,6 +142,7 @@ final class Sizing {
     }
 
     private Circuit smallestPassingOwnChecks(Circuit c, Map<String, CircuitResult> working) {
+        Circuit firstCoordinated = null;
         Circuit last = null;
         String lastReason = null;
         for (double size : sizes) {
@@ -156,6 +157,7 @@ final class Sizing {
                 continue;
             }
             CircuitResult r = run.evaluate(candidate, Trace.noop(), working);
+            if (firstCoordinated == null && r.check("capacity").pass() && r.check("overload").pass()) firstCoordinated = candidate;
             String reason = ownFailure(r);
             if (reason == null) {
                 firstChoice.put(c.id(), size);
@@ -169,7 +171,21 @@ final class Sizing {
             lastReason = reason;
         }
         if (last == null) {
-            throw new org.feedernote.data.DataGapException("no tabulated size covers circuit " + c.id());
+            String why;
+            try {
+                run.capacityShortfall(withCpc(c, 25));
+                why = "the packaged tables cover no standard size of this cable for this method";
+            } catch (org.feedernote.data.DataGapException e) {
+                why = e.getMessage();
+            }
+            throw new org.feedernote.data.DataGapException(c.where().text() + ": " + c.where().path() + " (" + c.id()
+                    + "): size_mm2: auto cannot be chosen: " + why, true);
+        }
+        if (firstCoordinated != null) {
+            note(c.id(), "No size passes", "no standard size up to " + mm2(last.cable().size().mm2()) + " passes every check (" + lastReason
+                    + " at the largest); a larger cable cannot mend this", "the smallest size passing capacity and overload, "
+                    + mm2(firstCoordinated.cable().size().mm2()) + ", is used and the circuit fails");
+            return firstCoordinated;
         }
         note(c.id(), "No size passes", "no standard size up to " + mm2(last.cable().size().mm2()) + " passes", "the largest is used and the circuit fails");
         return last;

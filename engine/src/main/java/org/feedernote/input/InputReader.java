@@ -384,7 +384,7 @@ public final class InputReader {
             phases = 3;
         } else {
             if (cable != null) error(l, join(path, "phases"), "give phases (1 or 3): a 3-core cable may carry either");
-            phases = 3;
+            phases = 0;
         }
         if (cable != null && cable.type() == CableType.MULTICORE && phases == 3 && cable.cores() == 2) {
             error(at(l, "phases"), join(path, "phases"), "a three-phase load cannot be supplied by a 2-core cable");

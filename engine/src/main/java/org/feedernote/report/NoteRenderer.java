@@ -7,14 +7,8 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.Map;
 
-import java.awt.Color;
 
-import com.lowagie.text.Element;
-import com.lowagie.text.Rectangle;
 import com.lowagie.text.pdf.BaseFont;
-import com.lowagie.text.pdf.PdfContentByte;
-import com.lowagie.text.pdf.PdfReader;
-import com.lowagie.text.pdf.PdfStamper;
 import com.lowagie.text.pdf.PdfFileSpecification;
 import com.lowagie.text.pdf.PdfWriter;
 import freemarker.cache.ClassTemplateLoader;
@@ -114,35 +108,7 @@ public final class NoteRenderer {
         renderer.layout();
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         renderer.createPDF(out);
-        byte[] pdf = note.draft() ? watermark(out.toByteArray(), "DRAFT") : out.toByteArray();
-        return Determinism.pin(pdf, note.fingerprint(), noteDate);
-    }
-
-    /** Draws a diagonal word in light grey beneath the content of every page. */
-    static byte[] watermark(byte[] pdf, String word) throws IOException {
-        PdfReader reader = new PdfReader(pdf);
-        ByteArrayOutputStream out = new ByteArrayOutputStream();
-        try {
-            PdfStamper stamper = new PdfStamper(reader, out);
-            BaseFont font = BaseFont.createFont(FONTS[1], BaseFont.IDENTITY_H, BaseFont.EMBEDDED);
-            for (int page = 1; page <= reader.getNumberOfPages(); page++) {
-                Rectangle size = reader.getPageSize(page);
-                PdfContentByte under = stamper.getUnderContent(page);
-                under.saveState();
-                under.setColorFill(new Color(0xE4, 0xE4, 0xE4));
-                under.beginText();
-                under.setFontAndSize(font, 140);
-                under.showTextAligned(Element.ALIGN_CENTER, word, size.getWidth() / 2, size.getHeight() / 2 - 50, 55);
-                under.endText();
-                under.restoreState();
-            }
-            stamper.close();
-        } catch (com.lowagie.text.DocumentException e) {
-            throw new IOException("cannot watermark the note: " + e.getMessage(), e);
-        } finally {
-            reader.close();
-        }
-        return out.toByteArray();
+        return Determinism.pin(out.toByteArray(), note.fingerprint(), noteDate);
     }
 
     static String utf8(byte[] b) {

@@ -37,6 +37,17 @@ class ArchiveTest {
     }
 
     @Test
+    void aDraftNoteVerifiesToo() throws IOException {
+        Path draft = dir.resolve("draft.yaml");
+        java.nio.file.Files.writeString(draft, java.nio.file.Files.readString(Fixtures.inputs().resolve("bakery-small.yaml"))
+                .replace("status: for-review", "status: draft"));
+        Path out = dir.resolve("draft");
+        assertEquals(0, CommandLineTest.run("note", draft.toString(), "-o", out.toString()).status());
+        CommandLineTest.Run r = CommandLineTest.run("verify", out.resolve("KLB-E-CN-001-A.pdf").toString());
+        assertEquals(0, r.status(), "the draft mark must not make the bytes depend on the process: " + r.out());
+    }
+
+    @Test
     void aNoteWhoseEmbeddedInputWasAlteredFails() throws Exception {
         Path altered = dir.resolve("altered.pdf");
         try (PDDocument doc = Loader.loadPDF(note.toFile())) {
