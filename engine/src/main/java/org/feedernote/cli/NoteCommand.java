@@ -107,6 +107,12 @@ final class NoteCommand implements Callable<Integer> {
                 return ExitStatus.BAD_INPUT;
             }
         }
+        boolean terminal = System.console() != null;
+        if (terminal && inst.circuits().size() > 20) {
+            err.println("feedernote: " + inst.circuits().size() + " circuits calculated; laying out the note (about "
+                    + (inst.circuits().size() * 10) + " pages)...");
+            err.flush();
+        }
         NoteMaker.Made made = NoteMaker.make(inst, result, data, templates, since, changes);
         Files.writeAtomically(pdf, made.pdf());
         Files.writeAtomically(traceFile, made.trace());
