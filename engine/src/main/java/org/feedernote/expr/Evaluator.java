@@ -1,18 +1,28 @@
 package org.feedernote.expr;
 
 import java.util.Map;
+import java.util.function.ToDoubleFunction;
 
 /** Evaluates an expression tree against bound values; every failure is loud and names the step. */
 public final class Evaluator implements Expr.Visitor<Double> {
-    private final Map<String, Double> values;
+    private final ToDoubleFunction<Var> values;
     private final String stepId;
 
-    private Evaluator(Map<String, Double> values, String stepId) {
+    private Evaluator(ToDoubleFunction<Var> values, String stepId) {
         this.values = values;
         this.stepId = stepId;
     }
 
     public static double evaluate(Expr expr, Map<String, Double> values, String stepId) {
+        return evaluate(expr, (ToDoubleFunction<Var>) v -> {
+            Double d = values.get(v.key());
+            if (d == null) throw new EvaluationException(stepId, "symbol " + v.symbol() + " is not bound");
+            return d;
+        }, stepId);
+    }
+
+    /** @param values gives each variable's bound value; it throws where a variable is unbound */
+    public static double evaluate(Expr expr, ToDoubleFunction<Var> values, String stepId) {
         double result = expr.accept(new Evaluator(values, stepId));
         if (!Double.isFinite(result)) {
             throw new EvaluationException(stepId, "the result is not a finite number (" + result + ")");
@@ -23,9 +33,7 @@ public final class Evaluator implements Expr.Visitor<Double> {
     @Override public Double num(Expr.Num num) { return num.value(); }
 
     @Override public Double ref(Expr.Ref ref) {
-        Double v = values.get(ref.var().key());
-        if (v == null) throw new EvaluationException(stepId, "symbol " + ref.var().symbol() + " is not bound");
-        return v;
+        return values.applyAsDouble(ref.var());
     }
 
     @Override public Double bin(Expr.Bin bin) {

@@ -1,10 +1,8 @@
 package org.feedernote.formula;
 
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Map;
 import java.util.Set;
 
 import org.feedernote.expr.Evaluator;
@@ -77,6 +75,13 @@ public final class Formula {
         return new Formula(this, resultSymbol);
     }
 
+    /** The binding of a variable: by identity first (catalogue variables are shared constants), then by key. */
+    private static Step.Binding find(Step.Binding[] bindings, Var v) {
+        for (Step.Binding b : bindings) if (b.var() == v) return b;
+        for (Step.Binding b : bindings) if (b.var().key().equals(v.key())) return b;
+        return null;
+    }
+
     /** Variables named after the quantities they stand for, and their bindings: the terms of a sum or product. */
     public record Terms(List<Var> vars, Step.Binding[] bindings) {}
 
@@ -102,20 +107,18 @@ public final class Formula {
      * @param form why this form of the formula applies (shown on the step's heading), or ""
      */
     public Q eval(Trace trace, String stepId, String form, Step.Binding... bindings) {
-        Map<String, Double> values = new HashMap<>(bindings.length * 2);
         for (Step.Binding b : bindings) {
             if (!b.var().unit().equals(b.q().unit())) {
                 throw new IllegalStateException(stepId + ": " + b.var().symbol() + " must be in '" + b.var().unit()
                         + "' but " + b.q().id() + " is in '" + b.q().unit() + "'");
             }
-            values.put(b.var().key(), b.q().value());
         }
         for (Var v : vars) {
-            if (!values.containsKey(v.key())) {
+            if (find(bindings, v) == null) {
                 throw new IllegalStateException(stepId + ": formula " + id + " needs " + v.symbol() + " bound");
             }
         }
-        double value = Evaluator.evaluate(expr, values, stepId);
+        double value = Evaluator.evaluate(expr, (Var v) -> find(bindings, v).q().value(), stepId);
         if (trace.recording()) {
             List<Step.Binding> used = new ArrayList<>();
             for (Step.Binding b : bindings) if (vars.contains(b.var())) used.add(b);
