@@ -37,14 +37,20 @@ final class CheckCommand implements Callable<Integer> {
     @Option(names = "--trace", paramLabel = "FILE", description = "also write the full calculation trace as JSON to FILE")
     Path trace;
 
+    @Option(names = "--timings", description = "print the time each stage took to standard error (for profiling)")
+    boolean timings;
+
     @Override public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
+        long t0 = System.nanoTime();
         Installation inst = Loading.load(input, err);
         if (inst == null) return ExitStatus.BAD_INPUT;
+        long t1 = System.nanoTime();
         ReferenceData data = ReferenceData.standard();
         Result result = Loading.calculate(inst, data, err, trace != null);
         if (result == null) return ExitStatus.BAD_INPUT;
+        long t2 = System.nanoTime();
         if (trace != null) {
             try {
                 Files.writeAtomically(trace, TraceJson.write(result.trace(), Version.engine(), data.version(), ""));
@@ -54,6 +60,11 @@ final class CheckCommand implements Callable<Integer> {
             }
         }
         out.print(json ? ResultJson.write(result) : TerminalSummary.render(result, input.getFileName().toString()));
+        if (timings) {
+            out.flush();
+            err.printf(java.util.Locale.ROOT, "read and validate %.0f ms; calculate %.0f ms; write %.0f ms%n",
+                    (t1 - t0) / 1e6, (t2 - t1) / 1e6, (System.nanoTime() - t2) / 1e6);
+        }
         return result.pass() ? ExitStatus.PASS : ExitStatus.FAIL;
     }
 }
