@@ -5,7 +5,6 @@ import java.util.List;
 import org.feedernote.model.Setting;
 import org.feedernote.trace.Q;
 import org.feedernote.trace.Step;
-import org.feedernote.trace.TableRef;
 import org.feedernote.trace.Trace;
 
 /** Records the values a calculation starts from: inputs, defaults, lookups, decisions, notes. */
@@ -56,7 +55,4 @@ final class Given {
         return new Q(q.id(), symbol, q.value(), q.unit());
     }
 
-    static TableRef none() {
-        return null;
-    }
 }

@@ -48,8 +48,4 @@ public final class Html {
         return b.toString();
     }
 
-    /** Plain text for the terminal and for tests: subscripts written inline. */
-    public static String plain(String symbol) {
-        return symbol;
-    }
 }

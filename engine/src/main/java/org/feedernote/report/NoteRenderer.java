@@ -111,7 +111,4 @@ public final class NoteRenderer {
         return Determinism.pin(out.toByteArray(), note.fingerprint(), noteDate);
     }
 
-    static String utf8(byte[] b) {
-        return new String(b, StandardCharsets.UTF_8);
-    }
 }

@@ -86,7 +86,4 @@ public final class Benchmark {
         return out.toByteArray();
     }
 
-    static String utf8(byte[] b) {
-        return new String(b, StandardCharsets.UTF_8);
-    }
 }
