@@ -1,7 +1,6 @@
 package org.feedernote.synthetic;
 
 import java.io.ByteArrayOutputStream;
-import java.nio.charset.StandardCharsets;
 import java.util.Locale;
 
 import com.lowagie.text.Document;
