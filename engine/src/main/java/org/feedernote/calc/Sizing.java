@@ -67,7 +67,41 @@ final class Sizing {
             if (!upsizeBest(new ArrayList<>(failingDrop))) break;
         }
         trim();
+        smallestProtectiveConductors();
         return current;
+    }
+
+    /** Circuits whose protective conductor was chosen by calculation, with the size Table 54.2 would give. */
+    private final Map<String, Double> cpcByCalculation = new HashMap<>();
+
+    /**
+     * cpc 'auto' of final circuits: from the Table 54.2 size downwards, the smallest standard size
+     * that still passes the adiabatic check and disconnection (IEC 60364-5-54, 543.1.2: selection by
+     * calculation). Feeders keep the table size, because their protective conductor is part of the
+     * loop of every circuit below them. Not below 1.5 mm² in a multicore cable, 4 mm² separate.
+     */
+    private void smallestProtectiveConductors() {
+        for (Circuit c : run.order()) {
+            Circuit orig = run.original(c.id());
+            if (orig.isFeeder() || !orig.cable().cpc().auto()) continue;
+            Circuit chosen = current.get(c.id());
+            double table = chosen.cable().cpc().mm2();
+            double minimum = chosen.cable().type() == org.feedernote.model.CableType.MULTICORE ? 1.5 : 4;
+            Circuit best = chosen;
+            for (int i = sizes.indexOf(table) - 1; i >= 0; i--) {
+                double smaller = sizes.get(i);
+                if (smaller < minimum - 1e-9 || !ReferenceData.standard().hasResistance(chosen.cable().conductor(), smaller)) break;
+                Circuit candidate = best.withCable(best.cable().withCpc(smaller));
+                CircuitResult r = run.evaluate(candidate, Trace.noop(), results);
+                boolean ok = r.check("protective-conductor").pass() && r.check("disconnection").pass();
+                if (!ok) break;
+                best = candidate;
+            }
+            if (best != chosen) {
+                cpcByCalculation.put(c.id(), table);
+                current.put(c.id(), best);
+            }
+        }
     }
 
     /** Results of the sizes chosen by the first pass; motors are recalculated as their paths change. */
@@ -367,7 +401,12 @@ final class Sizing {
         for (String[] n : notes.getOrDefault(original.id(), List.of())) {
             t.add(new Step.Decision(original.id() + "/size/" + (++i), n[0], n[1], n[2], "", List.of()));
         }
-        if (autoCpc) {
+        if (autoCpc && cpcByCalculation.containsKey(original.id())) {
+            t.add(new Step.Decision(original.id() + "/size/cpc", "Protective conductor", "cpc_mm2: auto; Table 54.2 would give "
+                    + mm2(cpcByCalculation.get(original.id())) + "; the smallest standard size that passes the adiabatic check and disconnection",
+                    "cpc = " + mm2(sized.cable().cpc().mm2()) + " (selection by calculation; see the fault path below)",
+                    "IEC 60364-5-54:2011, 543.1.2", List.of()));
+        } else if (autoCpc) {
             double s = sized.cable().size().mm2();
             String rule = s <= 16 ? "S ≤ 16 mm²: cpc = S" : s <= 35 ? "16 mm² < S ≤ 35 mm²: cpc = 16 mm²" : "S > 35 mm²: cpc = S/2, next standard size";
             t.add(new Step.Decision(original.id() + "/size/cpc", "Protective conductor", "cpc_mm2: auto; line conductor S = " + mm2(s) + "; " + rule,
