@@ -34,8 +34,8 @@ public final class Fixtures {
         return new Engine(ReferenceData.standard()).run(parse(yaml));
     }
 
-    /** A one-board installation around the given circuits (YAML list items, indented by two). */
-    public static String oneBoard(String basis, String circuits) {
+    /** The first lines of a test input: format, a project, the basis and a 400/230 V supply from the given source. */
+    public static String head(String basis, String source) {
         return """
                 format: 1
                 project: {title: Test, reference: T-1, revision: A, date: 2026-01-01}
@@ -43,12 +43,18 @@ public final class Fixtures {
                 supply:
                   line_voltage_v: 400
                   phase_voltage_v: 230
-                  source: {utility: {fault_level_ka: 10, loop_impedance_ohm: 0.3}}
+                  source: {%s}
+                """.formatted(basis, source);
+    }
+
+    /** A one-board installation around the given circuits (YAML list items, indented by two). */
+    public static String oneBoard(String basis, String circuits) {
+        return head(basis, "utility: {fault_level_ka: 10, loop_impedance_ohm: 0.3}") + """
                 boards:
                   - id: B0
                 circuits:
                 %s
-                """.formatted(basis, circuits.indent(2));
+                """.formatted(circuits.indent(2));
     }
 
     public static String circuit(String id, String load, double lengthM, String cable) {

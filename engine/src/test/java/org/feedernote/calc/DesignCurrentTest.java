@@ -57,13 +57,7 @@ class DesignCurrentTest {
         assertTrue(org.feedernote.trace.TraceWalk.steps(r.trace()).stream().anyMatch(s -> s.id().equals("C1/ib/override")));
     }
 
-    private static final String TWO_BOARDS = """
-            format: 1
-            project: {title: Test, reference: T-1, revision: A, date: 2026-01-01}
-            supply:
-              line_voltage_v: 400
-              phase_voltage_v: 230
-              source: {utility: {fault_level_ka: 10}}
+    private static final String TWO_BOARDS = Fixtures.head("", "utility: {fault_level_ka: 10}") + """
             boards:
               - id: B0
               - id: B1

@@ -15,14 +15,7 @@ import org.feedernote.trace.TraceWalk;
 class FaultPathTest {
 
     private static String install(String source, String basis, String circuits) {
-        return """
-                format: 1
-                project: {title: Test, reference: T-1, revision: A, date: 2026-01-01}
-                basis: {%s}
-                supply:
-                  line_voltage_v: 400
-                  phase_voltage_v: 230
-                  source: {%s}
+        return Fixtures.head(basis, source) + """
                 boards:
                   - id: B0
                   - id: B1
@@ -35,7 +28,7 @@ class FaultPathTest {
                     installation: {method: E}
                     device: {kind: mccb, rating_a: 200, instantaneous_a: 2000, breaking_capacity_ka: 36, let_through_a2s: 2000000}
                 %s
-                """.formatted(basis, source, circuits.indent(2));
+                """.formatted(circuits.indent(2));
     }
 
     private static String finalCircuit(String device, String cable, double length) {

@@ -11,14 +11,7 @@ import org.feedernote.trace.TraceWalk;
 /** Sizing against the cumulative voltage drop (common practice, no source: the physics of the path). */
 class SizingTest {
     private static String installation(String feederSize, String finalSize, double finalLength) {
-        return """
-                format: 1
-                project: {title: Test, reference: T-1, revision: A, date: 2026-01-01}
-                basis: {voltage_drop_limit_percent: 4}
-                supply:
-                  line_voltage_v: 400
-                  phase_voltage_v: 230
-                  source: {utility: {fault_level_ka: 10}}
+        return Fixtures.head("voltage_drop_limit_percent: 4", "utility: {fault_level_ka: 10}") + """
                 boards:
                   - id: B0
                   - id: B1
