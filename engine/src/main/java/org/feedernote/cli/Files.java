@@ -24,14 +24,25 @@ final class Files {
         writeAtomically(target, out -> out.write(bytes));
     }
 
+    /** Something that writes a file given its path (for writers that go back and patch it). */
+    interface FileContent {
+        void writeTo(Path file) throws IOException;
+    }
+
     static void writeAtomically(Path target, Content content) throws IOException {
+        writeFileAtomically(target, tmp -> {
+            try (OutputStream out = new java.io.BufferedOutputStream(java.nio.file.Files.newOutputStream(tmp), 1 << 16)) {
+                content.writeTo(out);
+            }
+        });
+    }
+
+    static void writeFileAtomically(Path target, FileContent content) throws IOException {
         Path dir = target.toAbsolutePath().getParent();
         java.nio.file.Files.createDirectories(dir);
         Path tmp = java.nio.file.Files.createTempFile(dir, "." + target.getFileName(), ".part");
         try {
-            try (OutputStream out = java.nio.file.Files.newOutputStream(tmp)) {
-                content.writeTo(out);
-            }
+            content.writeTo(tmp);
             try {
                 java.nio.file.Files.setPosixFilePermissions(tmp, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
             } catch (UnsupportedOperationException notPosix) {

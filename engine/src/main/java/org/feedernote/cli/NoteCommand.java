@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
 
@@ -40,7 +41,7 @@ final class NoteCommand implements Callable<Integer> {
     @Option(names = {"-o", "--output"}, paramLabel = "DIR", description = "folder to write into (default: the current folder)")
     Path output = Path.of(".");
 
-    @Option(names = "--templates", paramLabel = "DIR", description = "a folder with a copy of the note templates (note.ftlh, steps.ftlh, note.css) to use instead of the packaged ones")
+    @Option(names = "--templates", paramLabel = "DIR", description = "a folder with a copy of the note templates (front.ftlh, section.ftlh, appendix.ftlh, steps.ftlh, note.css) to use instead of the packaged ones")
     Path templates;
 
     @Option(names = "--force", description = "replace an existing note that holds a different calculation")
@@ -62,9 +63,14 @@ final class NoteCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         Installation inst = Loading.load(input, err);
         if (inst == null) return ExitStatus.BAD_INPUT;
-        if (templates != null && !java.nio.file.Files.isRegularFile(templates.resolve("note.ftlh"))) {
-            err.println("feedernote: --templates " + templates + ": no note.ftlh in that folder");
-            return ExitStatus.BAD_INPUT;
+        if (templates != null) {
+            List<String> missing = NoteRenderer.TEMPLATE_FILES.stream()
+                    .filter(f -> !java.nio.file.Files.isRegularFile(templates.resolve(f))).toList();
+            if (!missing.isEmpty()) {
+                err.println("feedernote: --templates " + templates + ": missing " + String.join(", ", missing)
+                        + " (copy the whole report-templates folder and edit the copy)");
+                return ExitStatus.BAD_INPUT;
+            }
         }
         ReferenceData data = ReferenceData.standard();
         Result result = Loading.calculate(inst, data, err);
@@ -107,15 +113,8 @@ final class NoteCommand implements Callable<Integer> {
                 return ExitStatus.BAD_INPUT;
             }
         }
-        boolean terminal = System.console() != null;
-        if (terminal && inst.circuits().size() > 20) {
-            err.println("feedernote: " + inst.circuits().size() + " circuits calculated; laying out the note (about "
-                    + (inst.circuits().size() * 10) + " pages)...");
-            err.flush();
-        }
-        NoteMaker.Made made = NoteMaker.make(inst, result, data, templates, since, changes);
-        Files.writeAtomically(pdf, made.pdf());
-        Files.writeAtomically(traceFile, made.trace());
+        NoteMaker.write(inst, result, data, templates, since, changes, pdf, traceFile,
+                Progress.onTerminal(err, System.console() != null, inst.circuits().size()));
         out.println("wrote " + pdf);
         out.println("wrote " + traceFile);
         out.println(result.pass()

@@ -19,8 +19,6 @@ import org.feedernote.trace.TraceJson;
 final class NoteMaker {
     private NoteMaker() {}
 
-    record Made(byte[] pdf, String trace, String fingerprint) {}
-
     static String fingerprint(Installation inst, ReferenceData data) {
         return Canonical.fingerprint(inst.canonicalJson(), Version.engine(), data.version());
     }
@@ -29,17 +27,31 @@ final class NoteMaker {
         return TraceJson.write(result.trace(), Version.engine(), data.version(), fingerprint(inst, data));
     }
 
-    static Made make(Installation inst, Result result, ReferenceData data, Path templates, String changesSince,
-                     List<String> changes) throws IOException {
+    /**
+     * Writes the trace and then the note into their files, streaming both: the trace is attached
+     * to the PDF from its file, so neither is ever held whole in memory.
+     */
+    static void write(Installation inst, Result result, ReferenceData data, Path templates, String changesSince,
+                      List<String> changes, Path pdf, Path traceFile, NoteRenderer.Progress progress) throws IOException {
         String fingerprint = fingerprint(inst, data);
-        String trace = trace(inst, result, data);
+        NoteRenderer renderer = new NoteRenderer(templates);
         NoteView view = NoteBuilder.build(result, data, fingerprint, Version.engine(), changesSince, changes);
-        byte[] bytes = new NoteRenderer(templates).pdf(view, inst.project().date(),
-                new NoteRenderer.Attachment("input.canonical.json", "Design input (canonical form)",
-                        inst.canonicalJson().getBytes(StandardCharsets.UTF_8)),
-                new NoteRenderer.Attachment("trace.json", "Calculation trace", trace.getBytes(StandardCharsets.UTF_8)),
-                new NoteRenderer.Attachment(org.feedernote.archive.NoteArchive.SOURCE_NAME, "Design input as written: "
-                        + org.feedernote.report.NoteBuilder.fileName(inst.sourceName()), inst.sourceText().getBytes(StandardCharsets.UTF_8)));
-        return new Made(bytes, trace, fingerprint);
+        Files.writeAtomically(traceFile, out -> {
+            java.io.Writer w = new java.io.OutputStreamWriter(out, StandardCharsets.UTF_8);
+            TraceJson.write(result.trace(), Version.engine(), data.version(), fingerprint, w);
+            w.flush();
+        });
+        Files.writeFileAtomically(pdf, tmp -> renderer.write(view, inst.project().date(), tmp, progress, attachments(inst,
+                NoteRenderer.Attachment.file(org.feedernote.archive.NoteArchive.TRACE_NAME, "Calculation trace", traceFile))));
     }
+
+    private static NoteRenderer.Attachment[] attachments(Installation inst, NoteRenderer.Attachment trace) {
+        return new NoteRenderer.Attachment[] {
+                new NoteRenderer.Attachment(org.feedernote.archive.NoteArchive.INPUT_NAME, "Design input (canonical form)",
+                        inst.canonicalJson().getBytes(StandardCharsets.UTF_8)),
+                trace,
+                new NoteRenderer.Attachment(org.feedernote.archive.NoteArchive.SOURCE_NAME, "Design input as written: "
+                        + NoteBuilder.fileName(inst.sourceName()), inst.sourceText().getBytes(StandardCharsets.UTF_8))};
+    }
+
 }

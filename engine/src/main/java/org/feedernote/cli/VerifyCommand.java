@@ -3,7 +3,6 @@ package org.feedernote.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.Arrays;
 import java.util.List;
 import java.util.concurrent.Callable;
 
@@ -72,11 +71,19 @@ final class VerifyCommand implements Callable<Integer> {
         }
         for (TraceComparison.Difference d : TraceComparison.compare(archive.trace(), trace)) problems.add(d.text());
         if (sameEngine && problems.isEmpty()) {
-            byte[] again = NoteMaker.make(inst, result, data, null, null, List.of()).pdf();
-            byte[] given = java.nio.file.Files.readAllBytes(note);
-            if (!Arrays.equals(again, given)) {
-                problems.add("the PDF's bytes differ from the note this engine writes for the embedded input"
-                        + " (the document was edited after it was written, or written with --templates or --previous)");
+            Path scratch = java.nio.file.Files.createTempDirectory("feedernote-verify");
+            try {
+                Path again = scratch.resolve("note.pdf");
+                NoteMaker.write(inst, result, data, null, null, List.of(), again, scratch.resolve("trace.json"),
+                        org.feedernote.report.NoteRenderer.Progress.NONE);
+                if (java.nio.file.Files.mismatch(again, note) >= 0) {
+                    problems.add("the PDF's bytes differ from the note this engine writes for the embedded input"
+                            + " (the document was edited after it was written, or written with --templates or --previous)");
+                }
+            } finally {
+                try (var files = java.nio.file.Files.walk(scratch)) {
+                    for (Path p : files.sorted(java.util.Comparator.reverseOrder()).toList()) java.nio.file.Files.deleteIfExists(p);
+                }
             }
         }
         if (problems.isEmpty()) {

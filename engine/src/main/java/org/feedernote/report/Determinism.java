@@ -18,8 +18,34 @@ final class Determinism {
     private Determinism() {}
 
     static byte[] pin(byte[] pdf, String fingerprint, String isoDate) {
+        return pin(pdf, 0, fingerprint, isoDate);
+    }
+
+    /**
+     * Pins the part of a PDF from {@code from} on: OpenPDF writes the dates, the document id and
+     * the font subsets only when the document closes, so the pages before that need no scan.
+     */
+    static byte[] pin(byte[] pdf, int from, String fingerprint, String isoDate) {
+        byte[] tail = pinText(new String(pdf, from, pdf.length - from, StandardCharsets.ISO_8859_1), fingerprint, isoDate);
+        byte[] out = pdf.clone();
+        System.arraycopy(tail, 0, out, from, tail.length);
+        return out;
+    }
+
+    /** Pins a PDF file in place from {@code from} on (the replacements keep every length). */
+    static void pin(java.nio.file.Path file, long from, String fingerprint, String isoDate) throws java.io.IOException {
+        try (java.io.RandomAccessFile f = new java.io.RandomAccessFile(file.toFile(), "rw")) {
+            byte[] tail = new byte[Math.toIntExact(f.length() - from)];
+            f.seek(from);
+            f.readFully(tail);
+            byte[] pinned = pinText(new String(tail, StandardCharsets.ISO_8859_1), fingerprint, isoDate);
+            f.seek(from);
+            f.write(pinned);
+        }
+    }
+
+    private static byte[] pinText(String text, String fingerprint, String isoDate) {
         // ISO-8859-1 maps bytes to chars one to one, so offsets are preserved.
-        String text = new String(pdf, StandardCharsets.ISO_8859_1);
         String stamp = isoDate.replace("-", "") + "000000";
         Matcher d = DATE.matcher(text);
         StringBuilder b = new StringBuilder();

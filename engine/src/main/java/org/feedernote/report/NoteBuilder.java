@@ -76,15 +76,11 @@ public final class NoteBuilder {
                 result.notPerformed(), result.circuits().size(), checks);
 
         Map<String, String> circuitSection = new LinkedHashMap<>();
-        List<SectionView> sections = new ArrayList<>();
         int n = 3;
         Map<String, Step> index = new java.util.HashMap<>();
         for (Step s : TraceWalk.steps(result.trace())) index.put(s.id(), s);
-        for (Section s : result.trace().sections()) {
-            String number = Integer.toString(n++);
-            circuitSection.put(s.id(), number);
-            sections.add(section(s, number, !s.id().equals("supply"), index));
-        }
+        for (Section s : result.trace().sections()) circuitSection.put(s.id(), Integer.toString(n++));
+        List<SectionView> sections = new LazySections(result.trace().sections(), index);
 
         List<SummaryRow> summary = new ArrayList<>();
         for (CircuitResult c : result.circuits()) summary.add(summaryRow(c, circuitSection.get(c.id())));
@@ -209,6 +205,29 @@ public final class NoteBuilder {
     }
 
     // ---------------- worked steps ----------------
+
+    /**
+     * The worked sections, each built when it is asked for and not kept: a note of ten thousand
+     * circuits is laid out one section at a time without holding every step's view at once.
+     */
+    private static final class LazySections extends java.util.AbstractList<SectionView> {
+        private final List<Section> sections;
+        private final Map<String, Step> index;
+
+        LazySections(List<Section> sections, Map<String, Step> index) {
+            this.sections = sections;
+            this.index = index;
+        }
+
+        @Override public SectionView get(int i) {
+            Section s = sections.get(i);
+            return section(s, Integer.toString(i + 3), !s.id().equals("supply"), index);
+        }
+
+        @Override public int size() {
+            return sections.size();
+        }
+    }
 
     static SectionView section(Section s, String number, boolean newPage, Map<String, Step> index) {
         List<StepView> steps = new ArrayList<>();

@@ -2,39 +2,60 @@ package org.feedernote.report;
 
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.io.OutputStream;
+import java.io.Reader;
 import java.io.StringWriter;
 import java.nio.file.Path;
+import java.util.Calendar;
+import java.util.GregorianCalendar;
+import java.util.List;
 import java.util.Map;
+import java.util.TimeZone;
 
-
-import com.lowagie.text.pdf.BaseFont;
+import com.lowagie.text.Document;
+import com.lowagie.text.PageSize;
+import com.lowagie.text.pdf.PdfDate;
+import com.lowagie.text.pdf.PdfDictionary;
 import com.lowagie.text.pdf.PdfFileSpecification;
+import com.lowagie.text.pdf.PdfName;
+import com.lowagie.text.pdf.PdfObject;
+import com.lowagie.text.pdf.PdfString;
 import com.lowagie.text.pdf.PdfWriter;
 import freemarker.cache.ClassTemplateLoader;
 import freemarker.cache.FileTemplateLoader;
+import freemarker.cache.TemplateLoader;
 import freemarker.ext.beans.ZeroArgumentNonVoidMethodPolicy;
 import freemarker.template.Configuration;
 import freemarker.template.DefaultObjectWrapperBuilder;
 import freemarker.template.Template;
 import freemarker.template.TemplateException;
 import freemarker.template.TemplateExceptionHandler;
-import org.xhtmlrenderer.pdf.DefaultPDFCreationListener;
-import org.xhtmlrenderer.pdf.ITextFontResolver;
-import org.xhtmlrenderer.pdf.ITextRenderer;
 
+import org.feedernote.report.pdf.Fonts;
+import org.feedernote.report.pdf.Markup;
+import org.feedernote.report.pdf.PageFurniture;
+import org.feedernote.report.pdf.Style;
+import org.feedernote.report.pdf.StyleSheet;
+import org.feedernote.report.pdf.Typesetter;
 import org.feedernote.report.view.NoteView;
+import org.feedernote.report.view.SectionView;
 
 /**
- * Lays the note out: FreeMarker templates → XHTML with paged-media CSS → PDF (flying-saucer on
- * OpenPDF), with the Liberation fonts embedded, the design input and trace attached, and the
- * three things that would differ between runs (creation date, document id, font-subset tags)
- * pinned to values derived from the fingerprint and the note's date.
+ * Lays the note out: FreeMarker templates → XHTML → PDF pages written by OpenPDF through the
+ * {@link Typesetter}, one part at a time (the front matter, each worked section, the appendices),
+ * so the note streams to its file whatever its length. The Liberation fonts are embedded, the
+ * design input and trace attached, and the three things that would differ between runs (creation
+ * date, document id, font-subset tags) pinned to values derived from the fingerprint and the
+ * note's date.
  */
 public final class NoteRenderer {
-    private static final String[] FONTS = {
-            "liberation/LiberationSans-Regular.ttf", "liberation/LiberationSans-Bold.ttf",
-            "liberation/LiberationSans-Italic.ttf", "liberation/LiberationSans-BoldItalic.ttf",
-            "liberation/LiberationMono-Regular.ttf"};
+    /** The files a template folder holds. */
+    public static final List<String> TEMPLATE_FILES = List.of("front.ftlh", "section.ftlh", "appendix.ftlh", "steps.ftlh", "note.css");
+
+    /** What a browser gives without a style sheet; the note's note.css comes after it and wins. */
+    private static final String DEFAULTS = "b, strong, th, h1, h2, h3, h4 { font-weight: bold; } i, em { font-style: italic; } "
+            + "h1 { font-size: 16pt; } h2 { font-size: 13pt; } h3 { font-size: 11pt; } p { margin: 0 0 2mm 0; } "
+            + "sub { font-size: 70%; vertical-align: sub; } sup { font-size: 70%; vertical-align: super; }\n";
 
     private final Configuration freemarker;
 
@@ -61,53 +82,143 @@ public final class NoteRenderer {
         this.freemarker = cfg;
     }
 
-    public String xhtml(NoteView note) throws IOException {
-        try {
-            Template t = freemarker.getTemplate("note.ftlh");
-            StringWriter out = new StringWriter();
-            t.process(Map.of("note", note), out);
-            return out.toString();
-        } catch (TemplateException e) {
-            throw new IOException("the note template failed: " + e.getMessage(), e);
+    /** Attachments carried inside the PDF: bytes, or a file streamed from disk (large traces). */
+    public record Attachment(String name, String description, byte[] content, Path file) {
+        public Attachment(String name, String description, byte[] content) {
+            this(name, description, content, null);
+        }
+
+        public static Attachment file(String name, String description, Path file) {
+            return new Attachment(name, description, null, file);
         }
     }
 
-    /** Attachments carried inside the PDF. */
-    public record Attachment(String name, String description, byte[] content) {}
+    /** Told after each worked section is laid out. */
+    public interface Progress {
+        void sectionDone(int done, int total);
 
-    public byte[] pdf(NoteView note, String noteDate, Attachment... attachments) throws IOException {
-        String xhtml = xhtml(note);
-        ITextRenderer renderer = new ITextRenderer();
-        ITextFontResolver fonts = renderer.getFontResolver();
-        for (String f : FONTS) fonts.addFont(f, BaseFont.IDENTITY_H, BaseFont.EMBEDDED);
-        renderer.setListener(new DefaultPDFCreationListener() {
-            @Override public void preOpen(ITextRenderer r) {
-                super.preOpen(r);
-                com.lowagie.text.pdf.PdfDictionary info = r.getWriter().getInfo();
-                info.put(new com.lowagie.text.pdf.PdfName("Fingerprint"), new com.lowagie.text.pdf.PdfString(note.fingerprint()));
-                info.put(new com.lowagie.text.pdf.PdfName("EngineVersion"), new com.lowagie.text.pdf.PdfString(note.engineVersion()));
-                info.put(new com.lowagie.text.pdf.PdfName("Reference"), new com.lowagie.text.pdf.PdfString(note.cover().reference(), com.lowagie.text.pdf.PdfObject.TEXT_UNICODE));
-                info.put(new com.lowagie.text.pdf.PdfName("Revision"), new com.lowagie.text.pdf.PdfString(note.cover().revision(), com.lowagie.text.pdf.PdfObject.TEXT_UNICODE));
-                info.put(new com.lowagie.text.pdf.PdfName("InputFile"), new com.lowagie.text.pdf.PdfString(note.listingName(), com.lowagie.text.pdf.PdfObject.TEXT_UNICODE));
-            }
-
-            @Override public void onClose(ITextRenderer r) {
-                PdfWriter writer = r.getWriter();
-                try {
-                    for (Attachment a : attachments) {
-                        PdfFileSpecification spec = PdfFileSpecification.fileEmbedded(writer, null, a.name(), a.content());
-                        writer.addFileAttachment(a.description(), spec);
-                    }
-                } catch (IOException e) {
-                    throw new IllegalStateException("cannot attach " + e.getMessage(), e);
-                }
-            }
-        });
-        renderer.setDocumentFromString(xhtml);
-        renderer.layout();
-        ByteArrayOutputStream out = new ByteArrayOutputStream();
-        renderer.createPDF(out);
-        return Determinism.pin(out.toByteArray(), note.fingerprint(), noteDate);
+        Progress NONE = (done, total) -> {};
     }
 
+    private String part(String template, Map<String, Object> model) throws IOException {
+        try {
+            Template t = freemarker.getTemplate(template);
+            StringWriter out = new StringWriter(8192);
+            t.process(model, out);
+            return out.toString();
+        } catch (TemplateException e) {
+            throw new IOException("the note template " + template + " failed: " + e.getMessage(), e);
+        }
+    }
+
+    /** The whole note's markup, part after part (for tests and for reading the templates' output). */
+    public String xhtml(NoteView note) throws IOException {
+        StringBuilder b = new StringBuilder(part("front.ftlh", Map.of("note", note)));
+        for (SectionView s : note.sections()) b.append(part("section.ftlh", Map.of("note", note, "section", s)));
+        b.append(part("appendix.ftlh", Map.of("note", note)));
+        return b.toString();
+    }
+
+    private String css() throws IOException {
+        TemplateLoader loader = freemarker.getTemplateLoader();
+        Object source = loader.findTemplateSource("note.css");
+        if (source == null) throw new IOException("the note templates have no note.css");
+        try (Reader r = loader.getReader(source, "UTF-8")) {
+            StringWriter w = new StringWriter();
+            r.transferTo(w);
+            return w.toString();
+        } finally {
+            loader.closeTemplateSource(source);
+        }
+    }
+
+    public byte[] pdf(NoteView note, String noteDate, Attachment... attachments) throws IOException {
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        long tail = render(note, noteDate, out, Progress.NONE, attachments);
+        return Determinism.pin(out.toByteArray(), Math.toIntExact(tail), note.fingerprint(), noteDate);
+    }
+
+    /** Writes the note to a file, streaming; the caller moves it into place. */
+    public void write(NoteView note, String noteDate, Path file, Progress progress, Attachment... attachments) throws IOException {
+        long tail;
+        try (OutputStream out = new java.io.BufferedOutputStream(java.nio.file.Files.newOutputStream(file), 1 << 16)) {
+            tail = render(note, noteDate, out, progress, attachments);
+        }
+        Determinism.pin(file, tail, note.fingerprint(), noteDate);
+    }
+
+    /** Lays the note out into {@code out}; returns the offset from which the bytes written on closing begin. */
+    private long render(NoteView note, String noteDate, OutputStream out, Progress progress, Attachment... attachments)
+            throws IOException {
+        StyleSheet sheet = StyleSheet.parse(DEFAULTS + css());
+        float[] margins = pageMargins(sheet);
+        Document document = new Document(PageSize.A4, margins[3], margins[1], margins[0], margins[2]);
+        Fonts fonts = new Fonts();
+        PdfWriter writer = PdfWriter.getInstance(document, out);
+        writer.setCompressionLevel(6);
+        document.addTitle(note.cover().reference() + " rev " + note.cover().revision() + " — " + note.cover().title());
+        document.addSubject("Calculation note " + note.cover().reference() + " revision " + note.cover().revision());
+        document.addKeywords("feedernote fingerprint " + note.fingerprint());
+        document.addAuthor(note.cover().signatures().get(0).name());
+        document.addCreator("feedernote " + note.engineVersion());
+        Typesetter typesetter = new Typesetter(fonts, sheet, document, writer);
+        Style header = typesetter.styleOf("div", "running-header");
+        Style footer = typesetter.styleOf("div", "running-footer");
+        Style mark = typesetter.styleOf("div", "watermark");
+        writer.setPageEvent(new PageFurniture(new PageFurniture.Texts(note.runningTitle(), "Calculation note",
+                "Fingerprint " + note.fingerprintShort() + " · " + note.cover().status(), note.draft() ? "DRAFT" : null,
+                header.fontSize(), footer.fontSize(), mark.fontSize(), mark.color()), fonts));
+        document.open();
+        PdfDictionary info = writer.getInfo();
+        info.put(new PdfName("Fingerprint"), new PdfString(note.fingerprint()));
+        info.put(new PdfName("EngineVersion"), new PdfString(note.engineVersion()));
+        info.put(new PdfName("Reference"), new PdfString(note.cover().reference(), PdfObject.TEXT_UNICODE));
+        info.put(new PdfName("Revision"), new PdfString(note.cover().revision(), PdfObject.TEXT_UNICODE));
+        info.put(new PdfName("InputFile"), new PdfString(note.listingName(), PdfObject.TEXT_UNICODE));
+        PdfDate date = new PdfDate(calendar(noteDate));
+        info.put(PdfName.CREATIONDATE, date);
+        info.put(PdfName.MODDATE, date);
+        for (Attachment a : attachments) {
+            PdfFileSpecification spec = a.file() != null
+                    ? PdfFileSpecification.fileEmbedded(writer, a.file().toString(), a.name(), null, true)
+                    : PdfFileSpecification.fileEmbedded(writer, null, a.name(), a.content(), true);
+            writer.addFileAttachment(a.description(), spec);
+        }
+        typesetter.typeset(Markup.parse(part("front.ftlh", Map.of("note", note)), "front.ftlh"));
+        int total = note.sections().size();
+        int done = 0;
+        for (SectionView s : note.sections()) {
+            typesetter.typeset(Markup.parse(part("section.ftlh", Map.of("note", note, "section", s)), "section.ftlh"));
+            progress.sectionDone(++done, total);
+        }
+        typesetter.typeset(Markup.parse(part("appendix.ftlh", Map.of("note", note)), "appendix.ftlh"));
+        long tail = writer.getCurrentDocumentSize();
+        document.close();
+        return tail;
+    }
+
+    private static Calendar calendar(String isoDate) {
+        GregorianCalendar c = new GregorianCalendar(TimeZone.getTimeZone("UTC"), java.util.Locale.ROOT);
+        c.clear();
+        String[] p = isoDate.split("-");
+        c.set(Integer.parseInt(p[0]), Integer.parseInt(p[1]) - 1, Integer.parseInt(p[2]), 0, 0, 0);
+        return c;
+    }
+
+    /** top, right, bottom, left in points, from the style sheet's @page margin (A4 defaults of 20 mm otherwise). */
+    private static float[] pageMargins(StyleSheet sheet) {
+        float mm = Style.MM;
+        float[] out = {20 * mm, 20 * mm, 20 * mm, 20 * mm};
+        String margin = sheet.page().get("margin");
+        if (margin == null) return out;
+        String[] v = margin.trim().split("\\s+");
+        float[] l = new float[v.length];
+        for (int i = 0; i < v.length; i++) l[i] = Style.points(v[i]);
+        return switch (v.length) {
+            case 1 -> new float[] {l[0], l[0], l[0], l[0]};
+            case 2 -> new float[] {l[0], l[1], l[0], l[1]};
+            case 3 -> new float[] {l[0], l[1], l[2], l[1]};
+            default -> new float[] {l[0], l[1], l[2], l[3]};
+        };
+    }
 }

@@ -16,19 +16,36 @@ public final class TraceJson {
     private TraceJson() {}
 
     public static String write(Section root, String engineVersion, String dataVersion, String fingerprint) {
-        ObjectNode out = MAPPER.createObjectNode();
-        out.put("format", "feedernote-trace");
-        out.put("version", FORMAT_VERSION);
-        out.put("engine_version", engineVersion);
-        out.put("reference_data", dataVersion);
-        out.put("fingerprint", fingerprint);
-        ArrayNode sections = out.putArray("sections");
-        for (Section s : root.sections()) sections.add(section(s));
+        java.io.StringWriter out = new java.io.StringWriter();
         try {
-            return MAPPER.writeValueAsString(out) + "\n";
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException(e);
+            write(root, engineVersion, dataVersion, fingerprint, out);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
         }
+        return out.toString();
+    }
+
+    /**
+     * Streams the trace to {@code out} section by section, so a trace of any size is written
+     * without holding its text (or a tree of it) in memory. The same bytes as {@link #write(Section, String, String, String)}.
+     */
+    public static void write(Section root, String engineVersion, String dataVersion, String fingerprint, java.io.Writer out)
+            throws java.io.IOException {
+        try (com.fasterxml.jackson.core.JsonGenerator g = MAPPER.getFactory().createGenerator(out)) {
+            g.disable(com.fasterxml.jackson.core.JsonGenerator.Feature.AUTO_CLOSE_TARGET);
+            g.useDefaultPrettyPrinter();
+            g.writeStartObject();
+            g.writeStringField("format", "feedernote-trace");
+            g.writeNumberField("version", FORMAT_VERSION);
+            g.writeStringField("engine_version", engineVersion);
+            g.writeStringField("reference_data", dataVersion);
+            g.writeStringField("fingerprint", fingerprint);
+            g.writeArrayFieldStart("sections");
+            for (Section s : root.sections()) MAPPER.writeTree(g, section(s));
+            g.writeEndArray();
+            g.writeEndObject();
+        }
+        out.write("\n");
     }
 
     private static ObjectNode section(Section s) {

@@ -1,0 +1,56 @@
+package org.feedernote.report.pdf;
+
+import java.awt.Color;
+import java.io.IOException;
+import java.util.HashMap;
+import java.util.Map;
+
+import com.lowagie.text.Font;
+import com.lowagie.text.pdf.BaseFont;
+
+/** The Liberation faces (from openpdf-fonts-extra), embedded and subset, and Font objects per style. */
+public final class Fonts {
+    private final BaseFont regular;
+    private final BaseFont bold;
+    private final BaseFont italic;
+    private final BaseFont boldItalic;
+    private final BaseFont mono;
+    private final Map<Key, Font> fonts = new HashMap<>();
+
+    private record Key(BaseFont face, float size, Color color, boolean underline) {}
+
+    public Fonts() throws IOException {
+        regular = load("liberation/LiberationSans-Regular.ttf");
+        bold = load("liberation/LiberationSans-Bold.ttf");
+        italic = load("liberation/LiberationSans-Italic.ttf");
+        boldItalic = load("liberation/LiberationSans-BoldItalic.ttf");
+        mono = load("liberation/LiberationMono-Regular.ttf");
+    }
+
+    private static BaseFont load(String resource) throws IOException {
+        return BaseFont.createFont(resource, BaseFont.IDENTITY_H, BaseFont.EMBEDDED);
+    }
+
+    BaseFont face(Style s) {
+        if (s.mono) return mono;
+        if (s.bold) return s.italic ? boldItalic : bold;
+        return s.italic ? italic : regular;
+    }
+
+    public BaseFont regular() {
+        return regular;
+    }
+
+    public BaseFont bold() {
+        return bold;
+    }
+
+    Font font(Style s) {
+        BaseFont face = face(s);
+        return fonts.computeIfAbsent(new Key(face, s.fontSize, s.color, s.underline), k -> {
+            Font f = new Font(k.face(), k.size(), k.underline() ? Font.UNDERLINE : Font.NORMAL);
+            f.setColor(k.color());
+            return f;
+        });
+    }
+}

@@ -1,0 +1,709 @@
+package org.feedernote.report.pdf;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+
+import com.lowagie.text.Chunk;
+import com.lowagie.text.Document;
+import com.lowagie.text.Element;
+import com.lowagie.text.Font;
+import com.lowagie.text.Paragraph;
+import com.lowagie.text.Rectangle;
+import com.lowagie.text.pdf.BaseFont;
+import com.lowagie.text.pdf.PdfDestination;
+import com.lowagie.text.pdf.PdfOutline;
+import com.lowagie.text.pdf.PdfPCell;
+import com.lowagie.text.pdf.PdfPTable;
+import com.lowagie.text.pdf.PdfWriter;
+import com.lowagie.text.pdf.draw.VerticalPositionMark;
+
+/**
+ * Lays the note's XHTML out on OpenPDF pages directly, one part at a time, so a note of any
+ * length streams to the file in bounded memory. It reads the markup the note's templates write
+ * (div, p, h1–h4, span, b, i, sub, sup, ul/li, tables) styled by the {@link StyleSheet} subset:
+ * fonts, colours, line height, alignment, margins and padding, borders and backgrounds of boxes and
+ * cells, widths, inline blocks of fixed width, right floats, and the page-break properties. Keeping
+ * a block together or a heading with what follows is decided on an estimate of the block's height
+ * from the font metrics (a greedy line break), which costs far less than laying it out twice.
+ */
+public final class Typesetter {
+    private static final Set<String> INLINE = Set.of("span", "b", "strong", "i", "em", "sub", "sup", "a", "code", "br", "u");
+    private static final Set<String> SKIPPED = Set.of("head", "title", "meta", "style", "script");
+    /** How much of what follows a heading must fit on its page (at most). */
+    private static final float KEEP_WITH_NEXT_CAP = 90f;
+
+    private final Fonts fonts;
+    private final Style.Resolver styles;
+    private final Document document;
+    private final PdfWriter writer;
+    private final float bodyWidth;
+    private final float bodyHeight;
+
+    /** One laid-out piece of the flow, with its estimated height. */
+    private sealed interface Item permits Block, PageBreak, Group {}
+
+    private record Block(Element element, float height, boolean keepWithNext, String outline) implements Item {}
+
+    private record PageBreak() implements Item {}
+
+    /** Blocks that go on one page where they can (page-break-inside: avoid). */
+    private record Group(List<Item> items, boolean keepWithNext) implements Item {}
+
+    public Typesetter(Fonts fonts, StyleSheet sheet, Document document, PdfWriter writer) {
+        this.fonts = fonts;
+        this.styles = new Style.Resolver(sheet);
+        this.document = document;
+        this.writer = writer;
+        this.bodyWidth = document.right() - document.left();
+        this.bodyHeight = document.top() - document.bottom();
+    }
+
+    /** Style of an element under the body (for the page furniture). */
+    public Style styleOf(String tag, String classes) {
+        return styles.resolve(body(), List.<String[]>of(new String[] {"body", ""}), tag, classes, "");
+    }
+
+    private Style body() {
+        return styles.resolve(styles.root(), List.of(), "body", "", "");
+    }
+
+    /** Lays out one part (a body element) at the current position. */
+    public void typeset(Markup.Element root) {
+        List<Item> items = new ArrayList<>();
+        List<String[]> ancestors = new ArrayList<>();
+        Markup.Element body = root.tag().equals("body") ? root : find(root, "body");
+        if (body == null) body = root;
+        Style s = styles.resolve(styles.root(), ancestors, "body", body.classes(), body.style());
+        ancestors.add(new String[] {"body", body.classes()});
+        children(body, s, ancestors, 0, bodyWidth, items);
+        flow(items);
+    }
+
+    private static Markup.Element find(Markup.Element e, String tag) {
+        for (Object c : e.children()) {
+            if (c instanceof Markup.Element child) {
+                if (child.tag().equals(tag)) return child;
+                Markup.Element deeper = find(child, tag);
+                if (deeper != null) return deeper;
+            }
+        }
+        return null;
+    }
+
+    // ---------------------------------------------------------------- flow on the pages
+
+    private float remaining() {
+        return writer.getVerticalPosition(true) - document.bottom();
+    }
+
+    private static float height(Item item) {
+        if (item instanceof Block b) return b.height();
+        if (item instanceof Group g) {
+            float h = 0;
+            for (Item i : g.items()) h += height(i);
+            return h;
+        }
+        return 0;
+    }
+
+    private void flow(List<Item> items) {
+        for (int i = 0; i < items.size(); i++) {
+            Item item = items.get(i);
+            if (item instanceof PageBreak) {
+                document.newPage();
+                continue;
+            }
+            float needed = height(item);
+            boolean keepWithNext = item instanceof Block b ? b.keepWithNext() : ((Group) item).keepWithNext();
+            if (keepWithNext && i + 1 < items.size()) needed += Math.min(height(items.get(i + 1)), KEEP_WITH_NEXT_CAP);
+            if ((item instanceof Group || keepWithNext) && needed > remaining() && needed <= bodyHeight) document.newPage();
+            add(item);
+        }
+    }
+
+    private void add(Item item) {
+        if (item instanceof Group g) {
+            for (Item i : g.items()) add(i);
+        } else if (item instanceof Block b) {
+            if (b.outline() != null) {
+                float y = Math.min(writer.getVerticalPosition(true) + 4, document.top() + 4);
+                new PdfOutline(writer.getDirectContent().getRootOutline(), new PdfDestination(PdfDestination.FITH, y), b.outline(), false);
+            }
+            document.add(b.element());
+        } else {
+            document.newPage();
+        }
+    }
+
+    // ---------------------------------------------------------------- blocks
+
+    private static boolean inline(Object node) {
+        return node instanceof String || (node instanceof Markup.Element e && INLINE.contains(e.tag()));
+    }
+
+    private static boolean inlineOnly(Markup.Element e) {
+        for (Object c : e.children()) if (!inline(c)) return false;
+        return true;
+    }
+
+    private static List<String[]> with(List<String[]> ancestors, Markup.Element e) {
+        List<String[]> out = new ArrayList<>(ancestors.size() + 1);
+        out.addAll(ancestors);
+        out.add(new String[] {e.tag(), e.classes()});
+        return out;
+    }
+
+    /** The items of a block element and its descendants, indented by {@code indent} points. */
+    private void block(Markup.Element e, Style parent, List<String[]> ancestors, float indent, float width, List<Item> out) {
+        if (SKIPPED.contains(e.tag())) return;
+        Style s = styles.resolve(parent, ancestors, e.tag(), e.classes(), e.style());
+        if (s.hidden) return;
+        if (s.breakBefore) out.add(new PageBreak());
+        List<String[]> inner = with(ancestors, e);
+        String outline = e.tag().equals("h2") ? text(e).strip() : null;
+        if (e.tag().equals("table")) {
+            Measured t = table(e, s, inner, width - indent);
+            PdfPTable table = t.table();
+            table.setSpacingBefore(s.marginTop);
+            table.setSpacingAfter(s.marginBottom);
+            if (indent > 0) {
+                table.setTotalWidth(Math.min(table.getTotalWidth() > 0 ? table.getTotalWidth() : width - indent, width - indent));
+            }
+            out.add(new Block(table, t.height() + s.marginTop + s.marginBottom, s.breakAfterAvoid, outline));
+            return;
+        }
+        if (e.tag().equals("ul") || e.tag().equals("ol")) {
+            int n = 0;
+            List<Item> list = new ArrayList<>();
+            for (Object c : e.children()) {
+                if (!(c instanceof Markup.Element li) || !li.tag().equals("li")) continue;
+                Style ls = styles.resolve(s, inner, "li", li.classes(), li.style());
+                String marker = e.tag().equals("ol") ? (++n) + "." : "•";
+                float hang = 4 * Style.MM;
+                Measured p = paragraph(li.children(), ls, with(inner, li), indent + s.marginLeft + s.paddingLeft + hang, -hang, width,
+                        marker, hang);
+                list.add(new Block(p.element(), p.height(), false, null));
+            }
+            spaceAround(list, s.marginTop == 0 ? 1.5f * Style.MM : s.marginTop, s.marginBottom == 0 ? 1.5f * Style.MM : s.marginBottom);
+            out.addAll(list);
+            return;
+        }
+        if (s.boxed() && !e.tag().equals("td") && !e.tag().equals("th")) {
+            Measured box = box(e, s, inner, width - indent);
+            PdfPTable table = (PdfPTable) box.element();
+            table.setSpacingBefore(s.marginTop);
+            table.setSpacingAfter(s.marginBottom);
+            out.add(new Block(table, box.height() + s.marginTop + s.marginBottom, s.breakAfterAvoid, outline));
+            return;
+        }
+        if (inlineOnly(e)) {
+            Measured p = paragraph(e.children(), s, inner, indent + s.marginLeft + s.paddingLeft, s.textIndent, width, null, 0);
+            if (p.element() == null) return;
+            Paragraph para = (Paragraph) p.element();
+            para.setSpacingBefore(s.marginTop);
+            float rule = 0;
+            if (s.ruleWidth > 0) {
+                Paragraph line = new Paragraph();
+                line.setLeading(s.paddingBottom + s.ruleWidth + 1);
+                line.add(new Chunk(new com.lowagie.text.pdf.draw.LineSeparator(s.ruleWidth, 100, s.ruleColor, Element.ALIGN_LEFT, 0)));
+                line.setIndentationLeft(indent + s.marginLeft);
+                line.setSpacingAfter(s.marginBottom);
+                rule = line.getLeading();
+                out.add(new Block(para, p.height() + s.marginTop, true, outline));
+                out.add(new Block(line, rule + s.marginBottom, s.breakAfterAvoid, null));
+                return;
+            }
+            para.setSpacingAfter(s.marginBottom);
+            out.add(new Block(p.element(), p.height() + s.marginTop + s.marginBottom, s.breakAfterAvoid, outline));
+            return;
+        }
+        List<Item> mine = new ArrayList<>();
+        children(e, s, inner, indent + s.marginLeft + s.paddingLeft, width, mine);
+        spaceAround(mine, s.marginTop, s.marginBottom);
+        if (s.breakInsideAvoid) out.add(new Group(mine, s.breakAfterAvoid));
+        else out.addAll(mine);
+    }
+
+    /** Children of a block: runs of inline content become anonymous paragraphs, blocks recurse. */
+    private void children(Markup.Element e, Style s, List<String[]> inner, float indent, float width, List<Item> out) {
+        List<Object> run = new ArrayList<>();
+        for (Object c : e.children()) {
+            if (inline(c)) {
+                run.add(c);
+                continue;
+            }
+            flushRun(run, s, inner, indent, width, out);
+            block((Markup.Element) c, s, inner, indent, width, out);
+        }
+        flushRun(run, s, inner, indent, width, out);
+    }
+
+    private void flushRun(List<Object> run, Style s, List<String[]> inner, float indent, float width, List<Item> out) {
+        if (run.isEmpty()) return;
+        Measured p = paragraph(List.copyOf(run), s, inner, indent, 0, width, null, 0);
+        run.clear();
+        if (p.element() != null) out.add(new Block(p.element(), p.height(), false, null));
+    }
+
+    /** Adds a block's margins to its first and last pieces. */
+    private static void spaceAround(List<Item> items, float top, float bottom) {
+        if (items.isEmpty() || (top == 0 && bottom == 0)) return;
+        List<Item> spaced = bump(bump(items, true, top), false, bottom);
+        items.clear();
+        items.addAll(spaced);
+    }
+
+    /** The items with {@code delta} added above the first block (or below the last). */
+    private static List<Item> bump(List<Item> items, boolean first, float delta) {
+        List<Item> out = new ArrayList<>(items);
+        if (delta == 0) return out;
+        for (int k = first ? 0 : out.size() - 1; k >= 0 && k < out.size(); k += first ? 1 : -1) {
+            Item i = out.get(k);
+            if (i instanceof Block b) {
+                spacing(b.element(), first ? delta : 0, first ? 0 : delta);
+                out.set(k, new Block(b.element(), b.height() + delta, b.keepWithNext(), b.outline()));
+                return out;
+            }
+            if (i instanceof Group g) {
+                out.set(k, new Group(bump(g.items(), first, delta), g.keepWithNext()));
+                return out;
+            }
+        }
+        return out;
+    }
+
+    private static void spacing(Element e, float before, float after) {
+        if (e instanceof Paragraph p) {
+            p.setSpacingBefore(p.getSpacingBefore() + before);
+            p.setSpacingAfter(p.getSpacingAfter() + after);
+        } else if (e instanceof PdfPTable t) {
+            t.setSpacingBefore(t.spacingBefore() + before);
+            t.setSpacingAfter(t.spacingAfter() + after);
+        }
+    }
+
+    // ---------------------------------------------------------------- paragraphs
+
+    /** An element and its estimated height. */
+    private record Measured(Element element, float height) {
+        PdfPTable table() {
+            return (PdfPTable) element;
+        }
+    }
+
+    /** A text run with its font, before it becomes a chunk. */
+    private record Run(String text, Style style) {}
+
+    private Measured paragraph(List<Object> nodes, Style s, List<String[]> ancestors, float indentLeft, float firstIndent,
+                               float width, String marker, float markerWidth) {
+        List<Run> runs = new ArrayList<>();
+        List<Run> right = new ArrayList<>();
+        List<Float> tabs = new ArrayList<>();
+        inline(nodes, s, ancestors, runs, right, tabs);
+        trim(runs);
+        trim(right);
+        if (runs.isEmpty() && right.isEmpty() && marker == null) return new Measured(null, 0);
+        Paragraph p = new Paragraph();
+        p.setFont(fonts.font(s));
+        p.setLeading(s.leading());
+        p.setAlignment(s.align);
+        p.setIndentationLeft(indentLeft);
+        p.setFirstLineIndent(firstIndent);
+        float lineWidth = width - indentLeft;
+        float x = firstIndent;
+        if (marker != null) {
+            Chunk m = new Chunk(marker, fonts.font(s));
+            float w = fonts.face(s).getWidthPoint(marker, s.fontSize);
+            p.add(m);
+            p.add(advance(s, Math.max(1, markerWidth - w)));
+            x += markerWidth;
+        }
+        int t = 0;
+        for (Run r : runs) {
+            if (r.text() == null) {
+                p.add(advance(r.style(), Math.max(1, tabs.get(t++) - x)));
+                x = Math.max(x, tabs.get(t - 1));
+                continue;
+            }
+            p.add(chunk(r));
+            x += fonts.face(r.style()).getWidthPoint(r.text(), r.style().fontSize);
+        }
+        if (!right.isEmpty()) {
+            p.add(new Chunk(new VerticalPositionMark()));
+            for (Run r : right) if (r.text() != null) p.add(chunk(r));
+        }
+        float lines = lines(runs, right, lineWidth, firstIndent + (marker == null ? 0 : markerWidth));
+        return new Measured(p, lines * s.leading());
+    }
+
+    /** A fixed horizontal advance: one no-break space with the character spacing that makes up the width. */
+    private Chunk advance(Style s, float width) {
+        Font f = fonts.font(s);
+        float space = f.getBaseFont().getWidthPoint('\u00a0', s.fontSize);
+        Chunk c = new Chunk("\u00a0", f);
+        c.setCharacterSpacing(Math.max(0, width - space));
+        return c;
+    }
+
+    private Chunk chunk(Run r) {
+        Chunk c = new Chunk(r.text(), fonts.font(r.style()));
+        if (r.style().rise != 0) c.setTextRise(r.style().rise);
+        return c;
+    }
+
+    /** Flattens inline content into runs; right floats go to {@code right}; inline blocks of fixed width end at a tab. */
+    private void inline(List<Object> nodes, Style s, List<String[]> ancestors, List<Run> runs, List<Run> right, List<Float> tabs) {
+        for (Object n : nodes) {
+            if (n instanceof String text) {
+                String t = s.pre ? text : collapse(text);
+                if (!t.isEmpty()) runs.add(new Run(t, s));
+                continue;
+            }
+            Markup.Element e = (Markup.Element) n;
+            if (e.tag().equals("br")) {
+                runs.add(new Run("\n", s));
+                continue;
+            }
+            Style es = styles.resolve(s, ancestors, e.tag(), e.classes(), e.style());
+            if (es.hidden) continue;
+            List<String[]> inner = with(ancestors, e);
+            if (es.floatRight) {
+                inline(e.children(), es, inner, right, right, tabs);
+                continue;
+            }
+            float start = width(runs, tabs);
+            inline(e.children(), es, inner, runs, right, tabs);
+            if (es.inlineBlock && es.width > 0) {
+                tabs.add(start + es.width);
+                runs.add(new Run(null, es));
+            }
+        }
+    }
+
+    /** The estimated width of the runs so far (tabs included). */
+    private float width(List<Run> runs, List<Float> tabs) {
+        float x = 0;
+        int t = 0;
+        for (Run r : runs) {
+            if (r.text() == null) x = Math.max(x, tabs.get(t++));
+            else x += fonts.face(r.style()).getWidthPoint(r.text(), r.style().fontSize);
+        }
+        return x;
+    }
+
+    private static String collapse(String text) {
+        StringBuilder b = new StringBuilder(text.length());
+        boolean space = false;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            if (c == ' ' || c == '\n' || c == '\t' || c == '\r') {
+                if (!space) b.append(' ');
+                space = true;
+            } else {
+                b.append(c);
+                space = false;
+            }
+        }
+        return b.toString();
+    }
+
+    /** Removes leading white space of the first run and trailing white space of the last, and doubled spaces between runs. */
+    private static void trim(List<Run> runs) {
+        while (!runs.isEmpty() && runs.get(0).text() != null && runs.get(0).text().isBlank() && !runs.get(0).style().pre) runs.remove(0);
+        if (!runs.isEmpty() && runs.get(0).text() != null && !runs.get(0).style().pre) {
+            runs.set(0, new Run(runs.get(0).text().stripLeading(), runs.get(0).style()));
+        }
+        while (!runs.isEmpty() && runs.get(runs.size() - 1).text() != null && runs.get(runs.size() - 1).text().isBlank()
+                && !runs.get(runs.size() - 1).style().pre) {
+            runs.remove(runs.size() - 1);
+        }
+        int last = runs.size() - 1;
+        if (last >= 0 && runs.get(last).text() != null && !runs.get(last).style().pre) {
+            runs.set(last, new Run(runs.get(last).text().stripTrailing(), runs.get(last).style()));
+        }
+        for (int k = 1; k < runs.size(); k++) {
+            Run prev = runs.get(k - 1);
+            Run cur = runs.get(k);
+            if (prev.text() != null && cur.text() != null && prev.text().endsWith(" ") && cur.text().startsWith(" ")) {
+                runs.set(k, new Run(cur.text().substring(1), cur.style()));
+            }
+        }
+    }
+
+    /** Lines a greedy break would make: the estimate behind keep-together and keep-with-next. */
+    private float lines(List<Run> runs, List<Run> right, float width, float start) {
+        if (width <= 10) return 1;
+        int lines = 1;
+        float x = start;
+        for (Run r : runs) {
+            if (r.text() == null) continue;
+            BaseFont face = fonts.face(r.style());
+            float size = r.style().fontSize;
+            float space = face.getWidthPoint(' ', size);
+            int from = 0;
+            String text = r.text();
+            while (from < text.length()) {
+                int nl = text.indexOf('\n', from);
+                int sp = text.indexOf(' ', from);
+                int end = sp < 0 ? text.length() : sp;
+                if (nl >= 0 && nl < end) end = nl;
+                float w = face.getWidthPoint(text.substring(from, end), size);
+                if (x + w > width && x > 0) {
+                    lines++;
+                    x = 0;
+                }
+                x += w;
+                while (w > width && x > width) {
+                    lines++;
+                    x -= width;
+                }
+                if (end < text.length() && text.charAt(end) == '\n') {
+                    lines++;
+                    x = 0;
+                } else if (end < text.length()) {
+                    x += space;
+                }
+                from = end + 1;
+            }
+        }
+        if (!right.isEmpty()) {
+            float w = 0;
+            for (Run r : right) if (r.text() != null) w += fonts.face(r.style()).getWidthPoint(r.text(), r.style().fontSize);
+            if (x + w + 6 > width) lines++;
+        }
+        return lines;
+    }
+
+    private static String text(Markup.Element e) {
+        StringBuilder b = new StringBuilder();
+        for (Object c : e.children()) {
+            if (c instanceof String s) b.append(s);
+            else b.append(text((Markup.Element) c));
+        }
+        return collapse(b.toString());
+    }
+
+    // ---------------------------------------------------------------- tables and boxes
+
+    private Measured box(Markup.Element e, Style s, List<String[]> inner, float available) {
+        float w = s.width > 0 ? Math.min(s.width, available) : s.width < 0 ? available * -s.width / 100f : available;
+        PdfPTable table = new PdfPTable(1);
+        table.setTotalWidth(w);
+        table.setLockedWidth(true);
+        table.setHorizontalAlignment(Element.ALIGN_LEFT);
+        PdfPCell cell = cell(s);
+        float content = w - s.paddingLeft - s.paddingRight - 2 * s.borderWidth;
+        float h = fill(cell, e, s, inner, content);
+        table.addCell(cell);
+        table.setKeepTogether(s.breakInsideAvoid);
+        return new Measured(table, Math.max(h + s.paddingTop + s.paddingBottom + 2 * s.borderWidth, s.height));
+    }
+
+    private PdfPCell cell(Style s) {
+        PdfPCell cell = new PdfPCell();
+        cell.setUseAscender(true);
+        cell.setPaddingTop(s.paddingTop);
+        cell.setPaddingRight(s.paddingRight);
+        cell.setPaddingBottom(s.paddingBottom + s.fontSize * 0.25f);
+        cell.setPaddingLeft(s.paddingLeft);
+        if (s.borderWidth > 0) {
+            cell.setBorder(Rectangle.BOX);
+            cell.setBorderWidth(s.borderWidth);
+            cell.setBorderColor(s.borderColor);
+        } else {
+            cell.setBorder(Rectangle.NO_BORDER);
+        }
+        if (s.background != null) cell.setBackgroundColor(s.background);
+        if (s.height > 0) cell.setMinimumHeight(s.height);
+        cell.setVerticalAlignment(s.verticalAlign);
+        return cell;
+    }
+
+    /** Puts an element's content into a cell; returns the content's estimated height. */
+    private float fill(PdfPCell cell, Markup.Element e, Style s, List<String[]> inner, float width) {
+        List<Item> items = new ArrayList<>();
+        if (inlineOnly(e)) {
+            Measured p = paragraph(e.children(), s, inner, 0, s.textIndent, width, null, 0);
+            if (p.element() != null) items.add(new Block(p.element(), p.height(), false, null));
+        } else {
+            children(e, s, inner, 0, width, items);
+        }
+        float h = 0;
+        for (Item i : flatten(items)) {
+            Block b = (Block) i;
+            cell.addElement(b.element());
+            h += b.height();
+        }
+        return h;
+    }
+
+    private static List<Item> flatten(List<Item> items) {
+        List<Item> out = new ArrayList<>();
+        for (Item i : items) {
+            if (i instanceof Group g) out.addAll(flatten(g.items()));
+            else if (i instanceof Block) out.add(i);
+        }
+        return out;
+    }
+
+    private Measured table(Markup.Element e, Style s, List<String[]> inner, float available) {
+        List<Markup.Element> rows = new ArrayList<>();
+        List<List<String[]>> rowAncestors = new ArrayList<>();
+        List<Style> rowStyles = new ArrayList<>();
+        int headerRows = 0;
+        for (Object c : e.children()) {
+            if (!(c instanceof Markup.Element child)) continue;
+            if (child.tag().equals("tr")) {
+                rows.add(child);
+                rowAncestors.add(inner);
+                rowStyles.add(s);
+            } else if (child.tag().equals("thead") || child.tag().equals("tbody") || child.tag().equals("tfoot")) {
+                Style gs = styles.resolve(s, inner, child.tag(), child.classes(), child.style());
+                List<String[]> groupAncestors = with(inner, child);
+                for (Object r : child.children()) {
+                    if (r instanceof Markup.Element tr && tr.tag().equals("tr")) {
+                        rows.add(tr);
+                        rowAncestors.add(groupAncestors);
+                        rowStyles.add(gs);
+                        if (child.tag().equals("thead")) headerRows++;
+                    }
+                }
+            }
+        }
+        int columns = 1;
+        for (Markup.Element tr : rows) {
+            int n = 0;
+            for (Object c : tr.children()) if (c instanceof Markup.Element td) n += span(td);
+            columns = Math.max(columns, n);
+        }
+        float total = s.width > 0 ? Math.min(s.width, available) : s.width < 0 ? available * -s.width / 100f : available;
+        float[] widths = new float[columns];
+        if (!rows.isEmpty()) {
+            Markup.Element first = rows.get(0);
+            Style rs = styles.resolve(rowStyles.get(0), rowAncestors.get(0), "tr", first.classes(), first.style());
+            List<String[]> ra = with(rowAncestors.get(0), first);
+            int col = 0;
+            for (Object c : first.children()) {
+                if (!(c instanceof Markup.Element td)) continue;
+                Style cs = styles.resolve(rs, ra, td.tag(), td.classes(), td.style());
+                if (span(td) == 1 && col < columns) {
+                    widths[col] = cs.width > 0 ? cs.width : cs.width < 0 ? total * -cs.width / 100f : 0;
+                }
+                col += span(td);
+            }
+        }
+        autoWidths(widths, total, rows, rowStyles, rowAncestors);
+        PdfPTable table = new PdfPTable(columns);
+        table.setTotalWidth(total);
+        table.setLockedWidth(true);
+        table.setHorizontalAlignment(Element.ALIGN_LEFT);
+        try {
+            table.setWidths(widths);
+        } catch (com.lowagie.text.DocumentException ex) {
+            throw new IllegalStateException(ex);
+        }
+        table.setHeaderRows(Math.min(headerRows, rows.size()));
+        table.setSplitLate(true);
+        float height = 0;
+        for (int r = 0; r < rows.size(); r++) {
+            Markup.Element tr = rows.get(r);
+            Style rs = styles.resolve(rowStyles.get(r), rowAncestors.get(r), "tr", tr.classes(), tr.style());
+            List<String[]> ra = with(rowAncestors.get(r), tr);
+            int col = 0;
+            float rowHeight = 0;
+            for (Object c : tr.children()) {
+                if (!(c instanceof Markup.Element td)) continue;
+                Style cs = styles.resolve(rs, ra, td.tag(), td.classes(), td.style());
+                int span = Math.min(span(td), columns - col);
+                float w = 0;
+                for (int k = col; k < col + span; k++) w += widths[k];
+                PdfPCell cell = cell(cs);
+                cell.setColspan(span);
+                float h = fill(cell, td, cs, with(ra, td), w - cs.paddingLeft - cs.paddingRight);
+                rowHeight = Math.max(rowHeight, Math.max(cs.height, h + cs.paddingTop + cs.paddingBottom + cs.fontSize * 0.25f));
+                table.addCell(cell);
+                col += span;
+            }
+            while (col < columns) {
+                PdfPCell empty = new PdfPCell();
+                empty.setBorder(Rectangle.NO_BORDER);
+                table.addCell(empty);
+                col++;
+            }
+            height += rowHeight;
+        }
+        return new Measured(table, height);
+    }
+
+    /**
+     * Columns without a given width share what is left as a browser's automatic layout would:
+     * each gets its natural (unbroken) width where everything fits; otherwise at least its longest
+     * word, and the rest in proportion to how much more it would take unbroken.
+     */
+    private void autoWidths(float[] widths, float total, List<Markup.Element> rows, List<Style> rowStyles,
+                            List<List<String[]>> rowAncestors) {
+        int columns = widths.length;
+        float[] natural = new float[columns];
+        float[] minimum = new float[columns];
+        for (int r = 0; r < rows.size(); r++) {
+            Markup.Element tr = rows.get(r);
+            Style rs = styles.resolve(rowStyles.get(r), rowAncestors.get(r), "tr", tr.classes(), tr.style());
+            List<String[]> ra = with(rowAncestors.get(r), tr);
+            int col = 0;
+            for (Object c : tr.children()) {
+                if (!(c instanceof Markup.Element td)) continue;
+                int span = span(td);
+                if (span == 1 && col < columns && widths[col] == 0) {
+                    Style cs = styles.resolve(rs, ra, td.tag(), td.classes(), td.style());
+                    BaseFont face = fonts.face(cs);
+                    String text = text(td).strip();
+                    float pad = cs.paddingLeft + cs.paddingRight + 2;
+                    natural[col] = Math.max(natural[col], face.getWidthPoint(text, cs.fontSize) + pad);
+                    float longest = 0;
+                    for (String word : text.split(" ")) longest = Math.max(longest, face.getWidthPoint(word, cs.fontSize));
+                    minimum[col] = Math.max(minimum[col], longest + pad);
+                }
+                col += span;
+            }
+        }
+        float given = 0;
+        float naturalSum = 0;
+        float minimumSum = 0;
+        int open = 0;
+        for (int k = 0; k < columns; k++) {
+            if (widths[k] > 0) {
+                given += widths[k];
+            } else {
+                open++;
+                natural[k] = Math.max(natural[k], 6);
+                minimum[k] = Math.min(Math.max(minimum[k], 6), natural[k]);
+                naturalSum += natural[k];
+                minimumSum += minimum[k];
+            }
+        }
+        if (open == 0) return;
+        float left = Math.max(total - given, open * 6f);
+        for (int k = 0; k < columns; k++) {
+            if (widths[k] > 0) continue;
+            if (naturalSum <= left) {
+                widths[k] = natural[k] + (left - naturalSum) * natural[k] / naturalSum;
+            } else if (minimumSum <= left) {
+                float flexible = naturalSum - minimumSum;
+                widths[k] = minimum[k] + (flexible <= 0 ? 0 : (left - minimumSum) * (natural[k] - minimum[k]) / flexible);
+            } else {
+                widths[k] = left * minimum[k] / minimumSum;
+            }
+        }
+    }
+
+    private static int span(Markup.Element td) {
+        String v = td.attribute("colspan");
+        if (v == null) return 1;
+        try {
+            return Math.max(1, Integer.parseInt(v.trim()));
+        } catch (NumberFormatException e) {
+            return 1;
+        }
+    }
+}
