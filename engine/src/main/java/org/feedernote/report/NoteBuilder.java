@@ -110,13 +110,34 @@ public final class NoteBuilder {
                 .toList();
         List<SourceView> others = other.stream().map(o -> new SourceView(o, "", false)).toList();
 
-        List<String> listing = List.of(inst.sourceText().replace("\r\n", "\n").split("\n", -1));
-        if (!listing.isEmpty() && listing.get(listing.size() - 1).isEmpty()) listing = listing.subList(0, listing.size() - 1);
+        List<ListingLine> listing = listing(inst.sourceText());
         String shortPrint = fingerprint.substring(0, 12);
         String running = p.title() + " · " + p.reference() + " rev " + p.revision();
         return new NoteView(cover, basis(inst), standards(), CAUTIONS, assumptions(), summary, sections, docs, tableViews, others,
                 listing, fileName(inst.sourceName()), fingerprint, shortPrint, p.status() == Status.DRAFT, engineVersion,
                 data.version(), running, changesSince, changes);
+    }
+
+    /** Characters of the input listing per printed line (7 pt mono across the text width). */
+    static final int LISTING_WIDTH = 104;
+
+    /**
+     * The input as written, line by line, numbered as the file's lines are (the numbers error
+     * messages give); a line longer than the page is continued on unnumbered lines.
+     */
+    static List<ListingLine> listing(String source) {
+        String[] lines = source.replace("\r\n", "\n").split("\n", -1);
+        int n = lines.length;
+        if (n > 0 && lines[n - 1].isEmpty()) n--;
+        List<ListingLine> out = new ArrayList<>(n);
+        for (int i = 0; i < n; i++) {
+            String line = lines[i];
+            out.add(new ListingLine(Integer.toString(i + 1), line.substring(0, Math.min(line.length(), LISTING_WIDTH))));
+            for (int from = LISTING_WIDTH; from < line.length(); from += LISTING_WIDTH) {
+                out.add(new ListingLine("", line.substring(from, Math.min(line.length(), from + LISTING_WIDTH))));
+            }
+        }
+        return out;
     }
 
     public static String fileName(String path) {

@@ -1,6 +1,8 @@
 package org.feedernote.synthetic;
 
-import java.io.ByteArrayOutputStream;
+import java.io.OutputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.Locale;
 
 import com.lowagie.text.Document;
@@ -33,48 +35,77 @@ public final class Benchmark {
     private Benchmark() {}
 
     public static void main(String[] args) throws Exception {
-        int noteCircuits = args.length > 0 ? Integer.parseInt(args[0]) : 1000;
+        String what = args.length > 0 ? args[0] : "engine";
+        int noteCircuits = args.length > 1 ? Integer.parseInt(args[1]) : 1000;
         ReferenceData data = ReferenceData.standard();
-        for (int n : new int[] {1000, 10000}) {
-            Installation inst = InputReader.parse("synthetic.json", SyntheticInstallation.toJson(SyntheticInstallation.generate(n, 1)), true);
-            new Engine(data).run(inst, false);
-            long t0 = System.nanoTime();
-            new Engine(data).run(inst, false);
-            double figures = (System.nanoTime() - t0) / 1e9;
-            t0 = System.nanoTime();
-            new Engine(data).run(inst, true);
-            double traced = (System.nanoTime() - t0) / 1e9;
-            System.out.printf(Locale.ROOT, "engine %6d circuits: %.2f s figures only (%.0f circuits/s), %.2f s traced (%.0f traced circuits/s, one thread)%n",
-                    n, figures, n / figures, traced, n / traced);
+        if (what.equals("engine")) {
+            for (int n : new int[] {1000, 10000}) engine(data, n);
+        } else if (what.equals("note")) {
+            note(data, noteCircuits);
+        } else {
+            throw new IllegalArgumentException("engine or note N");
         }
+    }
+
+    private static void engine(ReferenceData data, int n) throws Exception {
+        Installation inst = InputReader.parse("synthetic.json", SyntheticInstallation.toJson(SyntheticInstallation.generate(n, 1)), true);
+        new Engine(data).run(inst, false);
+        new Engine(data).run(inst, true);
+        long t0 = System.nanoTime();
+        new Engine(data).run(inst, false);
+        double figures = (System.nanoTime() - t0) / 1e9;
+        t0 = System.nanoTime();
+        new Engine(data).run(inst, true);
+        double traced = (System.nanoTime() - t0) / 1e9;
+        System.out.printf(Locale.ROOT, "engine %6d circuits, warm, one thread: %.2f s figures only with auto-sizing (%.0f circuits/s); "
+                        + "%.2f s with the recorded trace (%.0f traced circuits/s)%n", n, figures, n / figures, traced, n / traced);
+    }
+
+    /** The note's layout against bare OpenPDF writing the same text, both to a file, in the same process. */
+    private static void note(ReferenceData data, int n) throws Exception {
         Installation inst = InputReader.parse("synthetic.json",
-                SyntheticInstallation.toJson(SyntheticInstallation.generate(noteCircuits, 1)), true);
+                SyntheticInstallation.toJson(SyntheticInstallation.generate(n, 1)), true);
         Result result = new Engine(data).run(inst, true);
         String fingerprint = Canonical.fingerprint(inst.canonicalJson(), Version.engine(), data.version());
-        NoteView view = NoteBuilder.build(result, data, fingerprint, Version.engine());
         NoteRenderer renderer = new NoteRenderer(null);
-        long t0 = System.nanoTime();
-        byte[] pdf = renderer.pdf(view, inst.project().date());
-        double noteSeconds = (System.nanoTime() - t0) / 1e9;
-        String text;
-        int pages;
-        try (PDDocument doc = Loader.loadPDF(pdf)) {
-            pages = doc.getNumberOfPages();
-            text = new PDFTextStripper().getText(doc);
+        Path dir = Files.createTempDirectory("feedernote-bench");
+        try {
+            Path pdf = dir.resolve("note.pdf");
+            // once to load classes and compile the hot paths, as in a long-running process; then measured
+            renderer.write(NoteBuilder.build(result, data, fingerprint, Version.engine()), inst.project().date(), pdf, NoteRenderer.Progress.NONE);
+            long t0 = System.nanoTime();
+            NoteView view = NoteBuilder.build(result, data, fingerprint, Version.engine());
+            renderer.write(view, inst.project().date(), pdf, NoteRenderer.Progress.NONE);
+            double noteSeconds = (System.nanoTime() - t0) / 1e9;
+            String text;
+            int pages;
+            try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
+                pages = doc.getNumberOfPages();
+                text = new PDFTextStripper().getText(doc);
+            }
+            Path bare = dir.resolve("bare.pdf");
+            bare(text, bare);
+            t0 = System.nanoTime();
+            bare(text, bare);
+            double baseSeconds = (System.nanoTime() - t0) / 1e9;
+            System.out.printf(Locale.ROOT, "note   %6d circuits: %d pages in %.1f s (%.0f pages/s, trace to view to XHTML to PDF); "
+                            + "bare OpenPDF writing the same text: %.1f s; ratio %.2f%n",
+                    n, pages, noteSeconds, pages / noteSeconds, baseSeconds, noteSeconds / baseSeconds);
+        } finally {
+            try (var files = Files.walk(dir)) {
+                for (Path p : files.sorted(java.util.Comparator.reverseOrder()).toList()) Files.deleteIfExists(p);
+            }
         }
-        t0 = System.nanoTime();
-        byte[] baseline = bare(text);
-        double baseSeconds = (System.nanoTime() - t0) / 1e9;
-        System.out.printf(Locale.ROOT, "note   %6d circuits: %d pages in %.1f s (%.1f pages/s); bare OpenPDF, same text: %.1f s (%d bytes); ratio %.1f%n",
-                noteCircuits, pages, noteSeconds, pages / noteSeconds, baseSeconds, baseline.length, noteSeconds / baseSeconds);
-        Runtime rt = Runtime.getRuntime();
-        System.out.printf(Locale.ROOT, "heap in use after the note: %d MB (max %d MB)%n",
-                (rt.totalMemory() - rt.freeMemory()) >> 20, rt.maxMemory() >> 20);
     }
 
     /** The rendering floor: the same text in paragraphs, same font, no layout engine. */
-    static byte[] bare(String text) throws Exception {
-        ByteArrayOutputStream out = new ByteArrayOutputStream();
+    static void bare(String text, Path file) throws Exception {
+        try (OutputStream out = new java.io.BufferedOutputStream(Files.newOutputStream(file), 1 << 16)) {
+            bare(text, out);
+        }
+    }
+
+    static void bare(String text, OutputStream out) throws Exception {
         Document doc = new Document(PageSize.A4, 57, 57, 68, 57);
         PdfWriter.getInstance(doc, out);
         doc.open();
@@ -82,7 +113,6 @@ public final class Benchmark {
         Font font = new Font(bf, 9.5f);
         for (String line : text.split("\n")) doc.add(new Paragraph(line, font));
         doc.close();
-        return out.toByteArray();
     }
 
 }

@@ -37,6 +37,33 @@ public final class Fonts {
         return s.italic ? italic : regular;
     }
 
+    /** Advance widths per character, looked up once (OpenPDF's own lookup boxes every character). */
+    private final Map<BaseFont, float[]> widths = new HashMap<>();
+
+    /** The advance width of a text in points, without kerning (as OpenPDF lays it out). */
+    float width(BaseFont face, String text, float size) {
+        float[] w = widths.computeIfAbsent(face, f -> {
+            float[] a = new float[65536];
+            java.util.Arrays.fill(a, -1);
+            return a;
+        });
+        float units = 0;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            float cw = w[c];
+            if (cw < 0) {
+                cw = face.getWidth(c);
+                w[c] = cw;
+            }
+            units += cw;
+        }
+        return units * size / 1000f;
+    }
+
+    float width(Style s, String text) {
+        return width(face(s), text, s.fontSize);
+    }
+
     public BaseFont regular() {
         return regular;
     }
@@ -48,9 +75,9 @@ public final class Fonts {
     Font font(Style s) {
         BaseFont face = face(s);
         return fonts.computeIfAbsent(new Key(face, s.fontSize, s.color, s.underline), k -> {
-            Font f = new Font(k.face(), k.size(), k.underline() ? Font.UNDERLINE : Font.NORMAL);
-            f.setColor(k.color());
-            return f;
+            // Black is the page's default fill: a font without a colour writes no colour operators per chunk.
+            return new Font(k.face(), k.size(), k.underline() ? Font.UNDERLINE : Font.NORMAL,
+                    Color.BLACK.equals(k.color()) ? null : k.color());
         });
     }
 }

@@ -68,8 +68,26 @@ public final class Typesetter {
         return styles.resolve(styles.root(), List.of(), "body", "", "");
     }
 
+    /** A part turned into blocks with their estimated heights, ready to be placed on the pages. */
+    public static final class Prepared {
+        private final List<Item> items;
+
+        private Prepared(List<Item> items) {
+            this.items = items;
+        }
+    }
+
     /** Lays out one part (a body element) at the current position. */
     public void typeset(Markup.Element root) {
+        place(prepare(root));
+    }
+
+    /**
+     * Turns a part into blocks. Touches neither the document nor the writer, so it may run on
+     * another thread than {@link #place} (one preparing thread at a time: the style and width
+     * caches are not shared between threads).
+     */
+    public Prepared prepare(Markup.Element root) {
         List<Item> items = new ArrayList<>();
         List<String[]> ancestors = new ArrayList<>();
         Markup.Element body = root.tag().equals("body") ? root : find(root, "body");
@@ -77,7 +95,12 @@ public final class Typesetter {
         Style s = styles.resolve(styles.root(), ancestors, "body", body.classes(), body.style());
         ancestors.add(new String[] {"body", body.classes()});
         children(body, s, ancestors, 0, bodyWidth, items);
-        flow(items);
+        return new Prepared(items);
+    }
+
+    /** Places prepared blocks on the pages, in order, from the current position. */
+    public void place(Prepared part) {
+        flow(part.items);
     }
 
     private static Markup.Element find(Markup.Element e, String tag) {
@@ -314,7 +337,7 @@ public final class Typesetter {
         float x = firstIndent;
         if (marker != null) {
             Chunk m = new Chunk(marker, fonts.font(s));
-            float w = fonts.face(s).getWidthPoint(marker, s.fontSize);
+            float w = fonts.width(s, marker);
             p.add(m);
             p.add(advance(s, Math.max(1, markerWidth - w)));
             x += markerWidth;
@@ -327,7 +350,7 @@ public final class Typesetter {
                 continue;
             }
             p.add(chunk(r));
-            x += fonts.face(r.style()).getWidthPoint(r.text(), r.style().fontSize);
+            x += fonts.width(r.style(), r.text());
         }
         if (!right.isEmpty()) {
             p.add(new Chunk(new VerticalPositionMark()));
@@ -340,7 +363,7 @@ public final class Typesetter {
     /** A fixed horizontal advance: one no-break space with the character spacing that makes up the width. */
     private Chunk advance(Style s, float width) {
         Font f = fonts.font(s);
-        float space = f.getBaseFont().getWidthPoint('\u00a0', s.fontSize);
+        float space = fonts.width(s, "\u00a0");
         Chunk c = new Chunk("\u00a0", f);
         c.setCharacterSpacing(Math.max(0, width - space));
         return c;
@@ -357,7 +380,11 @@ public final class Typesetter {
         for (Object n : nodes) {
             if (n instanceof String text) {
                 String t = s.pre ? text : collapse(text);
-                if (!t.isEmpty()) runs.add(new Run(t, s));
+                if (t.isEmpty()) continue;
+                Run last = runs.isEmpty() ? null : runs.get(runs.size() - 1);
+                // One chunk per stretch of text in one style: OpenPDF's cost is per chunk.
+                if (last != null && last.text() != null && last.style() == s) runs.set(runs.size() - 1, new Run(last.text() + t, s));
+                else runs.add(new Run(t, s));
                 continue;
             }
             Markup.Element e = (Markup.Element) n;
@@ -387,7 +414,7 @@ public final class Typesetter {
         int t = 0;
         for (Run r : runs) {
             if (r.text() == null) x = Math.max(x, tabs.get(t++));
-            else x += fonts.face(r.style()).getWidthPoint(r.text(), r.style().fontSize);
+            else x += fonts.width(r.style(), r.text());
         }
         return x;
     }
@@ -440,7 +467,7 @@ public final class Typesetter {
             if (r.text() == null) continue;
             BaseFont face = fonts.face(r.style());
             float size = r.style().fontSize;
-            float space = face.getWidthPoint(' ', size);
+            float space = fonts.width(face, " ", size);
             int from = 0;
             String text = r.text();
             while (from < text.length()) {
@@ -448,7 +475,7 @@ public final class Typesetter {
                 int sp = text.indexOf(' ', from);
                 int end = sp < 0 ? text.length() : sp;
                 if (nl >= 0 && nl < end) end = nl;
-                float w = face.getWidthPoint(text.substring(from, end), size);
+                float w = fonts.width(face, text.substring(from, end), size);
                 if (x + w > width && x > 0) {
                     lines++;
                     x = 0;
@@ -469,7 +496,7 @@ public final class Typesetter {
         }
         if (!right.isEmpty()) {
             float w = 0;
-            for (Run r : right) if (r.text() != null) w += fonts.face(r.style()).getWidthPoint(r.text(), r.style().fontSize);
+            for (Run r : right) if (r.text() != null) w += fonts.width(r.style(), r.text());
             if (x + w + 6 > width) lines++;
         }
         return lines;
@@ -659,9 +686,9 @@ public final class Typesetter {
                     BaseFont face = fonts.face(cs);
                     String text = text(td).strip();
                     float pad = cs.paddingLeft + cs.paddingRight + 2;
-                    natural[col] = Math.max(natural[col], face.getWidthPoint(text, cs.fontSize) + pad);
+                    natural[col] = Math.max(natural[col], fonts.width(face, text, cs.fontSize) + pad);
                     float longest = 0;
-                    for (String word : text.split(" ")) longest = Math.max(longest, face.getWidthPoint(word, cs.fontSize));
+                    for (String word : text.split(" ")) longest = Math.max(longest, fonts.width(face, word, cs.fontSize));
                     minimum[col] = Math.max(minimum[col], longest + pad);
                 }
                 col += span;

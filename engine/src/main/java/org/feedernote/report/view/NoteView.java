@@ -6,6 +6,6 @@ import java.util.List;
 public record NoteView(CoverView cover, List<BasisRow> basis, List<String> standards, List<String> cautions,
                        List<String> assumptions, List<SummaryRow> summary, List<SectionView> sections,
                        List<SourceView> documents, List<SourceView> tables, List<SourceView> otherBases,
-                       List<String> listing, String listingName, String fingerprint, String fingerprintShort,
+                       List<ListingLine> listing, String listingName, String fingerprint, String fingerprintShort,
                        boolean draft, String engineVersion, String dataVersion, String runningTitle,
                        String changesSince, List<String> changes) {}
