@@ -36,14 +36,17 @@ public final class Benchmark {
 
     public static void main(String[] args) throws Exception {
         String what = args.length > 0 ? args[0] : "engine";
-        int noteCircuits = args.length > 1 ? Integer.parseInt(args[1]) : 1000;
         ReferenceData data = ReferenceData.standard();
         if (what.equals("engine")) {
             for (int n : new int[] {1000, 10000}) engine(data, n);
         } else if (what.equals("note")) {
-            note(data, noteCircuits);
+            note(data, args.length > 1 ? Integer.parseInt(args[1]) : 1000);
+        } else if (what.equals("pages")) {
+            try (PDDocument doc = Loader.loadPDF(new java.io.File(args[1]))) {
+                System.out.println(doc.getNumberOfPages());
+            }
         } else {
-            throw new IllegalArgumentException("engine or note N");
+            throw new IllegalArgumentException("engine, note N or pages FILE");
         }
     }
 
