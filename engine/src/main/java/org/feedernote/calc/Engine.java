@@ -834,9 +834,15 @@ public final class Engine {
         }
     }
 
+    /**
+     * A value with three decimals and no trailing zeros ("1.25", "16", "-0"): the same text as
+     * String.format("%.3f") with the zeros stripped, without the formatter (this runs for every
+     * candidate the sizing tries).
+     */
     static String trim(double v) {
-        String s = String.format(Locale.ROOT, "%.3f", v);
-        s = s.replaceAll("0+$", "");
-        return s.endsWith(".") ? s.substring(0, s.length() - 1) : s;
+        if (!Double.isFinite(v)) return Double.toString(v);
+        java.math.BigDecimal d = new java.math.BigDecimal(Double.toString(v)).setScale(3, java.math.RoundingMode.HALF_UP);
+        if (d.signum() == 0) return v < 0 || (v == 0 && 1 / v < 0) ? "-0" : "0";
+        return d.stripTrailingZeros().toPlainString();
     }
 }

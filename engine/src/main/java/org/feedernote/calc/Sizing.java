@@ -335,7 +335,9 @@ final class Sizing {
         note(best.id(), "Enlarged for the cumulative voltage drop", "the drop limit fails at " + failingList + "; best candidates: " + others,
                 String.format(Locale.ROOT, "%s → %s, the most drop per added conductor volume (%.3f %% per %.3f dm³)",
                         mm2(best.from()), mm2(best.to()), best.gain(), best.cost()));
-        apply(best.id(), best.to(), failing);
+        Map<String, CircuitResult> failingById = new HashMap<>();
+        for (CircuitResult r : failing) failingById.put(r.id(), r);
+        apply(best.id(), best.to(), failingById);
         // Circuits of their own (no circuit below them) whose step buys at least as much as the best
         // feeder step would be chosen next anyway, one after another: a final circuit's gain does
         // not change when another final circuit grows, and a feeder's only falls. Take them now.
@@ -345,14 +347,15 @@ final class Sizing {
                 if (run.original(c.id()).isFeeder() || c.ratio() < bestFeeder || c.gain() <= 0) continue;
                 note(c.id(), "Enlarged for the cumulative voltage drop", "its own drop limit fails; no feeder step buys more drop per volume",
                         String.format(Locale.ROOT, "%s → %s (%.3f %% per %.3f dm³)", mm2(c.from()), mm2(c.to()), c.gain(), c.cost()));
-                apply(c.id(), c.to(), failing);
+                apply(c.id(), c.to(), failingById);
             }
         }
         return true;
     }
 
-    private void apply(String id, double size, List<CircuitResult> failing) {
-        boolean ownDropFails = failing.stream().anyMatch(f -> f.id().equals(id) && cumulative(id) > f.limitPercent().value() + 1e-9);
+    private void apply(String id, double size, Map<String, CircuitResult> failing) {
+        CircuitResult f = failing.get(id);
+        boolean ownDropFails = f != null && cumulative(id) > f.limitPercent().value() + 1e-9;
         Circuit k = current.get(id);
         current.put(id, withCpc(run.original(id), size));
         ownPct.put(id, ownDropAt(k, size));

@@ -171,9 +171,15 @@ public final class CapacityData {
                 kind.token(), "I_2 / I_n", "exact", List.of());
     }
 
+    private final java.util.Map<DeviceKind, List<Double>> ratings = new java.util.EnumMap<>(DeviceKind.class);
+
     public List<Double> ratings(DeviceKind kind) {
-        String text = data.table("devices.csv").text(kind.token(), "ratings");
-        return Arrays.stream(text.trim().split("\\s+")).map(Double::parseDouble).toList();
+        synchronized (ratings) {
+            return ratings.computeIfAbsent(kind, k -> {
+                String text = data.table("devices.csv").text(k.token(), "ratings");
+                return Arrays.stream(text.trim().split("\\s+")).map(Double::parseDouble).toList();
+            });
+        }
     }
 
     /** The smallest standard rating at least the current, as a lookup step; a gap above the largest. */

@@ -70,6 +70,12 @@ public final class Formula {
         });
     }
 
+    /** The index of a variable of the tree in {@link #vars} (the tree holds the same objects). */
+    private int slot(Var v) {
+        for (int i = 0; i < vars.size(); i++) if (vars.get(i) == v) return i;
+        throw new IllegalStateException(id + ": " + v.symbol() + " is not a variable of the formula");
+    }
+
     /** The same formula with its result shown by another symbol (S_L1 rather than S). */
     public Formula as(String resultSymbol) {
         return new Formula(this, resultSymbol);
@@ -113,12 +119,13 @@ public final class Formula {
                         + "' but " + b.q().id() + " is in '" + b.q().unit() + "'");
             }
         }
-        for (Var v : vars) {
-            if (find(bindings, v) == null) {
-                throw new IllegalStateException(stepId + ": formula " + id + " needs " + v.symbol() + " bound");
-            }
+        double[] values = new double[vars.size()];
+        for (int i = 0; i < values.length; i++) {
+            Step.Binding b = find(bindings, vars.get(i));
+            if (b == null) throw new IllegalStateException(stepId + ": formula " + id + " needs " + vars.get(i).symbol() + " bound");
+            values[i] = b.q().value();
         }
-        double value = Evaluator.evaluate(expr, (Var v) -> find(bindings, v).q().value(), stepId);
+        double value = Evaluator.evaluate(expr, (Var v) -> values[slot(v)], stepId);
         if (trace.recording()) {
             List<Step.Binding> used = new ArrayList<>();
             for (Step.Binding b : bindings) if (vars.contains(b.var())) used.add(b);

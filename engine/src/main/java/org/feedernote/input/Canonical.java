@@ -33,6 +33,18 @@ public final class Canonical {
         }
     }
 
+    /** The canonical JSON of a tree, made once when first asked for. */
+    public static java.util.function.Supplier<String> lazy(Node root) {
+        return new java.util.function.Supplier<>() {
+            private String json;
+
+            @Override public synchronized String get() {
+                if (json == null) json = json(root);
+                return json;
+            }
+        };
+    }
+
     /** The canonical form as a Jackson tree, for comparisons. */
     public static JsonNode tree(Node node) {
         JsonNodeFactory f = JsonNodeFactory.instance;

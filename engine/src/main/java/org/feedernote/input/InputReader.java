@@ -159,7 +159,7 @@ public final class InputReader {
         topology(boards, circuits, circuitNodes);
         voltages(at(root, "supply"), supply);
         return errors.isEmpty()
-                ? new Installation(file, project, basis, supply, List.copyOf(boards), List.copyOf(circuits), Canonical.json(root), text)
+                ? new Installation(file, project, basis, supply, List.copyOf(boards), List.copyOf(circuits), Canonical.lazy(root), text)
                 : null;
     }
 
