@@ -52,9 +52,10 @@ final class Sizing {
 
     Map<String, Circuit> run() {
         for (Circuit c : run.order()) {
+            chosenResult = null;
             Circuit chosen = auto(c) ? smallestPassingOwnChecks(c, results) : withCpc(c, c.cable().size().mm2());
             current.put(c.id(), chosen);
-            results.put(c.id(), run.evaluate(chosen, Trace.noop(), results));
+            results.put(c.id(), chosenResult != null ? chosenResult : run.evaluate(chosen, Trace.noop(), results));
         }
         for (Circuit c : run.order()) {
             List<Circuit> path = run.pathTo(c.from());
@@ -194,6 +195,7 @@ final class Sizing {
             if (firstCoordinated == null && r.check("capacity").pass() && r.check("overload").pass()) firstCoordinated = candidate;
             String reason = ownFailure(r);
             if (reason == null) {
+                chosenResult = r;
                 firstChoice.put(c.id(), size);
                 if (lastReason != null) decidedBy.put(c.id(), lastReasonCheck);
                 note(c.id(), "Size chosen", "the smallest standard size that passes the capacity, overload, disconnection and withstand checks",
@@ -226,6 +228,8 @@ final class Sizing {
     }
 
     private String lastReasonCheck = "capacity";
+    /** The evaluation of the size the first pass chose, so it is not evaluated twice. */
+    private CircuitResult chosenResult;
 
     /** Why a candidate fails its own checks, in words, or null when it passes them. */
     private String ownFailure(CircuitResult r) {

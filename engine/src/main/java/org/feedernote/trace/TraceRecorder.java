@@ -1,7 +1,7 @@
 package org.feedernote.trace;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
@@ -15,7 +15,7 @@ public final class TraceRecorder implements Trace {
     private final Map<String, Step> index;
 
     public TraceRecorder() {
-        this("", "", "", new LinkedHashMap<>());
+        this("", "", "", new HashMap<>(1 << 12));
     }
 
     private TraceRecorder(String id, String title, String subtitle, Map<String, Step> index) {
@@ -44,9 +44,5 @@ public final class TraceRecorder implements Trace {
     public Section toSection() {
         return new Section(id, title, subtitle, List.copyOf(steps),
                 children.stream().map(TraceRecorder::toSection).toList());
-    }
-
-    public Map<String, Step> index() {
-        return java.util.Collections.unmodifiableMap(index);
     }
 }
