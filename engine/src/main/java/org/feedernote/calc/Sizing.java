@@ -51,12 +51,7 @@ final class Sizing {
     }
 
     Map<String, Circuit> run() {
-        for (Circuit c : run.order()) {
-            chosenResult = null;
-            Circuit chosen = auto(c) ? smallestPassingOwnChecks(c, results) : withCpc(c, c.cable().size().mm2());
-            current.put(c.id(), chosen);
-            results.put(c.id(), chosenResult != null ? chosenResult : run.evaluate(chosen, Trace.noop(), results));
-        }
+        firstPass();
         for (Circuit c : run.order()) {
             List<Circuit> path = run.pathTo(c.from());
             paths.put(c.id(), path);
@@ -70,6 +65,32 @@ final class Sizing {
         trim();
         smallestProtectiveConductors();
         return current;
+    }
+
+    /**
+     * The smallest size passing each circuit's own checks, board by board from the origin. A
+     * final circuit depends only on the feeders above it, so the final circuits of a board are
+     * sized in parallel; feeders go one at a time. The outcome is merged in input order, so it is
+     * the same as one circuit after another.
+     */
+    private void firstPass() {
+        for (String board : run.boardOrder) {
+            List<Circuit> outgoing = run.outgoing.getOrDefault(board, List.of());
+            List<Circuit> finals = outgoing.stream().filter(c -> !c.isFeeder()).toList();
+            List<FirstChoice> finalChoices = (finals.size() > 8 ? finals.parallelStream() : finals.stream())
+                    .map(c -> firstChoice(c, results)).toList();
+            Map<String, FirstChoice> chosen = new HashMap<>();
+            for (int i = 0; i < finals.size(); i++) chosen.put(finals.get(i).id(), finalChoices.get(i));
+            for (Circuit c : outgoing) {
+                FirstChoice f = c.isFeeder() ? firstChoice(c, results) : chosen.get(c.id());
+                if (f.error() != null) throw f.error();
+                current.put(c.id(), f.chosen());
+                results.put(c.id(), f.result());
+                if (!f.notes().isEmpty()) notes.computeIfAbsent(c.id(), k -> new ArrayList<>()).addAll(f.notes());
+                if (f.size() != null) firstChoice.put(c.id(), f.size());
+                if (f.decidedBy() != null) decidedBy.put(c.id(), f.decidedBy());
+            }
+        }
     }
 
     /** Circuits whose protective conductor was chosen by calculation, with the size Table 54.2 would give. */
@@ -176,16 +197,41 @@ final class Sizing {
                 c.cable().formation(), size) && ReferenceData.standard().hasResistance(c.cable().conductor(), size);
     }
 
-    private Circuit smallestPassingOwnChecks(Circuit c, Map<String, CircuitResult> working) {
+    /**
+     * The first pass for one circuit: the size chosen, its evaluation, and the decisions to record.
+     * Made without touching the sizing's state, so the final circuits of a board can be sized side
+     * by side; error is the data gap the circuit ran into, reported in input order afterwards.
+     */
+    private record FirstChoice(Circuit chosen, CircuitResult result, List<String[]> notes, Double size, String decidedBy,
+                               RuntimeException error) {}
+
+    /** Why a candidate fails its own checks (in words) and the check's name. */
+    private record Failure(String reason, String check) {}
+
+    private FirstChoice firstChoice(Circuit c, Map<String, CircuitResult> working) {
+        try {
+            if (!auto(c)) {
+                Circuit chosen = withCpc(c, c.cable().size().mm2());
+                return new FirstChoice(chosen, run.evaluate(chosen, Trace.noop(), working), List.of(), null, null, null);
+            }
+            return smallestPassingOwnChecks(c, working);
+        } catch (RuntimeException e) {
+            return new FirstChoice(null, null, List.of(), null, null, e);
+        }
+    }
+
+    private FirstChoice smallestPassingOwnChecks(Circuit c, Map<String, CircuitResult> working) {
+        List<String[]> notes = new ArrayList<>();
         Circuit firstCoordinated = null;
         Circuit last = null;
         String lastReason = null;
+        String lastReasonCheck = "capacity";
         for (double size : sizes) {
             if (!covered(c, size)) continue;
             Circuit candidate = withCpc(c, size);
             String quick = run.capacityShortfall(candidate);
             if (quick != null && size < sizes.get(sizes.size() - 1)) {
-                note(c.id(), "Size rejected", quick, mm2(size) + " rejected");
+                notes.add(new String[] {"Size rejected", quick, mm2(size) + " rejected"});
                 lastReason = quick;
                 lastReasonCheck = "capacity";
                 last = candidate;
@@ -193,18 +239,16 @@ final class Sizing {
             }
             CircuitResult r = run.evaluate(candidate, Trace.noop(), working);
             if (firstCoordinated == null && r.check("capacity").pass() && r.check("overload").pass()) firstCoordinated = candidate;
-            String reason = ownFailure(r);
-            if (reason == null) {
-                chosenResult = r;
-                firstChoice.put(c.id(), size);
-                if (lastReason != null) decidedBy.put(c.id(), lastReasonCheck);
-                note(c.id(), "Size chosen", "the smallest standard size that passes the capacity, overload, disconnection and withstand checks",
-                        mm2(size));
-                return candidate;
+            Failure failure = ownFailure(r);
+            if (failure == null) {
+                notes.add(new String[] {"Size chosen", "the smallest standard size that passes the capacity, overload, disconnection and withstand checks",
+                        mm2(size)});
+                return new FirstChoice(candidate, r, notes, size, lastReason != null ? lastReasonCheck : null, null);
             }
-            note(c.id(), "Size rejected", reason, mm2(size) + " rejected");
+            notes.add(new String[] {"Size rejected", failure.reason(), mm2(size) + " rejected"});
             last = candidate;
-            lastReason = reason;
+            lastReason = failure.reason();
+            lastReasonCheck = failure.check();
         }
         if (last == null) {
             String why;
@@ -217,47 +261,45 @@ final class Sizing {
             throw new org.feedernote.data.DataGapException(c.where().text() + ": " + c.where().path() + " (" + c.id()
                     + "): size_mm2: auto cannot be chosen: " + why, true);
         }
+        Circuit chosen;
         if (firstCoordinated != null) {
-            note(c.id(), "No size passes", "no standard size up to " + mm2(last.cable().size().mm2()) + " passes every check (" + lastReason
-                    + " at the largest); a larger cable cannot mend this", "the smallest size passing capacity and overload, "
-                    + mm2(firstCoordinated.cable().size().mm2()) + ", is used and the circuit fails");
-            return firstCoordinated;
+            notes.add(new String[] {"No size passes", "no standard size up to " + mm2(last.cable().size().mm2()) + " passes every check ("
+                    + lastReason + " at the largest); a larger cable cannot mend this", "the smallest size passing capacity and overload, "
+                    + mm2(firstCoordinated.cable().size().mm2()) + ", is used and the circuit fails"});
+            chosen = firstCoordinated;
+        } else {
+            notes.add(new String[] {"No size passes", "no standard size up to " + mm2(last.cable().size().mm2()) + " passes",
+                    "the largest is used and the circuit fails"});
+            chosen = last;
         }
-        note(c.id(), "No size passes", "no standard size up to " + mm2(last.cable().size().mm2()) + " passes", "the largest is used and the circuit fails");
-        return last;
+        return new FirstChoice(chosen, run.evaluate(chosen, Trace.noop(), working), notes, null, null, null);
     }
 
-    private String lastReasonCheck = "capacity";
-    /** The evaluation of the size the first pass chose, so it is not evaluated twice. */
-    private CircuitResult chosenResult;
-
-    /** Why a candidate fails its own checks, in words, or null when it passes them. */
-    private String ownFailure(CircuitResult r) {
+    /** Why a candidate fails its own checks, or null when it passes them. */
+    private static Failure ownFailure(CircuitResult r) {
         CheckResult cap = r.check("capacity");
         if (cap != null && !cap.pass()) {
-            lastReasonCheck = "capacity";
-            return String.format(Locale.ROOT, "I_z %s A < I_n %s A", Engine.trim(r.capacity().value()), Engine.trim(r.rating().value()))
-                    + (r.rating().value() < r.designCurrent().value() ? " (and I_n < I_b)" : "");
+            return new Failure(String.format(Locale.ROOT, "I_z %s A < I_n %s A", Engine.trim(r.capacity().value()), Engine.trim(r.rating().value()))
+                    + (r.rating().value() < r.designCurrent().value() ? " (and I_n < I_b)" : ""), "capacity");
         }
         CheckResult ol = r.check("overload");
         if (ol != null && !ol.pass()) {
-            lastReasonCheck = "overload";
-            return String.format(Locale.ROOT, "I_2 %s A > 1.45 · I_z = %s A", Engine.trim(ol.value()), Engine.trim(ol.limit()));
+            return new Failure(String.format(Locale.ROOT, "I_2 %s A > 1.45 · I_z = %s A", Engine.trim(ol.value()), Engine.trim(ol.limit())),
+                    "overload");
         }
         CheckResult dc = r.check("disconnection");
         if (dc != null && !dc.pass() && dc.determined()) {
-            lastReasonCheck = "disconnection";
-            return String.format(Locale.ROOT, "Z_s %s Ω > Z_s,max %s Ω", Engine.trim(dc.value()), Engine.trim(dc.limit()));
+            return new Failure(String.format(Locale.ROOT, "Z_s %s Ω > Z_s,max %s Ω", Engine.trim(dc.value()), Engine.trim(dc.limit())),
+                    "disconnection");
         }
         CheckResult sc = r.check("short-circuit");
         if (sc != null && !sc.pass() && sc.determined()) {
-            lastReasonCheck = "short-circuit";
-            return String.format(Locale.ROOT, "S below the adiabatic minimum %s mm²", Engine.trim(sc.limit()));
+            return new Failure(String.format(Locale.ROOT, "S below the adiabatic minimum %s mm²", Engine.trim(sc.limit())), "short-circuit");
         }
         CheckResult pc = r.check("protective-conductor");
         if (pc != null && !pc.pass() && pc.determined() && r.circuit().cable().cpc().mm2() < r.circuit().cable().size().mm2()) {
-            lastReasonCheck = "protective-conductor";
-            return String.format(Locale.ROOT, "protective conductor below the adiabatic minimum %s mm²", Engine.trim(pc.limit()));
+            return new Failure(String.format(Locale.ROOT, "protective conductor below the adiabatic minimum %s mm²", Engine.trim(pc.limit())),
+                    "protective-conductor");
         }
         return null;
     }
