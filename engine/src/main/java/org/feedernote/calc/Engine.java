@@ -119,13 +119,37 @@ public final class Engine {
             boardDrop.put(boardOrder.get(0), zero);
             Sizing sizing = new Sizing(this);
             Map<String, Circuit> sized = sizing.run();
-            for (Circuit original : order()) {
-                Circuit c = sized.get(original.id());
+            // Top-down with the recording trace. The final circuits of a board depend only on the
+            // feeders above them and write only into their own sections: they are calculated side
+            // by side, and their results merged in input order.
+            for (String board : boardOrder) {
+                List<Circuit> out = outgoing.getOrDefault(board, List.of());
+                List<Circuit> finals = out.stream().filter(c -> !c.isFeeder()).toList();
+                List<Recorded> recorded = (finals.size() > 8 ? finals.parallelStream() : finals.stream())
+                        .map(original -> record(sizing, original, sized.get(original.id()))).toList();
+                Map<String, Recorded> byId = new HashMap<>();
+                for (int i = 0; i < finals.size(); i++) byId.put(finals.get(i).id(), recorded.get(i));
+                for (Circuit original : out) {
+                    Recorded r = original.isFeeder() ? record(sizing, original, sized.get(original.id())) : byId.get(original.id());
+                    if (r.error() != null) throw r.error();
+                    Circuit c = r.result().circuit();
+                    results.put(c.id(), r.result());
+                    if (c.isFeeder()) boardDrop.put(c.to(), relabel(r.result().cumulativePercent(), "ΔU(" + c.to() + ")"));
+                }
+            }
+        }
+
+        /** A circuit calculated with the recording trace, or the data gap it ran into. */
+        private record Recorded(CircuitResult result, RuntimeException error) {}
+
+        private Recorded record(Sizing sizing, Circuit original, Circuit c) {
+            try {
                 Trace ct = circuitTrace.get(c.id());
                 sizing.record(ct, original, c);
                 CircuitResult r = evaluate(c, ct, results);
-                results.put(c.id(), r.withGoverning(sizing.governing(c.id(), r)));
-                if (c.isFeeder()) boardDrop.put(c.to(), relabel(r.cumulativePercent(), "ΔU(" + c.to() + ")"));
+                return new Recorded(r.withGoverning(sizing.governing(c.id(), r)), null);
+            } catch (RuntimeException e) {
+                return new Recorded(null, e);
             }
         }
 

@@ -103,27 +103,42 @@ final class Sizing {
      * loop of every circuit below them. Not below 1.5 mm² in a multicore cable, 4 mm² separate.
      */
     private void smallestProtectiveConductors() {
-        for (Circuit c : run.order()) {
-            Circuit orig = run.original(c.id());
-            if (orig.isFeeder() || !orig.cable().cpc().auto()) continue;
-            Circuit chosen = current.get(c.id());
-            double table = chosen.cable().cpc().mm2();
-            double minimum = chosen.cable().type() == org.feedernote.model.CableType.MULTICORE ? 1.5 : 4;
-            Circuit best = chosen;
-            for (int i = sizes.indexOf(table) - 1; i >= 0; i--) {
-                double smaller = sizes.get(i);
-                if (smaller < minimum - 1e-9 || !ReferenceData.standard().hasResistance(chosen.cable().conductor(), smaller)) break;
-                Circuit candidate = best.withCable(best.cable().withCpc(smaller));
-                CircuitResult r = run.evaluate(candidate, Trace.noop(), results);
-                boolean ok = r.check("protective-conductor").pass() && r.check("disconnection").pass();
-                if (!ok) break;
-                best = candidate;
+        List<Circuit> finals = run.order().stream()
+                .filter(c -> !run.original(c.id()).isFeeder() && run.original(c.id()).cable().cpc().auto()).toList();
+        // Each final circuit's search depends only on the feeders above it (fixed by now): side by side.
+        record Smallest(Circuit best, RuntimeException error) {}
+        List<Smallest> found = finals.parallelStream().map(c -> {
+            try {
+                return new Smallest(smallestProtectiveConductor(current.get(c.id())), null);
+            } catch (RuntimeException e) {
+                return new Smallest(null, e);
             }
-            if (best != chosen) {
-                cpcByCalculation.put(c.id(), table);
-                current.put(c.id(), best);
+        }).toList();
+        for (int i = 0; i < finals.size(); i++) {
+            Smallest s = found.get(i);
+            if (s.error() != null) throw s.error();
+            Circuit chosen = current.get(finals.get(i).id());
+            if (s.best() != chosen) {
+                cpcByCalculation.put(chosen.id(), chosen.cable().cpc().mm2());
+                current.put(chosen.id(), s.best());
             }
         }
+    }
+
+    private Circuit smallestProtectiveConductor(Circuit chosen) {
+        double table = chosen.cable().cpc().mm2();
+        double minimum = chosen.cable().type() == org.feedernote.model.CableType.MULTICORE ? 1.5 : 4;
+        Circuit best = chosen;
+        for (int i = sizes.indexOf(table) - 1; i >= 0; i--) {
+            double smaller = sizes.get(i);
+            if (smaller < minimum - 1e-9 || !ReferenceData.standard().hasResistance(chosen.cable().conductor(), smaller)) break;
+            Circuit candidate = best.withCable(best.cable().withCpc(smaller));
+            CircuitResult r = run.evaluate(candidate, Trace.noop(), results);
+            boolean ok = r.check("protective-conductor").pass() && r.check("disconnection").pass();
+            if (!ok) break;
+            best = candidate;
+        }
+        return best;
     }
 
     /** Results of the sizes chosen by the first pass; motors are recalculated as their paths change. */

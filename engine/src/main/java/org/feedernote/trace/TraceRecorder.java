@@ -1,11 +1,14 @@
 package org.feedernote.trace;
 
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
-/** A trace that keeps every step, in sections, and refuses a step id used twice. */
+/**
+ * A trace that keeps every step, in sections, and refuses a step id used twice. Different
+ * sections may be written from different threads (one thread per section at a time); the index
+ * of ids they share is concurrent.
+ */
 public final class TraceRecorder implements Trace {
     private final String id;
     private final String title;
@@ -15,7 +18,7 @@ public final class TraceRecorder implements Trace {
     private final Map<String, Step> index;
 
     public TraceRecorder() {
-        this("", "", "", new HashMap<>(1 << 12));
+        this("", "", "", new java.util.concurrent.ConcurrentHashMap<>(1 << 12));
     }
 
     private TraceRecorder(String id, String title, String subtitle, Map<String, Step> index) {
