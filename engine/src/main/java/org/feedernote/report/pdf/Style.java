@@ -235,7 +235,11 @@ public final class Style {
             return root;
         }
 
-        /** @param ancestors tag and class of each ancestor, outermost first, ending with the parent */
+        /**
+         * @param parent    the style this resolver gave the parent element (it stands for the whole
+         *                  ancestry in the cache key, so it must be the parent's own style)
+         * @param ancestors tag and class of each ancestor, outermost first, ending with the parent
+         */
         Style resolve(Style parent, List<String[]> ancestors, String tag, String classes, String inline) {
             Key key = new Key(parent, tag, classes == null ? "" : classes, inline == null ? "" : inline);
             Style cached = cache.get(key);

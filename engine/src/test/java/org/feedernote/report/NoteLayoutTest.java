@@ -1,0 +1,75 @@
+package org.feedernote.report;
+
+import static org.junit.jupiter.api.Assertions.*;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.regex.Pattern;
+
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.text.PDFTextStripper;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+import org.feedernote.Fixtures;
+
+/** How the worked steps sit on the pages: a step and its heading are never torn from what follows. */
+class NoteLayoutTest {
+    /** A step or section heading: "4.6.11  Resistance of the run". */
+    private static final Pattern HEADING = Pattern.compile("^\\d+(\\.\\d+)+\\s+\\S.*");
+    static List<List<String>> pages;
+
+    @BeforeAll
+    static void render() throws Exception {
+        NoteFixture note = NoteFixture.of(Fixtures.inputs().resolve("sports-hall.yaml"));
+        pages = new ArrayList<>();
+        try (PDDocument doc = Loader.loadPDF(note.pdf())) {
+            PDFTextStripper stripper = new PDFTextStripper();
+            stripper.setSortByPosition(true);
+            for (int p = 1; p <= doc.getNumberOfPages(); p++) {
+                stripper.setStartPage(p);
+                stripper.setEndPage(p);
+                List<String> lines = new ArrayList<>();
+                for (String line : NoteFixture.normalise(stripper.getText(doc)).split("\n")) {
+                    if (!line.isBlank()) lines.add(line.strip());
+                }
+                pages.add(lines);
+            }
+        }
+    }
+
+    /** The lines of a page between the running header and the running footer. */
+    private static List<String> body(List<String> page) {
+        return page.subList(1, page.size() - 1);
+    }
+
+    @Test
+    void everyPageCarriesTheRunningHeaderAndTheFooterWithTheTrueCount() {
+        for (int p = 0; p < pages.size(); p++) {
+            List<String> page = pages.get(p);
+            assertTrue(page.get(0).endsWith("Calculation note"), "page " + (p + 1) + " header: " + page.get(0));
+            assertTrue(page.get(page.size() - 1).endsWith("Page " + (p + 1) + " of " + pages.size()),
+                    "page " + (p + 1) + " footer: " + page.get(page.size() - 1));
+        }
+    }
+
+    @Test
+    void noPageEndsWithAHeadingWhoseWorkingIsOnTheNextPage() {
+        for (int p = 0; p < pages.size() - 1; p++) {
+            List<String> body = body(pages.get(p));
+            String last = body.get(body.size() - 1);
+            assertFalse(HEADING.matcher(last).matches(), "page " + (p + 1) + " ends with a heading: " + last);
+        }
+    }
+
+    @Test
+    void aFormulaStepIsNotSplitAcrossPages() {
+        // A formula step shows three lines: symbols, substituted values, result ("= 31.0 A").
+        // A page must not begin with the substituted or result line of a step begun on the page before.
+        for (int p = 1; p < pages.size(); p++) {
+            List<String> body = body(pages.get(p));
+            assertFalse(body.get(0).startsWith("= "), "page " + (p + 1) + " begins inside a step: " + body.get(0));
+        }
+    }
+}
