@@ -53,12 +53,16 @@ final class Sizing {
     Map<String, Circuit> run() {
         firstPass();
         for (Circuit c : run.order()) {
-            List<Circuit> path = run.pathTo(c.from());
-            paths.put(c.id(), path);
-            for (Circuit f : path) descendants.computeIfAbsent(f.id(), k -> new ArrayList<>()).add(c.id());
-            ownPct.put(c.id(), governingOwn(results.get(c.id())));
+            Slot slot = new Slot(run.original(c.id()), current.get(c.id()), sizesFor(c));
+            slot.ownPct = governingOwn(results.get(c.id()));
+            slots.put(c.id(), slot);
         }
-        for (Circuit c : run.order()) track(c.id());
+        for (Circuit c : run.order()) {
+            Slot slot = slots.get(c.id());
+            slot.path = run.pathTo(c.from()).stream().map(f -> slots.get(f.id())).toArray(Slot[]::new);
+            for (Slot f : slot.path) f.below.add(slot);
+        }
+        for (Circuit c : run.order()) track(slots.get(c.id()));
         for (int step = 0; step < MAX_STEPS && !failingDrop.isEmpty(); step++) {
             if (!upsizeBest(new ArrayList<>(failingDrop))) break;
         }
@@ -143,24 +147,78 @@ final class Sizing {
 
     /** Results of the sizes chosen by the first pass; motors are recalculated as their paths change. */
     private final Map<String, CircuitResult> results = new LinkedHashMap<>();
-    /** For each feeder, the circuits below it, in calculation order. */
-    private final Map<String, List<String>> descendants = new HashMap<>();
-    /** Own voltage drop per circuit and size: it does not depend on anything upstream. */
-    private final Map<String, Map<Double, Double>> ownDrop = new HashMap<>();
-    /** The own drop of each circuit at its current size; the drop from the origin is the sum along the path. */
-    private final Map<String, Double> ownPct = new HashMap<>();
     /** Final circuits that fail their drop or starting limit. */
     private final java.util.Set<String> failingDrop = new java.util.LinkedHashSet<>();
-    private final Map<String, List<Circuit>> paths = new HashMap<>();
+    private final Map<String, Slot> slots = new HashMap<>();
+
+    /**
+     * The sizing's working record of one circuit while drops are balanced: the loop that runs once
+     * per enlargement walks these (paths as arrays, sizes cached) instead of maps keyed by id.
+     */
+    private static final class Slot {
+        final String id;
+        final Circuit original;
+        final boolean autoSized;
+        final boolean feeder;
+        /** Sizes the tables cover for this cable and method, ascending. */
+        final double[] covered;
+        /** The feeders from the origin to the board the circuit starts at. */
+        Slot[] path;
+        /** The circuits below a feeder, in calculation order. */
+        final List<Slot> below = new ArrayList<>();
+        /** Own voltage drop per size: it does not depend on anything upstream. */
+        final Map<Double, Double> ownDrop = new HashMap<>();
+        Circuit current;
+        /** The own drop at the current size; the drop from the origin is the sum along the path. */
+        double ownPct;
+        /** Failing loads a step on this circuit would help (counted within one step). */
+        int helps;
+        private Circuit nextFor;
+        private double next;
+
+        Slot(Circuit original, Circuit current, List<Double> covered) {
+            this.id = original.id();
+            this.original = original;
+            this.autoSized = original.cable().size().auto();
+            this.feeder = original.isFeeder();
+            this.covered = covered.stream().mapToDouble(Double::doubleValue).toArray();
+            this.current = current;
+        }
+
+        /** The next larger covered size than the current one, or NaN at the largest. */
+        double next() {
+            if (nextFor != current) {
+                double now = current.cable().size().mm2();
+                next = Double.NaN;
+                for (double size : covered) {
+                    if (size > now + 1e-9) {
+                        next = size;
+                        break;
+                    }
+                }
+                nextFor = current;
+            }
+            return next;
+        }
+
+        boolean canGrow() {
+            return autoSized && !Double.isNaN(next());
+        }
+    }
+
+    private void setCurrent(Slot slot, Circuit c) {
+        slot.current = c;
+        current.put(slot.id, c);
+    }
 
     private double governingOwn(CircuitResult r) {
         boolean exact = run.inst.basis().voltageDropMethod().value() == org.feedernote.model.DropMethod.EXACT;
         return exact && r.dropExactPercent() != null ? r.dropExactPercent().value() : r.dropPercent().value();
     }
 
-    private double cumulative(String id) {
-        double sum = ownPct.get(id);
-        for (Circuit f : paths.get(id)) sum += ownPct.get(f.id());
+    private static double cumulative(Slot slot) {
+        double sum = slot.ownPct;
+        for (Slot f : slot.path) sum += f.ownPct;
         return sum;
     }
 
@@ -170,31 +228,31 @@ final class Sizing {
     }
 
     /** Whether a final circuit fails its drop or starting limit with the current sizes. */
-    private void track(String id) {
-        CircuitResult r = results.get(id);
-        if (r.circuit().isFeeder()) return;
-        boolean fails = cumulative(id) > r.limitPercent().value() + 1e-9 || motorStartingFails(id);
-        if (fails) failingDrop.add(id);
-        else failingDrop.remove(id);
+    private void track(Slot slot) {
+        if (slot.feeder) return;
+        CircuitResult r = results.get(slot.id);
+        boolean fails = cumulative(slot) > r.limitPercent().value() + 1e-9 || motorStartingFails(slot.id);
+        if (fails) failingDrop.add(slot.id);
+        else failingDrop.remove(slot.id);
     }
 
     /** After a size change: the motors whose starting dip depends on it are recalculated, the drops re-summed. */
-    private void changed(String id) {
-        List<String> affected = new ArrayList<>();
-        affected.add(id);
-        affected.addAll(descendants.getOrDefault(id, List.of()));
-        for (String a : affected) {
-            Circuit c = current.get(a);
-            if (!c.isFeeder() && c.load().startingCurrentMultiple() != null) {
-                results.put(a, run.evaluate(c, Trace.noop(), results));
-            }
-            track(a);
-        }
+    private void changed(Slot slot) {
+        changedOne(slot);
+        for (Slot a : slot.below) changedOne(a);
     }
 
-    private double ownDropAt(Circuit k, double size) {
-        return ownDrop.computeIfAbsent(k.id(), key -> new HashMap<>()).computeIfAbsent(size, sz -> {
-            Circuit candidate = withCpc(run.original(k.id()), sz);
+    private void changedOne(Slot a) {
+        Circuit c = a.current;
+        if (!a.feeder && c.load().startingCurrentMultiple() != null) {
+            results.put(a.id, run.evaluate(c, Trace.noop(), results));
+        }
+        track(a);
+    }
+
+    private double ownDropAt(Slot k, double size) {
+        return k.ownDrop.computeIfAbsent(size, sz -> {
+            Circuit candidate = withCpc(k.original, sz);
             return governingOwn(run.evaluate(candidate, Trace.noop(), results));
         });
     }
@@ -334,12 +392,6 @@ final class Sizing {
         return sizes.get(sizes.size() - 1);
     }
 
-    private Double nextSize(Circuit c) {
-        double now = c.cable().size().mm2();
-        for (double s : sizesFor(c)) if (s > now + 1e-9) return s;
-        return null;
-    }
-
     private Double previousSize(Circuit c) {
         double now = c.cable().size().mm2();
         Double prev = null;
@@ -356,27 +408,30 @@ final class Sizing {
 
     private boolean upsizeBest(List<String> failingIds) {
         List<CircuitResult> failing = failingIds.stream().map(results::get).toList();
-        Map<String, Integer> helps = new LinkedHashMap<>();
+        // Circuits a step would help, in the order first met, with the failing loads each helps.
+        List<Slot> helped = new ArrayList<>();
         for (CircuitResult load : failing) {
-            for (Circuit k : paths.get(load.id())) {
-                if (auto(run.original(k.id())) && nextSize(current.get(k.id())) != null) helps.merge(k.id(), 1, Integer::sum);
+            Slot l = slots.get(load.id());
+            for (Slot k : l.path) {
+                if (k.canGrow() && k.helps++ == 0) helped.add(k);
             }
-            Circuit own = current.get(load.id());
-            if (auto(run.original(own.id())) && nextSize(own) != null) helps.merge(own.id(), 1, Integer::sum);
+            if (l.canGrow() && l.helps++ == 0) helped.add(l);
         }
-        record Candidate(String id, double from, double to, double gain, double cost) {
+        record Candidate(Slot slot, double from, double to, double gain, double cost) {
             double ratio() { return cost > 0 ? gain / cost : 0; }
+            String id() { return slot.id; }
         }
-        List<Candidate> candidates = new ArrayList<>();
-        for (var e : helps.entrySet()) {
-            Circuit k = current.get(e.getKey());
-            double now = k.cable().size().mm2();
-            double next = nextSize(k);
-            double gain = (ownPct.get(k.id()) - ownDropAt(k, next)) * e.getValue();
-            double cost = (next - now) * k.lengthM() * k.cable().parallel() * conductors(k) / 1000.0;
-            candidates.add(new Candidate(k.id(), now, next, gain, cost));
+        List<Candidate> candidates = new ArrayList<>(helped.size());
+        for (Slot k : helped) {
+            Circuit c = k.current;
+            double now = c.cable().size().mm2();
+            double next = k.next();
+            double gain = (k.ownPct - ownDropAt(k, next)) * k.helps;
+            double cost = (next - now) * c.lengthM() * c.cable().parallel() * conductors(c) / 1000.0;
+            candidates.add(new Candidate(k, now, next, gain, cost));
+            k.helps = 0;
         }
-        candidates.sort((a, b) -> Double.compare(b.ratio(), a.ratio()));
+        candidates.sort((x, y) -> Double.compare(y.ratio(), x.ratio()));
         if (candidates.isEmpty() || candidates.get(0).gain() <= 0) {
             for (CircuitResult load : failing) {
                 if (notes.getOrDefault(load.id(), List.of()).stream().anyMatch(n -> n[0].equals("Voltage drop cannot be met"))) continue;
@@ -391,67 +446,72 @@ final class Sizing {
             if (others.length() > 0) others.append("; ");
             others.append(String.format(Locale.ROOT, "%s %s → %s: %.3f %%·load per %.3f dm³", c.id(), mm2(c.from()), mm2(c.to()), c.gain(), c.cost()));
         }
-        String failingList = failing.stream().limit(5).map(CircuitResult::id).reduce((a, b) -> a + ", " + b).orElse("")
+        String failingList = failing.stream().limit(5).map(CircuitResult::id).reduce((x, y) -> x + ", " + y).orElse("")
                 + (failing.size() > 5 ? " and " + (failing.size() - 5) + " more" : "");
         note(best.id(), "Enlarged for the cumulative voltage drop", "the drop limit fails at " + failingList + "; best candidates: " + others,
                 String.format(Locale.ROOT, "%s → %s, the most drop per added conductor volume (%.3f %% per %.3f dm³)",
                         mm2(best.from()), mm2(best.to()), best.gain(), best.cost()));
         Map<String, CircuitResult> failingById = new HashMap<>();
         for (CircuitResult r : failing) failingById.put(r.id(), r);
-        apply(best.id(), best.to(), failingById);
+        apply(best.slot(), best.to(), failingById);
         // Circuits of their own (no circuit below them) whose step buys at least as much as the best
         // feeder step would be chosen next anyway, one after another: a final circuit's gain does
         // not change when another final circuit grows, and a feeder's only falls. Take them now.
-        double bestFeeder = candidates.stream().filter(c -> run.original(c.id()).isFeeder()).mapToDouble(Candidate::ratio).max().orElse(0);
-        if (!run.original(best.id()).isFeeder()) {
+        double bestFeeder = candidates.stream().filter(c -> c.slot().feeder).mapToDouble(Candidate::ratio).max().orElse(0);
+        if (!best.slot().feeder) {
             for (Candidate c : candidates.subList(1, candidates.size())) {
-                if (run.original(c.id()).isFeeder() || c.ratio() < bestFeeder || c.gain() <= 0) continue;
+                if (c.slot().feeder || c.ratio() < bestFeeder || c.gain() <= 0) continue;
                 note(c.id(), "Enlarged for the cumulative voltage drop", "its own drop limit fails; no feeder step buys more drop per volume",
                         String.format(Locale.ROOT, "%s → %s (%.3f %% per %.3f dm³)", mm2(c.from()), mm2(c.to()), c.gain(), c.cost()));
-                apply(c.id(), c.to(), failingById);
+                apply(c.slot(), c.to(), failingById);
             }
         }
         return true;
     }
 
-    private void apply(String id, double size, Map<String, CircuitResult> failing) {
-        CircuitResult f = failing.get(id);
-        boolean ownDropFails = f != null && cumulative(id) > f.limitPercent().value() + 1e-9;
-        Circuit k = current.get(id);
-        current.put(id, withCpc(run.original(id), size));
-        ownPct.put(id, ownDropAt(k, size));
-        changed(id);
-        upsized.add(id);
+    private void apply(Slot slot, double size, Map<String, CircuitResult> failing) {
+        CircuitResult f = failing.get(slot.id);
+        boolean ownDropFails = f != null && cumulative(slot) > f.limitPercent().value() + 1e-9;
+        Circuit k = slot.current;
+        setCurrent(slot, withCpc(slot.original, size));
+        slot.ownPct = ownDropAt(slot, size);
+        changed(slot);
+        upsized.add(slot.id);
         boolean starting = !k.isFeeder() && !ownDropFails && k.load().startingCurrentMultiple() != null;
-        decidedBy.put(id, starting ? "motor-starting" : "voltage-drop");
+        decidedBy.put(slot.id, starting ? "motor-starting" : "voltage-drop");
     }
 
     /** Undoes enlargements that turned out unnecessary once others were made (last first). */
     private void trim() {
-        List<String> done = new ArrayList<>();
+        java.util.Set<String> done = new java.util.HashSet<>();
         for (int i = upsized.size() - 1; i >= 0; i--) {
             String id = upsized.get(i);
-            if (done.contains(id)) continue;
-            done.add(id);
-            Circuit k = current.get(id);
+            if (!done.add(id)) continue;
+            Slot slot = slots.get(id);
+            Circuit k = slot.current;
             Double prev = previousSize(k);
             if (prev == null || prev < firstChoice.getOrDefault(id, 0.0) - 1e-9) continue;
-            List<String> affected = new ArrayList<>(List.of(id));
-            affected.addAll(descendants.getOrDefault(id, List.of()));
-            long failingBefore = affected.stream().filter(failingDrop::contains).count();
-            double savedPct = ownPct.get(id);
-            current.put(id, withCpc(run.original(id), prev));
-            ownPct.put(id, ownDropAt(k, prev));
-            changed(id);
-            long failingAfter = affected.stream().filter(failingDrop::contains).count();
+            long failingBefore = failingAmong(slot);
+            double savedPct = slot.ownPct;
+            setCurrent(slot, withCpc(slot.original, prev));
+            slot.ownPct = ownDropAt(slot, prev);
+            changed(slot);
+            long failingAfter = failingAmong(slot);
             if (failingAfter > failingBefore) {
-                current.put(id, k);
-                ownPct.put(id, savedPct);
-                changed(id);
+                setCurrent(slot, k);
+                slot.ownPct = savedPct;
+                changed(slot);
             } else {
                 note(id, "Enlargement undone", "later enlargements upstream made it unnecessary", mm2(k.cable().size().mm2()) + " → " + mm2(prev));
             }
         }
+    }
+
+    /** How many of a circuit and the circuits below it fail their drop or starting limit. */
+    private long failingAmong(Slot slot) {
+        long n = failingDrop.contains(slot.id) ? 1 : 0;
+        for (Slot a : slot.below) if (failingDrop.contains(a.id)) n++;
+        return n;
     }
 
     /** Writes the decisions about a circuit's sizes into its section, before its calculation. */
