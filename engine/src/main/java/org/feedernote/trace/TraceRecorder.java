@@ -5,9 +5,10 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * A trace that keeps every step, in sections, and refuses a step id used twice. Different
- * sections may be written from different threads (one thread per section at a time); the index
- * of ids they share is concurrent.
+ * A trace that keeps every step, in sections, and refuses a step id used twice within a top-level
+ * section (a circuit's, the supply's): ids there share the section's prefix, so that is where a
+ * clash could arise. Different top-level sections may be written from different threads, one
+ * thread per section. TraceSelfCheckTest checks that ids are unique across the whole trace.
  */
 public final class TraceRecorder implements Trace {
     private final String id;
@@ -18,14 +19,14 @@ public final class TraceRecorder implements Trace {
     private final Map<String, Step> index;
 
     public TraceRecorder() {
-        this("", "", "", new java.util.concurrent.ConcurrentHashMap<>(1 << 12));
+        this("", "", "", null);
     }
 
     private TraceRecorder(String id, String title, String subtitle, Map<String, Step> index) {
         this.id = id;
         this.title = title;
         this.subtitle = subtitle;
-        this.index = index;
+        this.index = index == null ? new java.util.HashMap<>() : index;
     }
 
     @Override public void add(Step step) {
@@ -38,7 +39,8 @@ public final class TraceRecorder implements Trace {
     @Override public boolean recording() { return true; }
 
     @Override public Trace section(String sectionId, String sectionTitle, String sectionSubtitle) {
-        TraceRecorder child = new TraceRecorder(sectionId, sectionTitle, sectionSubtitle, index);
+        // A top-level section keeps its own index; its sub-sections share it.
+        TraceRecorder child = new TraceRecorder(sectionId, sectionTitle, sectionSubtitle, id.isEmpty() ? null : index);
         children.add(child);
         return child;
     }

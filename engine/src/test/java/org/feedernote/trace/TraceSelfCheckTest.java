@@ -35,7 +35,17 @@ class TraceSelfCheckTest {
     @ParameterizedTest
     @MethodSource("examples")
     void everyFormulaStepRecomputesFromItsBindings(Path input) throws Exception {
-        Result result = new Engine(ReferenceData.standard()).run(InputReader.read(input));
+        selfCheck(new Engine(ReferenceData.standard()).run(InputReader.read(input)));
+    }
+
+    /** A generated installation: its circuits are calculated side by side, and the trace must not show it. */
+    @org.junit.jupiter.api.Test
+    void aGeneratedInstallationsTraceChecksItselfToo() throws Exception {
+        String json = org.feedernote.synthetic.SyntheticInstallation.toJson(org.feedernote.synthetic.SyntheticInstallation.generate(250, 9));
+        selfCheck(new Engine(ReferenceData.standard()).run(InputReader.parse("synthetic.json", json, true)));
+    }
+
+    private static void selfCheck(Result result) {
         List<Step> steps = TraceWalk.steps(result.trace());
         Set<String> ids = new HashSet<>();
         for (Step step : steps) assertTrue(ids.add(step.id()), () -> "step id used twice: " + step.id());
