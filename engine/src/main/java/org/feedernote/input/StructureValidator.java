@@ -16,7 +16,39 @@ final class StructureValidator {
         this.errors = errors;
     }
 
+    /**
+     * A key path built only when an error needs it: validating a large input touches hundreds of
+     * thousands of values, almost all of them valid.
+     */
+    private record Path(Path parent, String key, int index, String root) {
+        static Path of(String root) {
+            return new Path(null, null, -1, root);
+        }
+
+        Path key(String k) {
+            return new Path(this, k, -1, null);
+        }
+
+        Path index(int i) {
+            return new Path(this, null, i, null);
+        }
+
+        @Override public String toString() {
+            if (parent == null) return root;
+            String p = parent.toString();
+            if (key == null) return p + "[" + index + "]";
+            return p.isEmpty() ? key : p + "." + key;
+        }
+    }
+
+    private final java.util.Map<Spec.Obj, java.util.Map<String, Spec.Field>> fields = new java.util.IdentityHashMap<>();
+    private final java.util.Map<String, Pattern> patterns = new java.util.HashMap<>();
+
     void check(Node node, Spec spec, String path) {
+        check(node, spec, Path.of(path));
+    }
+
+    private void check(Node node, Spec spec, Path path) {
         if (spec instanceof Spec.Obj obj) checkObj(node, obj, path);
         else if (spec instanceof Spec.Map map) checkMap(node, map, path);
         else if (spec instanceof Spec.Arr arr) checkArr(node, arr, path);
@@ -24,32 +56,33 @@ final class StructureValidator {
         else if (spec instanceof Spec.Num num) checkNum(node, num, path);
     }
 
-    private void error(Node.Pos pos, String path, String message) {
-        errors.add(new InputError(file, pos.line(), pos.column(), path, message));
+    private void error(Node.Pos pos, Path path, String message) {
+        errors.add(new InputError(file, pos.line(), pos.column(), path.toString(), message));
     }
 
-    private static String child(String path, String key) {
-        return path.isEmpty() ? key : path + "." + key;
-    }
-
-    private void checkObj(Node node, Spec.Obj spec, String path) {
+    private void checkObj(Node node, Spec.Obj spec, Path path) {
         if (!(node instanceof Node.Obj obj)) {
             error(node.pos(), path, "expected a mapping (" + spec.description() + "), found " + describe(node));
             return;
         }
-        List<String> names = spec.fields().stream().map(Spec.Field::name).toList();
+        java.util.Map<String, Spec.Field> byName = fields.computeIfAbsent(spec, s -> {
+            java.util.Map<String, Spec.Field> m = new java.util.HashMap<>();
+            for (Spec.Field f : s.fields()) m.putIfAbsent(f.name(), f);
+            return m;
+        });
         for (Node.Entry e : obj.entries().values()) {
-            Spec.Field f = spec.field(e.key());
+            Spec.Field f = byName.get(e.key());
             if (f == null) {
-                error(e.keyPos(), child(path, e.key()), "unknown key '" + e.key() + "'" + Suggest.hint(e.key(), names)
+                List<String> names = spec.fields().stream().map(Spec.Field::name).toList();
+                error(e.keyPos(), path.key(e.key()), "unknown key '" + e.key() + "'" + Suggest.hint(e.key(), names)
                         + "; expected one of: " + String.join(", ", names));
             } else {
-                check(e.value(), f.spec(), child(path, e.key()));
+                check(e.value(), f.spec(), path.key(e.key()));
             }
         }
         for (Spec.Field f : spec.fields()) {
             if (f.required() && !obj.entries().containsKey(f.name())) {
-                error(obj.pos(), child(path, f.name()), "missing required key '" + f.name() + "' (" + f.spec().description() + ")");
+                error(obj.pos(), path.key(f.name()), "missing required key '" + f.name() + "' (" + f.spec().description() + ")");
             }
         }
         for (List<String> group : spec.exactlyOne()) {
@@ -62,22 +95,22 @@ final class StructureValidator {
         }
     }
 
-    private void checkMap(Node node, Spec.Map spec, String path) {
+    private void checkMap(Node node, Spec.Map spec, Path path) {
         if (!(node instanceof Node.Obj obj)) {
             error(node.pos(), path, "expected a mapping (" + spec.description() + "), found " + describe(node));
             return;
         }
         for (Node.Entry e : obj.entries().values()) {
             if (!spec.keys().contains(e.key())) {
-                error(e.keyPos(), child(path, e.key()), "unknown key '" + e.key() + "'" + Suggest.hint(e.key(), spec.keys())
+                error(e.keyPos(), path.key(e.key()), "unknown key '" + e.key() + "'" + Suggest.hint(e.key(), spec.keys())
                         + "; expected one of: " + String.join(", ", spec.keys()));
             } else {
-                check(e.value(), spec.value(), child(path, e.key()));
+                check(e.value(), spec.value(), path.key(e.key()));
             }
         }
     }
 
-    private void checkArr(Node node, Spec.Arr spec, String path) {
+    private void checkArr(Node node, Spec.Arr spec, Path path) {
         if (!(node instanceof Node.Arr arr)) {
             error(node.pos(), path, "expected a list (" + spec.description() + "), found " + describe(node));
             return;
@@ -85,10 +118,10 @@ final class StructureValidator {
         if (arr.items().size() < spec.minItems()) {
             error(arr.pos(), path, "expected at least " + spec.minItems() + " item(s), found " + arr.items().size());
         }
-        for (int i = 0; i < arr.items().size(); i++) check(arr.items().get(i), spec.item(), path + "[" + i + "]");
+        for (int i = 0; i < arr.items().size(); i++) check(arr.items().get(i), spec.item(), path.index(i));
     }
 
-    private void checkStr(Node node, Spec.Str spec, String path) {
+    private void checkStr(Node node, Spec.Str spec, Path path) {
         if (!(node instanceof Node.Scalar s) || s.value() == null || s.value() instanceof Boolean
                 || (s.isNumber() && !spec.numbersAsText())) {
             error(node.pos(), path, "expected " + expected(spec) + ", found " + describe(node));
@@ -99,12 +132,12 @@ final class StructureValidator {
             error(node.pos(), path, "expected " + expected(spec) + ", found '" + text + "'" + Suggest.hint(text, spec.allowed()));
             return;
         }
-        if (spec.pattern() != null && !Pattern.matches(spec.pattern(), text)) {
+        if (spec.pattern() != null && !patterns.computeIfAbsent(spec.pattern(), Pattern::compile).matcher(text).matches()) {
             error(node.pos(), path, "expected " + spec.patternHint() + ", found '" + text + "'");
         }
     }
 
-    private void checkNum(Node node, Spec.Num spec, String path) {
+    private void checkNum(Node node, Spec.Num spec, Path path) {
         if (node instanceof Node.Scalar s && "auto".equals(s.value()) && spec.auto()) return;
         if (!(node instanceof Node.Scalar s) || !s.isNumber()) {
             String found = describe(node);

@@ -60,7 +60,7 @@ public final class Benchmark {
         t0 = System.nanoTime();
         new Engine(data).run(inst, true);
         double traced = (System.nanoTime() - t0) / 1e9;
-        System.out.printf(Locale.ROOT, "engine %6d circuits, warm, one thread: %.2f s figures only with auto-sizing (%.0f circuits/s); "
+        System.out.printf(Locale.ROOT, "engine %6d circuits, in-process, warm: %.2f s figures only with auto-sizing (%.0f circuits/s); "
                         + "%.2f s with the recorded trace (%.0f traced circuits/s)%n", n, figures, n / figures, traced, n / traced);
     }
 
