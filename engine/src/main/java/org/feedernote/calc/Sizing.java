@@ -62,10 +62,13 @@ final class Sizing {
             slot.path = run.pathTo(c.from()).stream().map(f -> slots.get(f.id())).toArray(Slot[]::new);
             for (Slot f : slot.path) f.below.add(slot);
         }
+        for (Circuit c : run.order()) if (c.isFeeder()) feederSlots.add(slots.get(c.id()));
+        balancing = true;
         for (Circuit c : run.order()) track(slots.get(c.id()));
         for (int step = 0; step < MAX_STEPS && !failingDrop.isEmpty(); step++) {
-            if (!upsizeBest(new ArrayList<>(failingDrop))) break;
+            if (!upsizeBest()) break;
         }
+        balancing = false;
         trim();
         smallestProtectiveConductors();
         return current;
@@ -171,8 +174,18 @@ final class Sizing {
         Circuit current;
         /** The own drop at the current size; the drop from the origin is the sum along the path. */
         double ownPct;
-        /** Failing loads a step on this circuit would help (counted within one step). */
-        int helps;
+        /**
+         * While the circuit fails its limit: its place in the order failing loads were found in
+         * (a load that stops failing and fails again goes to the end), else -1.
+         */
+        long seq = -1;
+        /** For a feeder: the places of the failing loads below it; their number is the loads a step helps. */
+        final java.util.TreeSet<Long> failingBelow = new java.util.TreeSet<>();
+        /** For a failing final circuit that can grow: its next step, kept current while drops are balanced. */
+        double from;
+        double to;
+        double gain;
+        double cost;
         private Circuit nextFor;
         private double next;
 
@@ -204,6 +217,43 @@ final class Sizing {
         boolean canGrow() {
             return autoSized && !Double.isNaN(next());
         }
+
+        double ratio() {
+            return cost > 0 ? gain / cost : 0;
+        }
+    }
+
+    /** Feeders, in calculation order. */
+    private final List<Slot> feederSlots = new ArrayList<>();
+    /** True while drops are balanced: failing final circuits that can grow are kept in {@link #growable}. */
+    private boolean balancing;
+    private long nextSeq;
+    /** Failing final circuits that can grow, best step first: most drop per volume, then the order found. */
+    private final java.util.TreeSet<Slot> growable = new java.util.TreeSet<>((a, b) -> {
+        int c = Double.compare(b.ratio(), a.ratio());
+        return c != 0 ? c : Long.compare(a.seq, b.seq);
+    });
+
+    /** A final circuit's next step: the drop it buys and the conductor volume it adds. */
+    private void refreshStep(Slot k) {
+        Circuit c = k.current;
+        double now = c.cable().size().mm2();
+        double next = k.next();
+        k.from = now;
+        k.to = next;
+        k.gain = (k.ownPct - ownDropAt(k, next)) * 1;
+        k.cost = (next - now) * c.lengthM() * c.cable().parallel() * conductors(c) / 1000.0;
+    }
+
+    /** Gives a circuit another size and own drop, keeping the set of growable circuits in order. */
+    private void resize(Slot slot, Circuit c, double ownPct) {
+        boolean listed = balancing && growable.remove(slot);
+        setCurrent(slot, c);
+        slot.ownPct = ownPct;
+        if (listed && slot.canGrow()) {
+            refreshStep(slot);
+            growable.add(slot);
+        }
     }
 
     private void setCurrent(Slot slot, Circuit c) {
@@ -232,8 +282,20 @@ final class Sizing {
         if (slot.feeder) return;
         CircuitResult r = results.get(slot.id);
         boolean fails = cumulative(slot) > r.limitPercent().value() + 1e-9 || motorStartingFails(slot.id);
-        if (fails) failingDrop.add(slot.id);
-        else failingDrop.remove(slot.id);
+        if (fails && slot.seq < 0) {
+            failingDrop.add(slot.id);
+            slot.seq = nextSeq++;
+            for (Slot f : slot.path) f.failingBelow.add(slot.seq);
+            if (balancing && slot.canGrow()) {
+                refreshStep(slot);
+                growable.add(slot);
+            }
+        } else if (!fails && slot.seq >= 0) {
+            failingDrop.remove(slot.id);
+            growable.remove(slot);
+            for (Slot f : slot.path) f.failingBelow.remove(slot.seq);
+            slot.seq = -1;
+        }
     }
 
     /** After a size change: the motors whose starting dip depends on it are recalculated, the drops re-summed. */
@@ -406,75 +468,109 @@ final class Sizing {
         return 2;
     }
 
-    private boolean upsizeBest(List<String> failingIds) {
-        List<CircuitResult> failing = failingIds.stream().map(results::get).toList();
-        // Circuits a step would help, in the order first met, with the failing loads each helps.
-        List<Slot> helped = new ArrayList<>();
-        for (CircuitResult load : failing) {
-            Slot l = slots.get(load.id());
-            for (Slot k : l.path) {
-                if (k.canGrow() && k.helps++ == 0) helped.add(k);
-            }
-            if (l.canGrow() && l.helps++ == 0) helped.add(l);
+    /** A possible step: a circuit, its next size, the drop it buys (times the failing loads it helps) and the volume it adds. */
+    private record Candidate(Slot slot, double from, double to, double gain, double cost, long seq, int depth) {
+        double ratio() { return cost > 0 ? gain / cost : 0; }
+        String id() { return slot.id; }
+
+        static Candidate of(Slot finalCircuit) {
+            Slot k = finalCircuit;
+            return new Candidate(k, k.from, k.to, k.gain, k.cost, k.seq, k.path.length);
         }
-        record Candidate(Slot slot, double from, double to, double gain, double cost) {
-            double ratio() { return cost > 0 ? gain / cost : 0; }
-            String id() { return slot.id; }
-        }
-        List<Candidate> candidates = new ArrayList<>(helped.size());
-        for (Slot k : helped) {
-            Circuit c = k.current;
+    }
+
+    /**
+     * The order of candidates: most drop per added volume first; equal ratios in the order the
+     * circuits were met going through the failing loads in the order found, each load's feeders
+     * from the origin down and then the load itself.
+     */
+    private static final java.util.Comparator<Candidate> BEST_FIRST = (x, y) -> {
+        int c = Double.compare(y.ratio(), x.ratio());
+        if (c != 0) return c;
+        c = Long.compare(x.seq(), y.seq());
+        return c != 0 ? c : Integer.compare(x.depth(), y.depth());
+    };
+
+    /**
+     * One step of the balancing: the candidate with the most drop per added volume is enlarged,
+     * and with it every final circuit whose step beats every feeder step. Feeders are weighed
+     * afresh (their helped loads change); final circuits are kept in order in {@link #growable},
+     * so a step costs what it changes, not the number of failing loads.
+     */
+    private boolean upsizeBest() {
+        List<Candidate> feeders = new ArrayList<>();
+        for (Slot f : feederSlots) {
+            if (f.failingBelow.isEmpty() || !f.canGrow()) continue;
+            Circuit c = f.current;
             double now = c.cable().size().mm2();
-            double next = k.next();
-            double gain = (k.ownPct - ownDropAt(k, next)) * k.helps;
+            double next = f.next();
+            double gain = (f.ownPct - ownDropAt(f, next)) * f.failingBelow.size();
             double cost = (next - now) * c.lengthM() * c.cable().parallel() * conductors(c) / 1000.0;
-            candidates.add(new Candidate(k, now, next, gain, cost));
-            k.helps = 0;
+            feeders.add(new Candidate(f, now, next, gain, cost, f.failingBelow.first(), f.path.length));
         }
-        candidates.sort((x, y) -> Double.compare(y.ratio(), x.ratio()));
-        if (candidates.isEmpty() || candidates.get(0).gain() <= 0) {
-            for (CircuitResult load : failing) {
-                if (notes.getOrDefault(load.id(), List.of()).stream().anyMatch(n -> n[0].equals("Voltage drop cannot be met"))) continue;
-                note(load.id(), "Voltage drop cannot be met", "no auto-sized circuit on the path of " + load.id() + " can be enlarged further",
+        feeders.sort(BEST_FIRST);
+        List<Candidate> top = new ArrayList<>(3);
+        java.util.Iterator<Slot> finals = growable.iterator();
+        Candidate nextFinal = finals.hasNext() ? Candidate.of(finals.next()) : null;
+        int fi = 0;
+        while (top.size() < 3 && (fi < feeders.size() || nextFinal != null)) {
+            Candidate feeder = fi < feeders.size() ? feeders.get(fi) : null;
+            if (nextFinal == null || (feeder != null && BEST_FIRST.compare(feeder, nextFinal) < 0)) {
+                top.add(feeder);
+                fi++;
+            } else {
+                top.add(nextFinal);
+                nextFinal = finals.hasNext() ? Candidate.of(finals.next()) : null;
+            }
+        }
+        if (top.isEmpty() || top.get(0).gain() <= 0) {
+            for (String load : failingDrop) {
+                if (notes.getOrDefault(load, List.of()).stream().anyMatch(n -> n[0].equals("Voltage drop cannot be met"))) continue;
+                note(load, "Voltage drop cannot be met", "no auto-sized circuit on the path of " + load + " can be enlarged further",
                         "the circuit fails its drop limit");
             }
             return false;
         }
-        Candidate best = candidates.get(0);
+        Candidate best = top.get(0);
         StringBuilder others = new StringBuilder();
-        for (Candidate c : candidates.subList(0, Math.min(3, candidates.size()))) {
+        for (Candidate c : top) {
             if (others.length() > 0) others.append("; ");
             others.append(String.format(Locale.ROOT, "%s %s → %s: %.3f %%·load per %.3f dm³", c.id(), mm2(c.from()), mm2(c.to()), c.gain(), c.cost()));
         }
-        String failingList = failing.stream().limit(5).map(CircuitResult::id).reduce((x, y) -> x + ", " + y).orElse("")
-                + (failing.size() > 5 ? " and " + (failing.size() - 5) + " more" : "");
+        int failing = failingDrop.size();
+        String failingList = failingDrop.stream().limit(5).reduce((x, y) -> x + ", " + y).orElse("")
+                + (failing > 5 ? " and " + (failing - 5) + " more" : "");
         note(best.id(), "Enlarged for the cumulative voltage drop", "the drop limit fails at " + failingList + "; best candidates: " + others,
                 String.format(Locale.ROOT, "%s → %s, the most drop per added conductor volume (%.3f %% per %.3f dm³)",
                         mm2(best.from()), mm2(best.to()), best.gain(), best.cost()));
-        Map<String, CircuitResult> failingById = new HashMap<>();
-        for (CircuitResult r : failing) failingById.put(r.id(), r);
-        apply(best.slot(), best.to(), failingById);
         // Circuits of their own (no circuit below them) whose step buys at least as much as the best
         // feeder step would be chosen next anyway, one after another: a final circuit's gain does
-        // not change when another final circuit grows, and a feeder's only falls. Take them now.
-        double bestFeeder = candidates.stream().filter(c -> c.slot().feeder).mapToDouble(Candidate::ratio).max().orElse(0);
+        // not change when another final circuit grows, and a feeder's only falls. Take them now
+        // (chosen before any is enlarged, as the order stood at the start of the step).
+        double bestFeeder = feeders.stream().mapToDouble(Candidate::ratio).max().orElse(0);
+        List<Candidate> batch = new ArrayList<>();
         if (!best.slot().feeder) {
-            for (Candidate c : candidates.subList(1, candidates.size())) {
-                if (c.slot().feeder || c.ratio() < bestFeeder || c.gain() <= 0) continue;
-                note(c.id(), "Enlarged for the cumulative voltage drop", "its own drop limit fails; no feeder step buys more drop per volume",
-                        String.format(Locale.ROOT, "%s → %s (%.3f %% per %.3f dm³)", mm2(c.from()), mm2(c.to()), c.gain(), c.cost()));
-                apply(c.slot(), c.to(), failingById);
+            for (Slot k : growable) {
+                if (k == best.slot()) continue;
+                if (k.ratio() < bestFeeder) break;
+                if (k.gain <= 0) continue;
+                batch.add(Candidate.of(k));
             }
+        }
+        apply(best.slot(), best.to());
+        for (Candidate c : batch) {
+            note(c.id(), "Enlarged for the cumulative voltage drop", "its own drop limit fails; no feeder step buys more drop per volume",
+                    String.format(Locale.ROOT, "%s → %s (%.3f %% per %.3f dm³)", mm2(c.from()), mm2(c.to()), c.gain(), c.cost()));
+            apply(c.slot(), c.to());
         }
         return true;
     }
 
-    private void apply(Slot slot, double size, Map<String, CircuitResult> failing) {
-        CircuitResult f = failing.get(slot.id);
-        boolean ownDropFails = f != null && cumulative(slot) > f.limitPercent().value() + 1e-9;
+    /** Enlarges a circuit chosen by a step; every candidate final circuit was failing when the step began. */
+    private void apply(Slot slot, double size) {
+        boolean ownDropFails = !slot.feeder && cumulative(slot) > results.get(slot.id).limitPercent().value() + 1e-9;
         Circuit k = slot.current;
-        setCurrent(slot, withCpc(slot.original, size));
-        slot.ownPct = ownDropAt(slot, size);
+        resize(slot, withCpc(slot.original, size), ownDropAt(slot, size));
         changed(slot);
         upsized.add(slot.id);
         boolean starting = !k.isFeeder() && !ownDropFails && k.load().startingCurrentMultiple() != null;
@@ -493,13 +589,11 @@ final class Sizing {
             if (prev == null || prev < firstChoice.getOrDefault(id, 0.0) - 1e-9) continue;
             long failingBefore = failingAmong(slot);
             double savedPct = slot.ownPct;
-            setCurrent(slot, withCpc(slot.original, prev));
-            slot.ownPct = ownDropAt(slot, prev);
+            resize(slot, withCpc(slot.original, prev), ownDropAt(slot, prev));
             changed(slot);
             long failingAfter = failingAmong(slot);
             if (failingAfter > failingBefore) {
-                setCurrent(slot, k);
-                slot.ownPct = savedPct;
+                resize(slot, k, savedPct);
                 changed(slot);
             } else {
                 note(id, "Enlargement undone", "later enlargements upstream made it unnecessary", mm2(k.cable().size().mm2()) + " → " + mm2(prev));
