@@ -58,8 +58,8 @@ public final class SyntheticInstallation {
         }
         int i = 0;
         while (made < circuits) {
-            Board board = boards.get(1 + (i % Math.max(1, boards.size() - 1)) % boards.size());
-            if (boards.size() == 1) board = boards.get(0);
+            // Final circuits go round the sub-boards; with none, on the origin board.
+            Board board = boards.size() == 1 ? boards.get(0) : boards.get(1 + i % (boards.size() - 1));
             i++;
             lines.add(finalCircuit("C-" + (made + 1), board.id(), rnd));
             made++;

@@ -15,6 +15,13 @@ class SyntheticInstallationTest {
         assertNotEquals(SyntheticInstallation.generate(300, 7), SyntheticInstallation.generate(300, 8));
     }
 
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.ValueSource(ints = {1, 2, 39, 60, 81})
+    void smallInstallationsAreGeneratedToo(int circuits) throws Exception {
+        var inst = InputReader.parse("g.json", SyntheticInstallation.toJson(SyntheticInstallation.generate(circuits, 1)), true);
+        assertEquals(circuits, inst.circuits().size());
+    }
+
     @Test
     void aGeneratedInstallationIsValidInBothFormsAndSizes() throws Exception {
         String yaml = SyntheticInstallation.generate(400, 3);
