@@ -53,13 +53,25 @@ final class CheckCommand implements Callable<Integer> {
         long t2 = System.nanoTime();
         if (trace != null) {
             try {
-                Files.writeAtomically(trace, TraceJson.write(result.trace(), Version.engine(), data.version(), ""));
+                Files.writeAtomically(trace, stream -> {
+                    java.io.Writer w = new java.io.OutputStreamWriter(stream, java.nio.charset.StandardCharsets.UTF_8);
+                    TraceJson.write(result.trace(), Version.engine(), data.version(), "", w);
+                    w.flush();
+                });
             } catch (IOException e) {
                 err.println("feedernote: cannot write the trace to " + trace + ": " + e.getMessage());
                 return ExitStatus.BAD_INPUT;
             }
         }
-        out.print(json ? ResultJson.write(result) : TerminalSummary.render(result, input.getFileName().toString()));
+        if (json) {
+            try {
+                ResultJson.write(result, out);
+            } catch (IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+        } else {
+            out.print(TerminalSummary.render(result, input.getFileName().toString()));
+        }
         if (timings) {
             out.flush();
             err.printf(java.util.Locale.ROOT, "read and validate %.0f ms; calculate %.0f ms; write %.0f ms%n",

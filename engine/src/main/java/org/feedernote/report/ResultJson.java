@@ -4,7 +4,6 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
@@ -23,11 +22,36 @@ public final class ResultJson {
     private ResultJson() {}
 
     public static String write(Result result) {
+        java.io.StringWriter out = new java.io.StringWriter();
         try {
-            return MAPPER.writeValueAsString(tree(result)) + "\n";
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException(e);
+            write(result, out);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
         }
+        return out.toString();
+    }
+
+    /** Streams the result circuit by circuit: the same bytes as {@link #write(Result)}, without the whole tree in memory. */
+    public static void write(Result result, java.io.Writer out) throws java.io.IOException {
+        try (com.fasterxml.jackson.core.JsonGenerator g = MAPPER.getFactory().createGenerator(out)) {
+            g.disable(com.fasterxml.jackson.core.JsonGenerator.Feature.AUTO_CLOSE_TARGET);
+            g.useDefaultPrettyPrinter();
+            g.writeStartObject();
+            g.writeNumberField("format", 1);
+            g.writeStringField("verdict", result.pass() ? "PASS" : "FAIL");
+            g.writeArrayFieldStart("boards");
+            for (BoardResult b : result.boards()) MAPPER.writeTree(g, board(b));
+            g.writeEndArray();
+            g.writeArrayFieldStart("circuits");
+            for (CircuitResult c : result.circuits()) MAPPER.writeTree(g, circuit(c));
+            g.writeEndArray();
+            g.writeArrayFieldStart("checks_not_performed");
+            for (String name : result.notPerformed()) g.writeString(name);
+            g.writeEndArray();
+            g.writeEndObject();
+        }
+        out.write("\n");
+        out.flush();
     }
 
     public static ObjectNode tree(Result result) {
@@ -35,18 +59,30 @@ public final class ResultJson {
         out.put("format", 1);
         out.put("verdict", result.pass() ? "PASS" : "FAIL");
         ArrayNode boards = out.putArray("boards");
-        for (BoardResult b : result.boards()) {
-            ObjectNode n = boards.addObject();
+        for (BoardResult b : result.boards()) boards.add(board(b));
+        ArrayNode circuits = out.putArray("circuits");
+        for (CircuitResult c : result.circuits()) circuits.add(circuit(c));
+        ArrayNode missing = out.putArray("checks_not_performed");
+        result.notPerformed().forEach(missing::add);
+        return out;
+    }
+
+    private static ObjectNode board(BoardResult b) {
+        {
+            ObjectNode n = MAPPER.createObjectNode();
             n.put("id", b.id());
             put(n, "voltage_drop_percent", b.dropPercent());
             put(n, "prospective_fault_ka", b.faultKa());
             put(n, "loop_impedance_ohm", b.loopImpedance());
             if (!b.checks().isEmpty()) checks(n, b.checks());
             if (b.neutralCurrent() != null) put(n, "neutral_current_a", b.neutralCurrent());
+            return n;
         }
-        ArrayNode circuits = out.putArray("circuits");
-        for (CircuitResult c : result.circuits()) {
-            ObjectNode n = circuits.addObject();
+    }
+
+    private static ObjectNode circuit(CircuitResult c) {
+        {
+            ObjectNode n = MAPPER.createObjectNode();
             n.put("id", c.id());
             put(n, "design_current_a", c.designCurrent());
             put(n, "device_rating_a", c.rating());
@@ -75,10 +111,8 @@ public final class ResultJson {
             put(n, "x_mv_per_a_m", c.impedance().x());
             put(n, "z_mv_per_a_m", c.impedance().z());
             put(n, "conductor_temperature_c", c.impedance().theta());
+            return n;
         }
-        ArrayNode missing = out.putArray("checks_not_performed");
-        result.notPerformed().forEach(missing::add);
-        return out;
     }
 
     private static void checks(ObjectNode n, java.util.List<CheckResult> list) {
