@@ -241,7 +241,7 @@ final class Sizing {
         double next = k.next();
         k.from = now;
         k.to = next;
-        k.gain = (k.ownPct - ownDropAt(k, next)) * 1;
+        k.gain = k.ownPct - ownDropAt(k, next);
         k.cost = (next - now) * c.lengthM() * c.cable().parallel() * conductors(c) / 1000.0;
     }
 

@@ -6,7 +6,6 @@ import com.lowagie.text.Document;
 import com.lowagie.text.Element;
 import com.lowagie.text.pdf.BaseFont;
 import com.lowagie.text.pdf.PdfContentByte;
-import com.lowagie.text.pdf.PdfGState;
 import com.lowagie.text.pdf.PdfPageEventHelper;
 import com.lowagie.text.pdf.PdfTemplate;
 import com.lowagie.text.pdf.PdfWriter;
@@ -70,9 +69,6 @@ public final class PageFurniture extends PdfPageEventHelper {
         if (texts.watermark() != null) {
             PdfContentByte under = writer.getDirectContentUnder();
             under.saveState();
-            PdfGState state = new PdfGState();
-            state.setFillOpacity(1f);
-            under.setGState(state);
             under.setColorFill(texts.watermarkColor());
             under.beginText();
             under.setFontAndSize(bold, texts.watermarkSize());

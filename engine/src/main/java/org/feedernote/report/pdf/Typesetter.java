@@ -190,9 +190,6 @@ public final class Typesetter {
             PdfPTable table = t.table();
             table.setSpacingBefore(s.marginTop);
             table.setSpacingAfter(s.marginBottom);
-            if (indent > 0) {
-                table.setTotalWidth(Math.min(table.getTotalWidth() > 0 ? table.getTotalWidth() : width - indent, width - indent));
-            }
             out.add(new Block(table, t.height() + s.marginTop + s.marginBottom, s.breakAfterAvoid, outline));
             return;
         }
