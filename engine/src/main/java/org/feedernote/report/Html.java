@@ -39,6 +39,7 @@ public final class Html {
     /** Escaped text with subscripts marked up. */
     public static String math(String text) {
         String escaped = escape(text);
+        if (escaped.indexOf('_') < 0) return escaped;
         Matcher m = SUBSCRIPT.matcher(escaped);
         StringBuilder b = new StringBuilder();
         while (m.find()) {
