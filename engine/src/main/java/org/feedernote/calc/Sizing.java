@@ -299,6 +299,12 @@ final class Sizing {
     }
 
     /** After a size change: the motors whose starting dip depends on it are recalculated, the drops re-summed. */
+    /**
+     * After a size change: the circuit is calculated again, and below a feeder every feeder (their
+     * fault levels depend on it) and every motor (its starting dip adds each upstream feeder's
+     * drop), top-down, so that what the sizing reads of the circuits upstream is never stale; then
+     * the drops are re-summed.
+     */
     private void changed(Slot slot) {
         changedOne(slot);
         for (Slot a : slot.below) changedOne(a);
@@ -306,7 +312,7 @@ final class Sizing {
 
     private void changedOne(Slot a) {
         Circuit c = a.current;
-        if (!a.feeder && c.load().startingCurrentMultiple() != null) {
+        if (a.feeder || c.load().startingCurrentMultiple() != null) {
             results.put(a.id, run.evaluate(c, Trace.noop(), results));
         }
         track(a);
