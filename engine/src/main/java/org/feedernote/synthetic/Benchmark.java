@@ -27,41 +27,26 @@ import org.feedernote.report.NoteRenderer;
 import org.feedernote.report.view.NoteView;
 
 /**
- * In-process figures for bench/run: engine throughput with and without the recording trace, note
- * rendering against a bare-OpenPDF baseline that writes the same text, and heap. Not a unit test:
- * machines are shared and noisy, so nothing here asserts a time.
+ * In-process figures for bench/run: the note's layout against a bare-OpenPDF baseline that writes
+ * the same text, in the same process; and the page count of a note. (The engine's figures come
+ * from JMH, module bench/.) Not a unit test: machines are shared and noisy, so nothing here
+ * asserts a time.
  */
 public final class Benchmark {
     private Benchmark() {}
 
     public static void main(String[] args) throws Exception {
-        String what = args.length > 0 ? args[0] : "engine";
+        String what = args.length > 0 ? args[0] : "note";
         ReferenceData data = ReferenceData.standard();
-        if (what.equals("engine")) {
-            for (int n : new int[] {1000, 10000}) engine(data, n);
-        } else if (what.equals("note")) {
+        if (what.equals("note")) {
             note(data, args.length > 1 ? Integer.parseInt(args[1]) : 1000);
         } else if (what.equals("pages")) {
             try (PDDocument doc = Loader.loadPDF(new java.io.File(args[1]))) {
                 System.out.println(doc.getNumberOfPages());
             }
         } else {
-            throw new IllegalArgumentException("engine, note N or pages FILE");
+            throw new IllegalArgumentException("note N or pages FILE");
         }
-    }
-
-    private static void engine(ReferenceData data, int n) throws Exception {
-        Installation inst = InputReader.parse("synthetic.json", SyntheticInstallation.toJson(SyntheticInstallation.generate(n, 1)), true);
-        new Engine(data).run(inst, false);
-        new Engine(data).run(inst, true);
-        long t0 = System.nanoTime();
-        new Engine(data).run(inst, false);
-        double figures = (System.nanoTime() - t0) / 1e9;
-        t0 = System.nanoTime();
-        new Engine(data).run(inst, true);
-        double traced = (System.nanoTime() - t0) / 1e9;
-        System.out.printf(Locale.ROOT, "engine %6d circuits, in-process, warm: %.2f s figures only with auto-sizing (%.0f circuits/s); "
-                        + "%.2f s with the recorded trace (%.0f traced circuits/s)%n", n, figures, n / figures, traced, n / traced);
     }
 
     /** The note's layout against bare OpenPDF writing the same text, both to a file, in the same process. */
