@@ -489,7 +489,7 @@ public final class Engine {
             Q pf = powerFactor.get(c.id());
             String id = c.id();
 
-            Trace dt = ct.section(id + "/dev", "Protective device", describeDevice(c.device()));
+            Trace dt = ct.recording() ? ct.section(id + "/dev", "Protective device", describeDevice(c.device())) : ct;
             Q in = c.device().ratingA() != null
                     ? Given.input(dt, id + "/dev/I_n", "Rated current of the device", "I_n", c.device().ratingA(), Units.A,
                     c.where().path() + ".device.rating_a")
@@ -498,7 +498,7 @@ public final class Engine {
             Q i2 = CapacityFormulas.CONVENTIONAL_TRIPPING.eval(dt, id + "/dev/I_2", "", bind(CapacityFormulas.K2, k2),
                     bind(CapacityFormulas.I_N, in));
 
-            Trace kt = ct.section(id + "/cap", "Current-carrying capacity", describeConditions(c));
+            Trace kt = ct.recording() ? ct.section(id + "/cap", "Current-carrying capacity", describeConditions(c)) : ct;
             Capacity cap = capacity(kt, c, phases, ib);
 
             List<CheckResult> checks = new ArrayList<>();
@@ -508,7 +508,7 @@ public final class Engine {
             checks.add(check(kt, id + "/cap/overload", "overload", "Overload: I_2 ≤ 1.45 · I_z", relabel(i2, "I_2"), limit145,
                     "IEC 60364-4-43:2008, 433.1"));
 
-            Trace zt = ct.section(id + "/z", "Cable impedance", describeCable(c.cable()));
+            Trace zt = ct.recording() ? ct.section(id + "/z", "Cable impedance", describeCable(c.cable())) : ct;
             Q theta = temperature(zt, c, ib, cap.iz());
             ImpedanceResult z = impedance.impedance(zt, id + "/z", c.cable(), theta, f, phases);
 
