@@ -7,7 +7,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
-import org.feedernote.data.CapacityData;
 import org.feedernote.data.ReferenceData;
 import org.feedernote.model.Cable;
 import org.feedernote.model.CableType;

@@ -12,7 +12,6 @@ import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
 import org.feedernote.Version;
-import org.feedernote.calc.Engine;
 import org.feedernote.calc.Result;
 import org.feedernote.data.ReferenceData;
 import org.feedernote.model.Installation;

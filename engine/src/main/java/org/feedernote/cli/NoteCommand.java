@@ -2,7 +2,6 @@ package org.feedernote.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
@@ -16,16 +15,11 @@ import picocli.CommandLine.Model.CommandSpec;
 
 import org.feedernote.archive.Revisions;
 import org.feedernote.calc.CircuitResult;
-import org.feedernote.calc.Engine;
 import org.feedernote.calc.Result;
 import org.feedernote.data.ReferenceData;
-import org.feedernote.input.Canonical;
 import org.feedernote.model.Installation;
 import org.feedernote.model.Status;
-import org.feedernote.report.NoteBuilder;
 import org.feedernote.report.NoteRenderer;
-import org.feedernote.report.view.NoteView;
-import org.feedernote.trace.TraceJson;
 
 @Command(name = "note", mixinStandardHelpOptions = true,
         description = "Writes the worked, stamped calculation note (PDF) and the trace (JSON) for a design input.",
