@@ -146,7 +146,7 @@ public final class Engine {
             try {
                 Trace ct = circuitTrace.get(c.id());
                 sizing.record(ct, original, c);
-                CircuitResult r = evaluate(c, ct, results);
+                CircuitResult r = evaluate(c, ct, results, true);
                 return new Recorded(r.withGoverning(sizing.governing(c.id(), r)), null);
             } catch (RuntimeException e) {
                 return new Recorded(null, e);
@@ -475,15 +475,24 @@ public final class Engine {
          * With a no-op trace this is the cheap evaluation the sizing loop uses.
          */
         CircuitResult evaluate(Circuit c, Trace ct, Map<String, CircuitResult> done) {
+            return evaluate(c, ct, done, false);
+        }
+
+        /**
+         * @param finalPass true for the calculation of the chosen sizes whose results are reported:
+         *                  only then does a feeder decide the withstand of the board it supplies
+         *                  (with the recording trace or not), never for a sizing candidate
+         */
+        private CircuitResult evaluate(Circuit c, Trace ct, Map<String, CircuitResult> done, boolean finalPass) {
             try {
-                return evaluateUnchecked(c, ct, done);
+                return evaluateUnchecked(c, ct, done, finalPass);
             } catch (DataGapException e) {
                 if (e.located()) throw e;
                 throw new DataGapException(c.where().text() + ": " + c.where().path() + " (" + c.id() + "): " + e.getMessage(), true);
             }
         }
 
-        private CircuitResult evaluateUnchecked(Circuit c, Trace ct, Map<String, CircuitResult> done) {
+        private CircuitResult evaluateUnchecked(Circuit c, Trace ct, Map<String, CircuitResult> done, boolean finalPass) {
             int phases = c.isFeeder() ? 3 : c.load().phases();
             Q ib = designCurrent.get(c.id());
             Q pf = powerFactor.get(c.id());
@@ -585,7 +594,7 @@ public final class Engine {
             Q thetaMax = Given.lookup(ft, data.maxTemperature(id + "/fault/theta_max", c.cable().insulation()));
             FaultPath.CircuitFault fault = faultPath.circuit(ft, c, z, boardFault(c.from(), done), length, in, phases, thetaMax);
             checks.addAll(fault.checks());
-            if (c.isFeeder() && ct.recording()) {
+            if (c.isFeeder() && finalPass) {
                 boardChecks.put(c.to(), faultPath.boardWithstand(ft, boards.get(c.to()), fault.downstream()));
             }
             String governing = closestToLimit(checks);

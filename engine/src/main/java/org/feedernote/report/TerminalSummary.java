@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Collectors;
 
+import org.feedernote.calc.BoardResult;
 import org.feedernote.calc.CheckResult;
 import org.feedernote.calc.CircuitResult;
 import org.feedernote.calc.Result;
@@ -47,12 +48,24 @@ public final class TerminalSummary {
         }
         int failing = result.failingChecks();
         long failingCircuits = result.circuits().stream().filter(c -> !c.pass()).count();
+        List<BoardResult> failingBoards = result.boards().stream().filter(x -> !x.pass()).toList();
+        if (!failingBoards.isEmpty()) b.append('\n');
+        for (BoardResult board : failingBoards) {
+            for (CheckResult k : board.checks()) {
+                if (k.pass()) continue;
+                b.append("board ").append(board.id()).append(": FAIL × ").append(k.name()).append(" (").append(k.title()).append(": ")
+                 .append(NumberFormatPolicy.number(k.value(), k.unit())).append(' ').append(k.unit())
+                 .append(k.atLeast() ? " < " : " > ").append(NumberFormatPolicy.number(k.limit(), k.unit())).append(' ')
+                 .append(k.unit()).append(")\n");
+            }
+        }
         b.append('\n');
         if (failing == 0) {
             b.append(result.notPerformed().isEmpty() ? "PASS: every check passes (" : "PASS: every check made passes (")
              .append(result.circuits().size()).append(" circuits).\n");
         } else {
-            b.append("FAIL: ").append(failing).append(" check(s) fail in ").append(failingCircuits).append(" circuit(s).\n");
+            b.append("FAIL: ").append(failing).append(" check(s) fail in ").append(failingCircuits).append(" circuit(s)")
+             .append(failingBoards.isEmpty() ? "" : " and " + failingBoards.size() + " board(s)").append(".\n");
         }
         if (!result.notPerformed().isEmpty()) {
             b.append("Not yet checked by this version: ").append(String.join(", ", result.notPerformed()))

@@ -8,6 +8,8 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
 import org.feedernote.Fixtures;
+import org.feedernote.data.ReferenceData;
+import org.feedernote.model.Installation;
 import org.feedernote.trace.Step;
 import org.feedernote.trace.TraceWalk;
 
@@ -180,5 +182,22 @@ class FaultPathTest {
                 finalCircuit("{kind: mcb, curve: B, rating_a: 16, breaking_capacity_ka: 3, let_through_a2s: 20000}", CABLE, 10)));
         CheckResult bc = r.circuits().get(1).check("breaking-capacity");
         assertFalse(bc.pass(), "3 kA device where the fault level is " + bc.limit() + " kA");
+    }
+
+    @Test
+    void aBoardWhoseWithstandIsBelowItsFaultLevelFailsWhetherOrNotTheTraceIsRecorded() {
+        // IEC 61439-1:2011, 9.3: a board's rated short-circuit withstand must be at least the prospective
+        // fault current where it is installed; 1 kA at a board fed over 50 m of 95 mm² from a 16 kA origin.
+        String yaml = install("utility: {fault_level_ka: 16, loop_impedance_ohm: 0.1}", "",
+                finalCircuit("{kind: mcb, curve: B, rating_a: 16, breaking_capacity_ka: 10}", CABLE, 10))
+                .replace("  - id: B1\n", "  - id: B1\n    fault_rating_ka: 1\n");
+        Installation inst = Fixtures.parse(yaml);
+        for (boolean record : new boolean[] {true, false}) {
+            Result r = new Engine(ReferenceData.standard()).run(inst, record);
+            CheckResult withstand = r.boards().get(1).checks().get(0);
+            assertEquals("breaking-capacity", withstand.name());
+            assertFalse(withstand.pass(), "recorded: " + record);
+            assertFalse(r.pass(), "recorded: " + record);
+        }
     }
 }
