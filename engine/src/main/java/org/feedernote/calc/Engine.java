@@ -21,6 +21,7 @@ import org.feedernote.expr.Var;
 import org.feedernote.formula.DemandFormulas;
 import org.feedernote.formula.DesignCurrentFormulas;
 import org.feedernote.formula.Formula;
+import org.feedernote.formula.TermFormulas;
 import org.feedernote.formula.ImpedanceFormulas;
 import org.feedernote.formula.Units;
 import org.feedernote.formula.VoltageDropFormulas;
@@ -41,6 +42,7 @@ public final class Engine {
     private final ReferenceData data;
     private final ImpedanceCalc impedance;
     private final CapacityData capacityData;
+    private final TermFormulas termFormulas = new TermFormulas();
 
     public Engine(ReferenceData data) {
         this.data = data;
@@ -61,6 +63,40 @@ public final class Engine {
         Run run = new Run(inst, root, record ? root : Trace.noop());
         run.calculate();
         return new Result(inst, run.boardResults(), run.circuitResults(), root.toSection(), NOT_YET);
+    }
+
+    /** Evaluations of a circuit kept for reuse: enough for a step undone and for the final pass. */
+    private static final int EVALUATIONS_KEPT = 3;
+
+    /**
+     * One evaluation with the no-op trace: the circuit's sizes, the results of the feeders above it
+     * it was calculated with, and its result. A circuit's result depends on nothing else (design
+     * currents and the supply are fixed before sizing starts), so an evaluation of an equal circuit
+     * under the same feeder results gives the same result: the sizing returns to sizes it has tried
+     * (a step undone, the chosen size after a smaller one failed) and the final pass of check
+     * repeats the sizing's last evaluations.
+     */
+    private record Evaluated(Circuit circuit, CircuitResult[] upstream, CircuitResult result, Evaluated older) {
+        static CircuitResult find(Evaluated e, Circuit c, CircuitResult[] upstream) {
+            for (; e != null; e = e.older) {
+                if (sameResults(e.upstream, upstream) && e.circuit.equals(c)) return e.result;
+            }
+            return null;
+        }
+
+        private static boolean sameResults(CircuitResult[] a, CircuitResult[] b) {
+            if (a.length != b.length) return false;
+            for (int i = 0; i < a.length; i++) if (a[i] != b[i]) return false;
+            return true;
+        }
+
+        /** This and at most n - 1 older evaluations. */
+        Evaluated keep(int n) {
+            if (older == null) return this;
+            if (n <= 1) return new Evaluated(circuit, upstream, result, null);
+            Evaluated rest = older.keep(n - 1);
+            return rest == older ? this : new Evaluated(circuit, upstream, result, rest);
+        }
     }
 
     /** The state of one calculation; discarded when it returns. */
@@ -134,22 +170,29 @@ public final class Engine {
                     if (r.error() != null) throw r.error();
                     Circuit c = r.result().circuit();
                     results.put(c.id(), r.result());
+                    calculated.put(c.id(), r.calculated());
                     if (c.isFeeder()) boardDrop.put(c.to(), relabel(r.result().cumulativePercent(), "ΔU(" + c.to() + ")"));
                 }
             }
         }
 
-        /** A circuit calculated with the recording trace, or the data gap it ran into. */
-        private record Recorded(CircuitResult result, RuntimeException error) {}
+        /**
+         * A circuit of the final pass: its result as calculated (what the circuits below read) and
+         * as reported (with the check that governed its size), or the data gap it ran into.
+         */
+        private record Recorded(CircuitResult calculated, CircuitResult result, RuntimeException error) {}
+
+        /** The results of the final pass as calculated, for the circuits below (results adds the governing check). */
+        private final Map<String, CircuitResult> calculated = new HashMap<>();
 
         private Recorded record(Sizing sizing, Circuit original, Circuit c) {
             try {
                 Trace ct = circuitTrace.get(c.id());
                 sizing.record(ct, original, c);
-                CircuitResult r = evaluate(c, ct, results, true);
-                return new Recorded(r.withGoverning(sizing.governing(c.id(), r)), null);
+                CircuitResult r = evaluate(c, ct, calculated, true);
+                return new Recorded(r, r.withGoverning(sizing.governing(c.id(), r)), null);
             } catch (RuntimeException e) {
-                return new Recorded(null, e);
+                return new Recorded(null, null, e);
             }
         }
 
@@ -176,7 +219,7 @@ public final class Engine {
             u = Given.input(supplyTrace, "supply/U", "Nominal line voltage", "U", inst.supply().lineVoltageV(), Units.V, "supply.line_voltage_v");
             u0 = Given.input(supplyTrace, "supply/U0", "Nominal phase voltage", "U_0", inst.supply().phaseVoltageV(), Units.V, "supply.phase_voltage_v");
             f = Given.setting(supplyTrace, "basis/f", "Supply frequency", "f", basis.frequencyHz(), Units.HZ, "default of this program");
-            faultPath = new FaultPath(inst, data, u, u0);
+            faultPath = new FaultPath(inst, data, u, u0, termFormulas);
             String origin = boardOrder.get(0);
             Trace ft = supplyTrace.section("fault/origin", "Fault level at the origin board " + origin, describeSource());
             originFault = faultPath.origin(ft, origin);
@@ -470,6 +513,16 @@ public final class Engine {
             return path;
         }
 
+        /** The evaluations of each circuit with the no-op trace kept for reuse, the latest first. */
+        private final Map<String, Evaluated> evaluated = new java.util.concurrent.ConcurrentHashMap<>();
+
+        /** The feeders from the origin down to each board, origin first. */
+        private final Map<String, Circuit[]> feederPaths = new java.util.concurrent.ConcurrentHashMap<>();
+
+        Circuit[] feederPath(String board) {
+            return feederPaths.computeIfAbsent(board, b -> pathTo(b).toArray(new Circuit[0]));
+        }
+
         /**
          * Calculates one circuit with fixed sizes. done holds the results of the upstream feeders.
          * With a no-op trace this is the cheap evaluation the sizing loop uses.
@@ -485,7 +538,18 @@ public final class Engine {
          */
         private CircuitResult evaluate(Circuit c, Trace ct, Map<String, CircuitResult> done, boolean finalPass) {
             try {
-                return evaluateUnchecked(c, ct, done, finalPass);
+                if (ct.recording()) return evaluateUnchecked(c, ct, done, finalPass);
+                Circuit[] path = feederPath(c.from());
+                CircuitResult[] upstream = new CircuitResult[path.length];
+                for (int i = 0; i < path.length; i++) upstream[i] = done.get(path[i].id());
+                CircuitResult known = Evaluated.find(evaluated.get(c.id()), c, upstream);
+                if (known == null) {
+                    known = evaluateUnchecked(c, ct, done, finalPass);
+                    evaluated.put(c.id(), new Evaluated(c, upstream, known, evaluated.get(c.id())).keep(EVALUATIONS_KEPT));
+                } else if (finalPass && c.isFeeder()) {
+                    boardChecks.put(c.to(), faultPath.boardWithstand(ct, boards.get(c.to()), known.downstream()));
+                }
+                return known;
             } catch (DataGapException e) {
                 if (e.located()) throw e;
                 throw new DataGapException(c.where().text() + ": " + c.where().path() + " (" + c.id() + "): " + e.getMessage(), true);
@@ -680,8 +744,8 @@ public final class Engine {
                 Given.note(t, id + "/C_h", "Third-harmonic currents", "The harmonic reduction of IEC 60364-5-52 Annex E applies to four- and five-core cables of three-phase circuits only; not applied here.",
                         "IEC 60364-5-52:2009, Annex E");
             }
-            Formula.Terms terms = Formula.terms("c", Units.NONE, factors);
-            Q product = CapacityFormulas.correctionProduct(terms.vars()).eval(t, id + "/C", "", terms.bindings());
+            Q product = termFormulas.eval(t, id + "/C", "", "correction-product", "C", "c", Units.NONE, factors,
+                    CapacityFormulas::correctionProduct);
             Q iz;
             if (cable.parallel() > 1) {
                 Q np = Given.derived(t, id + "/n", "Conductors in parallel per phase", "n", cable.parallel(), Units.NONE,
@@ -736,7 +800,7 @@ public final class Engine {
 
         Q cumulative(Trace t, Circuit c, Q own, Map<String, CircuitResult> done) {
             List<Q> terms = new ArrayList<>();
-            for (Circuit f : pathTo(c.from())) {
+            for (Circuit f : feederPath(c.from())) {
                 CircuitResult r = done.get(f.id());
                 Q used = r.dropExactPercent() != null && inst.basis().voltageDropMethod().value() == DropMethod.EXACT
                         ? r.dropExactPercent() : r.dropPercent();
@@ -746,10 +810,9 @@ public final class Engine {
             if (terms.size() == 1) {
                 return relabel(own, "ΔU_total");
             }
-            Formula.Terms sumTerms = Formula.terms("d", Units.PERCENT, terms);
-            Formula sum = DemandFormulas.sum("cumulative-drop", "Voltage drop, origin to " + (c.isFeeder() ? "board " + c.to() : "terminals"),
-                    "ΔU_total", Units.PERCENT, sumTerms.vars(), "Drops add along the path from the origin (each feeder's percentage plus the circuit's own)");
-            return sum.eval(t, c.id() + "/vd/dU_total", "", sumTerms.bindings());
+            return termFormulas.eval(t, c.id() + "/vd/dU_total", "", "cumulative-drop", "ΔU_total", "d", Units.PERCENT, terms,
+                    vars -> DemandFormulas.sum("cumulative-drop", "Voltage drop, origin to " + (c.isFeeder() ? "board " + c.to() : "terminals"),
+                            "ΔU_total", Units.PERCENT, vars, "Drops add along the path from the origin (each feeder's percentage plus the circuit's own)"));
         }
 
         Q limit(Trace t, Circuit c) {
@@ -782,7 +845,7 @@ public final class Engine {
                     bind(VoltageDropFormulas.DU, relabel(du, "ΔU")), bind(VoltageDropFormulas.U_N, un)), "ΔU_st(" + c.id() + ")");
             List<Q> terms = new ArrayList<>();
             int phases = c.load().phases();
-            for (Circuit f : pathTo(c.from())) {
+            for (Circuit f : feederPath(c.from())) {
                 CircuitResult fr = done.get(f.id());
                 ImpedanceResult fz = phases == 3 ? fr.impedance()
                         : impedance.mvPerAm(t, id + "/" + f.id() + "/z", fr.impedance().theta(), fr.impedance().resistance(),
@@ -796,10 +859,9 @@ public final class Engine {
             }
             terms.add(own);
             if (terms.size() == 1) return relabel(own, "ΔU_st,total");
-            Formula.Terms dipTerms = Formula.terms("d", Units.PERCENT, terms);
-            return DemandFormulas.sum("starting-dip-total", "Voltage dip at the motor terminals while it starts", "ΔU_st,total",
-                    Units.PERCENT, dipTerms.vars(), "Running drop of each upstream feeder, its added drop from the starting current, and the motor circuit's drop at starting current")
-                    .eval(t, id + "/dU_total", "", dipTerms.bindings());
+            return termFormulas.eval(t, id + "/dU_total", "", "starting-dip-total", "ΔU_st,total", "d", Units.PERCENT, terms,
+                    vars -> DemandFormulas.sum("starting-dip-total", "Voltage dip at the motor terminals while it starts", "ΔU_st,total",
+                            Units.PERCENT, vars, "Running drop of each upstream feeder, its added drop from the starting current, and the motor circuit's drop at starting current"));
         }
 
         CheckResult check(Trace t, String id, String name, String title, Q value, Q limit, String reference) {

@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 
 import org.feedernote.data.FaultData;
+import org.feedernote.formula.TermFormulas;
 import org.feedernote.data.ReferenceData;
 import org.feedernote.expr.Var;
 import org.feedernote.formula.Units;
@@ -32,8 +33,10 @@ final class FaultPath {
     private final Q u0;
     private Q cmax;
     private Q cmin;
+    private final TermFormulas termFormulas;
 
-    FaultPath(Installation inst, ReferenceData data, Q u, Q u0) {
+    FaultPath(Installation inst, ReferenceData data, Q u, Q u0, TermFormulas termFormulas) {
+        this.termFormulas = termFormulas;
         this.inst = inst;
         this.data = data;
         this.faults = new FaultData(data);
@@ -58,8 +61,8 @@ final class FaultPath {
     }
 
     private Q add(Trace t, String id, String title, String symbol, boolean magnitudes, Q... terms) {
-        org.feedernote.formula.Formula.Terms z = org.feedernote.formula.Formula.terms("z", Units.OHM, List.of(terms));
-        return (magnitudes ? arithmeticSum(title, symbol, z.vars()) : sum(title, symbol, z.vars())).eval(t, id, "", z.bindings());
+        return termFormulas.eval(t, id, "", magnitudes ? "loop-sum" : "impedance-sum", symbol, "z", Units.OHM, List.of(terms),
+                vars -> magnitudes ? arithmeticSum(title, symbol, vars) : sum(title, symbol, vars));
     }
 
     private Q magnitude(Trace t, String id, String symbol, Q r, Q x) {

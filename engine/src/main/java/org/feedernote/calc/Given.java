@@ -12,12 +12,14 @@ final class Given {
     private Given() {}
 
     static Q input(Trace t, String id, String title, String symbol, double value, String unit, String keyPath) {
+        if (!t.recording()) return new Q(id, symbol, value, unit);
         Step.Input s = new Step.Input(id, title, symbol, value, unit, keyPath, Step.Origin.GIVEN, "design input");
         t.add(s);
         return s.q();
     }
 
     static Q setting(Trace t, String id, String title, String symbol, Setting<Double> setting, String unit, String defaultReference) {
+        if (!t.recording()) return new Q(id, symbol, setting.value(), unit);
         Step.Input s = new Step.Input(id, title, symbol, setting.value(), unit, setting.path(),
                 setting.given() ? Step.Origin.GIVEN : Step.Origin.DEFAULT,
                 setting.given() ? "design input" : defaultReference);
@@ -26,6 +28,7 @@ final class Given {
     }
 
     static Q derived(Trace t, String id, String title, String symbol, double value, String unit, String reference) {
+        if (!t.recording()) return new Q(id, symbol, value, unit);
         Step.Input s = new Step.Input(id, title, symbol, value, unit, "", Step.Origin.DERIVED, reference);
         t.add(s);
         return s.q();
@@ -37,6 +40,7 @@ final class Given {
     }
 
     static Q lookupUsing(Trace t, Step.Lookup step, List<String> uses) {
+        if (!t.recording()) return step.q();
         Step.Lookup s = new Step.Lookup(step.id(), step.title(), step.symbol(), step.value(), step.unit(), step.table(),
                 step.row(), step.column(), step.method(), uses);
         t.add(s);

@@ -26,6 +26,7 @@ public final class Formula {
     private final Expr expr;
     private final String reference;
     private final List<Var> vars;
+    private final Evaluator.Compiled compiled;
 
     public Formula(String id, String title, String symbol, String unit, Expr expr, String reference) {
         this.id = id;
@@ -37,6 +38,7 @@ public final class Formula {
         Set<Var> found = new LinkedHashSet<>();
         collect(expr, found);
         this.vars = List.copyOf(found);
+        this.compiled = Evaluator.compile(expr, vars);
     }
 
     private Formula(Formula f, String symbol) {
@@ -47,6 +49,7 @@ public final class Formula {
         this.expr = f.expr;
         this.reference = f.reference;
         this.vars = f.vars;
+        this.compiled = f.compiled;
     }
 
     public String id() { return id; }
@@ -68,12 +71,6 @@ public final class Formula {
             @Override public Void bin(Expr.Bin bin) { bin.left().accept(this); bin.right().accept(this); return null; }
             @Override public Void call(Expr.Call call) { call.arg().accept(this); return null; }
         });
-    }
-
-    /** The index of a variable of the tree in {@link #vars} (the tree holds the same objects). */
-    private int slot(Var v) {
-        for (int i = 0; i < vars.size(); i++) if (vars.get(i) == v) return i;
-        throw new IllegalStateException(id + ": " + v.symbol() + " is not a variable of the formula");
     }
 
     /** The same formula with its result shown by another symbol (S_L1 rather than S). */
@@ -125,7 +122,7 @@ public final class Formula {
             if (b == null) throw new IllegalStateException(stepId + ": formula " + id + " needs " + vars.get(i).symbol() + " bound");
             values[i] = b.q().value();
         }
-        double value = Evaluator.evaluate(expr, (Var v) -> values[slot(v)], stepId);
+        double value = compiled.evaluate(values, stepId);
         if (trace.recording()) {
             List<Step.Binding> used = new ArrayList<>();
             for (Step.Binding b : bindings) if (vars.contains(b.var())) used.add(b);

@@ -1,0 +1,52 @@
+package org.feedernote.formula;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
+import java.util.function.Function;
+
+import org.feedernote.expr.Var;
+import org.feedernote.trace.Q;
+import org.feedernote.trace.Step;
+import org.feedernote.trace.Trace;
+
+/**
+ * Formulas over a varying number of terms: a sum of drops along a path, a product of correction
+ * factors, impedances in series. With a recording trace the variables carry the symbols of the
+ * quantities they stand for, as the working shows them. With the no-op trace the same formula
+ * over anonymous variables is made once per kind, result symbol and number of terms and kept:
+ * the same expression with its operations in the same order, hence the same value, without
+ * building a formula for every sizing candidate. One per engine; safe to share between threads.
+ */
+public final class TermFormulas {
+    private record Key(String kind, String symbol, int terms) {}
+
+    private record Made(Formula formula, List<Var> vars) {}
+
+    private final Map<Key, Made> made = new ConcurrentHashMap<>();
+
+    /**
+     * Evaluates the formula make builds over one variable per quantity.
+     *
+     * @param kind   what make builds (a formula id): with symbol and the number of terms it names
+     *               the formula kept for the no-op trace, so make must build the same expression
+     *               for the same kind, symbol and count
+     * @param symbol the result's symbol, as make gives it
+     */
+    public Q eval(Trace trace, String stepId, String form, String kind, String symbol, String keyPrefix, String unit,
+                  List<Q> quantities, Function<List<Var>, Formula> make) {
+        if (trace.recording()) {
+            Formula.Terms terms = Formula.terms(keyPrefix, unit, quantities);
+            return make.apply(terms.vars()).eval(trace, stepId, form, terms.bindings());
+        }
+        Made m = made.computeIfAbsent(new Key(kind, symbol, quantities.size()), k -> {
+            List<Var> vars = new ArrayList<>();
+            for (int i = 0; i < k.terms(); i++) vars.add(new Var(keyPrefix + i, keyPrefix + i, unit));
+            return new Made(make.apply(List.copyOf(vars)), List.copyOf(vars));
+        });
+        Step.Binding[] bindings = new Step.Binding[quantities.size()];
+        for (int i = 0; i < bindings.length; i++) bindings[i] = Formula.bind(m.vars().get(i), quantities.get(i));
+        return m.formula().eval(trace, stepId, form, bindings);
+    }
+}
