@@ -537,6 +537,32 @@ public final class Engine {
          *                  (with the recording trace or not), never for a sizing candidate
          */
         private CircuitResult evaluate(Circuit c, Trace ct, Map<String, CircuitResult> done, boolean finalPass) {
+            return evaluate(c, ct, done, finalPass, null);
+        }
+
+        /**
+         * A circuit's own figures with the no-op trace, for the sizing: its own voltage drop, and
+         * the evaluations of protective conductors of another size, which reuse them.
+         */
+        OwnFigures ownFigures(Circuit c) {
+            try {
+                return ownFigures(c, Trace.noop());
+            } catch (DataGapException e) {
+                if (e.located()) throw e;
+                throw new DataGapException(c.where().text() + ": " + c.where().path() + " (" + c.id() + "): " + e.getMessage(), true);
+            }
+        }
+
+        /** Calculates c, which differs from the circuit of own at most in its protective conductor, from own. */
+        CircuitResult evaluate(Circuit c, OwnFigures own, Map<String, CircuitResult> done) {
+            Circuit same = c.withCable(c.cable().withCpc(own.circuit().cable().cpc().mm2()));
+            if (!same.equals(own.circuit().withCable(own.circuit().cable().withCpc(own.circuit().cable().cpc().mm2())))) {
+                throw new IllegalArgumentException(c.id() + ": own figures of another circuit");
+            }
+            return evaluate(c, Trace.noop(), done, false, own);
+        }
+
+        private CircuitResult evaluate(Circuit c, Trace ct, Map<String, CircuitResult> done, boolean finalPass, OwnFigures own) {
             try {
                 if (ct.recording()) return evaluateUnchecked(c, ct, done, finalPass);
                 Circuit[] path = feederPath(c.from());
@@ -544,7 +570,7 @@ public final class Engine {
                 for (int i = 0; i < path.length; i++) upstream[i] = done.get(path[i].id());
                 CircuitResult known = Evaluated.find(evaluated.get(c.id()), c, upstream);
                 if (known == null) {
-                    known = evaluateUnchecked(c, ct, done, finalPass);
+                    known = completed(c, ct, own != null ? own : ownFigures(c, ct), done, finalPass);
                     evaluated.put(c.id(), new Evaluated(c, upstream, known, evaluated.get(c.id())).keep(EVALUATIONS_KEPT));
                 } else if (finalPass && c.isFeeder()) {
                     boardChecks.put(c.to(), faultPath.boardWithstand(ct, boards.get(c.to()), known.downstream()));
@@ -557,6 +583,19 @@ public final class Engine {
         }
 
         private CircuitResult evaluateUnchecked(Circuit c, Trace ct, Map<String, CircuitResult> done, boolean finalPass) {
+            return completed(c, ct, ownFigures(c, ct), done, finalPass);
+        }
+
+        /**
+         * What a circuit's own sizes and conditions give, before the circuits upstream or its
+         * protective conductor enter: the device, the capacity and its checks, the impedance and the
+         * circuit's own voltage drop. checks is not to be changed (it is shared between the
+         * evaluations that complete these figures); vt is the voltage-drop section, continued by them.
+         */
+        record OwnFigures(Circuit circuit, int phases, Q ib, Q pf, Q in, Q i2, Capacity cap, List<CheckResult> checks,
+                          ImpedanceResult z, Trace vt, String vid, Q length, Q un, Q dropV, Q dropPct, Q dropExactPct, Q own) {}
+
+        private OwnFigures ownFigures(Circuit c, Trace ct) {
             int phases = c.isFeeder() ? 3 : c.load().phases();
             Q ib = designCurrent.get(c.id());
             Q pf = powerFactor.get(c.id());
@@ -632,6 +671,29 @@ public final class Engine {
                         "IEC 60364-5-52:2009, Annex G", dropPct.id());
             }
             Q own = relabel(exactGoverns ? dropExactPct : dropPct, "ΔU(" + id + ")");
+            return new OwnFigures(c, phases, ib, pf, in, i2, cap, List.copyOf(checks), z, vt, vid, length, un, dropV, dropPct,
+                    dropExactPct, own);
+        }
+
+        /** The rest of the calculation of c from its own figures: cumulative drop, motor starting, fault path. */
+        private CircuitResult completed(Circuit c, Trace ct, OwnFigures o, Map<String, CircuitResult> done, boolean finalPass) {
+            String id = c.id();
+            int phases = o.phases();
+            Q ib = o.ib();
+            Q pf = o.pf();
+            Q in = o.in();
+            Q i2 = o.i2();
+            Capacity cap = o.cap();
+            List<CheckResult> checks = new ArrayList<>(o.checks());
+            ImpedanceResult z = o.z();
+            Trace vt = o.vt();
+            String vid = o.vid();
+            Q length = o.length();
+            Q un = o.un();
+            Q dropV = o.dropV();
+            Q dropPct = o.dropPct();
+            Q dropExactPct = o.dropExactPct();
+            Q own = o.own();
             Q cumulative = cumulative(vt, c, own, done);
             Q limit = null;
             Q dip = null;

@@ -135,11 +135,14 @@ final class Sizing {
         double table = chosen.cable().cpc().mm2();
         double minimum = chosen.cable().type() == org.feedernote.model.CableType.MULTICORE ? 1.5 : 4;
         Circuit best = chosen;
+        Engine.Run.OwnFigures own = null;
         for (int i = sizes.indexOf(table) - 1; i >= 0; i--) {
             double smaller = sizes.get(i);
             if (smaller < minimum - 1e-9 || !ReferenceData.standard().hasResistance(chosen.cable().conductor(), smaller)) break;
             Circuit candidate = best.withCable(best.cable().withCpc(smaller));
-            CircuitResult r = run.evaluate(candidate, Trace.noop(), results);
+            // The protective conductor changes only the fault path: the rest is calculated once.
+            if (own == null) own = run.ownFigures(chosen);
+            CircuitResult r = run.evaluate(candidate, own, results);
             boolean ok = r.check("protective-conductor").pass() && r.check("disconnection").pass();
             if (!ok) break;
             best = candidate;
@@ -297,31 +300,43 @@ final class Sizing {
         }
     }
 
-    /** After a size change: the motors whose starting dip depends on it are recalculated, the drops re-summed. */
     /**
      * After a size change: the circuit is calculated again, and below a feeder every feeder (their
-     * fault levels depend on it) and every motor (its starting dip adds each upstream feeder's
-     * drop), top-down, so that what the sizing reads of the circuits upstream is never stale; then
-     * the drops are re-summed.
+     * fault levels depend on it), top-down, then every motor (its starting dip adds each upstream
+     * feeder's drop), so that what the sizing reads of the circuits upstream is never stale; then
+     * the drops are re-summed. The motors depend only on the feeders, so they are calculated side
+     * by side; the first data gap in calculation order is the one reported.
      */
     private void changed(Slot slot) {
-        changedOne(slot);
-        for (Slot a : slot.below) changedOne(a);
+        if (recalculated(slot)) results.put(slot.id, run.evaluate(slot.current, Trace.noop(), results));
+        List<Slot> motors = new ArrayList<>();
+        for (Slot a : slot.below) {
+            if (a.feeder) results.put(a.id, run.evaluate(a.current, Trace.noop(), results));
+            else if (recalculated(a)) motors.add(a);
+        }
+        record Motor(CircuitResult result, RuntimeException error) {}
+        List<Motor> done = (motors.size() > 8 ? motors.parallelStream() : motors.stream()).map(a -> {
+            try {
+                return new Motor(run.evaluate(a.current, Trace.noop(), results), null);
+            } catch (RuntimeException e) {
+                return new Motor(null, e);
+            }
+        }).toList();
+        for (int i = 0; i < motors.size(); i++) {
+            if (done.get(i).error() != null) throw done.get(i).error();
+            results.put(motors.get(i).id, done.get(i).result());
+        }
+        track(slot);
+        for (Slot a : slot.below) track(a);
     }
 
-    private void changedOne(Slot a) {
-        Circuit c = a.current;
-        if (a.feeder || c.load().startingCurrentMultiple() != null) {
-            results.put(a.id, run.evaluate(c, Trace.noop(), results));
-        }
-        track(a);
+    /** Feeders and motors are calculated again when a circuit above them changes. */
+    private static boolean recalculated(Slot a) {
+        return a.feeder || a.current.load().startingCurrentMultiple() != null;
     }
 
     private double ownDropAt(Slot k, double size) {
-        return k.ownDrop.computeIfAbsent(size, sz -> {
-            Circuit candidate = withCpc(k.original, sz);
-            return governingOwn(run.evaluate(candidate, Trace.noop(), results));
-        });
+        return k.ownDrop.computeIfAbsent(size, sz -> run.ownFigures(withCpc(k.original, sz)).own().value());
     }
 
     private final Map<String, List<Double>> coveredSizes = new HashMap<>();

@@ -39,7 +39,7 @@ final class TreeReader {
                 errors.add(new InputError(file, 1, 1, "", "the file is empty; expected a design input (format: 1, project, supply, boards, circuits)"));
                 return null;
             }
-            Node root = reader.value(p, "");
+            Node root = reader.value(p, Where.ROOT);
             if (p.nextToken() != null) {
                 JsonLocation loc = p.currentTokenLocation();
                 errors.add(new InputError(file, loc.getLineNr(), loc.getColumnNr(), "", "unexpected content after the end of the document"));
@@ -80,7 +80,22 @@ final class TreeReader {
         return new Node.Pos(Math.max(1, loc.getLineNr()), Math.max(1, loc.getColumnNr()));
     }
 
-    private Node value(JsonParser p, String path) throws IOException {
+    /** Where a value sits, written out only for a message (most inputs need none). */
+    private record Where(Where parent, String key, int index) {
+        static final Where ROOT = new Where(null, null, -1);
+
+        Where child(String k) { return new Where(this, k, -1); }
+        Where item(int i) { return new Where(this, null, i); }
+
+        String text() {
+            if (parent == null) return "";
+            String up = parent.text();
+            if (key == null) return up + "[" + index + "]";
+            return up.isEmpty() ? key : up + "." + key;
+        }
+    }
+
+    private Node value(JsonParser p, Where path) throws IOException {
         JsonToken t = p.currentToken();
         Node.Pos pos = pos(p);
         switch (t) {
@@ -90,10 +105,10 @@ final class TreeReader {
                     String key = p.currentName();
                     Node.Pos keyPos = pos(p);
                     p.nextToken();
-                    String childPath = path.isEmpty() ? key : path + "." + key;
+                    Where childPath = path.child(key);
                     Node child = value(p, childPath);
                     if (entries.containsKey(key)) {
-                        errors.add(new InputError(file, keyPos.line(), keyPos.column(), childPath,
+                        errors.add(new InputError(file, keyPos.line(), keyPos.column(), childPath.text(),
                                 "the key '" + key + "' is given twice (first at line " + entries.get(key).keyPos().line() + ")"));
                     } else {
                         entries.put(key, new Node.Entry(key, keyPos, child));
@@ -105,7 +120,7 @@ final class TreeReader {
                 List<Node> items = new ArrayList<>();
                 int i = 0;
                 while (p.nextToken() != JsonToken.END_ARRAY) {
-                    items.add(value(p, path + "[" + i++ + "]"));
+                    items.add(value(p, path.item(i++)));
                 }
                 return new Node.Arr(pos, items);
             }
