@@ -138,6 +138,10 @@ public final class Engine {
             supply();
             for (String b : boardOrder) {
                 for (Circuit c : outgoing.getOrDefault(b, List.of())) {
+                    if (!root.recording()) {
+                        circuitTrace.put(c.id(), root);
+                        continue;
+                    }
                     String sub = c.isFeeder() ? "feeder " + c.from() + " → " + c.to() : "from " + c.from();
                     String title = "Circuit " + c.id() + (c.description().isEmpty() ? "" : " — " + c.description());
                     circuitTrace.put(c.id(), root.section(c.id(), title, sub));
@@ -321,13 +325,14 @@ public final class Engine {
             for (Circuit c : auto) {
                 int best = 0;
                 for (int k = 1; k < 3; k++) if (load[k] < load[best] - 1e-12) best = k;
-                String before = String.format(Locale.ROOT, "phase loads before allocation L1 %s kVA, L2 %s kVA, L3 %s kVA",
+                Trace t = circuitTrace.get(c.id());
+                String before = !t.recording() ? "" : String.format(Locale.ROOT, "phase loads before allocation L1 %s kVA, L2 %s kVA, L3 %s kVA",
                         trim(load[0]), trim(load[1]), trim(load[2]));
                 LoadDemand d = demand.get(c.id());
                 load[best] += d.apparentKva();
                 demand.put(c.id(), withPhase(d, best + 1));
                 connection.put(c.id(), "L" + (best + 1));
-                Given.decision(circuitTrace.get(c.id()), c.id() + "/phase", "Phase (allocated)",
+                Given.decision(t, c.id() + "/phase", "Phase (allocated)",
                         "phase: auto; " + before + " (largest single-phase loads first, each to the least-loaded phase)",
                         "connected to L" + (best + 1), "common practice, no source");
             }
