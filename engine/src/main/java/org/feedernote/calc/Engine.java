@@ -79,7 +79,7 @@ public final class Engine {
     private record Evaluated(Circuit circuit, CircuitResult[] upstream, CircuitResult result, Evaluated older) {
         static CircuitResult find(Evaluated e, Circuit c, CircuitResult[] upstream) {
             for (; e != null; e = e.older) {
-                if (sameResults(e.upstream, upstream) && e.circuit.equals(c)) return e.result;
+                if (sameResults(e.upstream, upstream) && (e.circuit == c || e.circuit.equals(c))) return e.result;
             }
             return null;
         }

@@ -339,11 +339,21 @@ final class Sizing {
         return k.ownDrop.computeIfAbsent(size, sz -> run.ownFigures(withCpc(k.original, sz)).own().value());
     }
 
-    private final Map<String, List<Double>> coveredSizes = new HashMap<>();
+    /** Covered sizes by {@link #coverageKey}: few different cables and methods serve thousands of circuits. */
+    private final Map<Long, List<Double>> coveredSizes = new java.util.concurrent.ConcurrentHashMap<>();
 
     /** The standard sizes the tables cover for this circuit's cable and method, ascending. */
     private List<Double> sizesFor(Circuit c) {
-        return coveredSizes.computeIfAbsent(c.id(), k -> sizes.stream().filter(s -> covered(c, s)).toList());
+        return coveredSizes.computeIfAbsent(coverageKey(c), k -> sizes.stream().filter(s -> covered(c, s)).toList());
+    }
+
+    /** What the covered sizes depend on (insulation, conductor, method, loaded conductors, formation) as one number. */
+    private static long coverageKey(Circuit c) {
+        Cable cable = c.cable();
+        int loaded = (c.isFeeder() || c.load().phases() == 3) ? 3 : 2;
+        int formation = cable.formation() == null ? 0 : cable.formation().ordinal() + 1;
+        return ((((long) cable.insulation().ordinal() * 64 + cable.conductor().ordinal()) * 64 + c.conditions().method().ordinal()) * 8
+                + loaded) * 64 + formation;
     }
 
     private boolean covered(Circuit c, double size) {
@@ -381,8 +391,9 @@ final class Sizing {
         Circuit last = null;
         String lastReason = null;
         String lastReasonCheck = "capacity";
+        List<Double> covered = sizesFor(c);
         for (double size : sizes) {
-            if (!covered(c, size)) continue;
+            if (!covered.contains(size)) continue;
             Circuit candidate = withCpc(c, size);
             String quick = run.capacityShortfall(candidate);
             if (quick != null && size < sizes.get(sizes.size() - 1)) {

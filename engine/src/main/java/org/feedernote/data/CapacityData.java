@@ -72,12 +72,14 @@ public final class CapacityData {
                 ReferenceData.sizeKey(size) + " mm²", label);
     }
 
-    /** Smallest size the capacity table covers for the cable, so sizing starts there. */
-    private final java.util.concurrent.ConcurrentHashMap<String, Boolean> covered = new java.util.concurrent.ConcurrentHashMap<>();
+    private record Coverage(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation, double size) {}
+
+    /** Whether the capacity table has a value for the cable, method and size; asked once per combination. */
+    private final java.util.concurrent.ConcurrentHashMap<Coverage, Boolean> covered = new java.util.concurrent.ConcurrentHashMap<>();
 
     public boolean covers(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation, double size) {
-        String key = insulation + "|" + conductor + "|" + method + "|" + loaded + "|" + formation + "|" + size;
-        return covered.computeIfAbsent(key, k -> probe(insulation, conductor, method, loaded, formation, size));
+        return covered.computeIfAbsent(new Coverage(insulation, conductor, method, loaded, formation, size),
+                k -> probe(insulation, conductor, method, loaded, formation, size));
     }
 
     private boolean probe(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation, double size) {

@@ -66,10 +66,19 @@ public final class ReferenceData {
         return resistance.value(sizeKey(sizeMm2), conductor.token()) != null;
     }
 
-    private static final java.util.concurrent.ConcurrentHashMap<Double, String> KEYS = new java.util.concurrent.ConcurrentHashMap<>();
+    /** The keys of the common sizes, made once: the sizing asks for them hundreds of thousands of times. */
+    private static final double[] COMMON_SIZES = {0.5, 0.75, 1, 1.5, 2.5, 4, 6, 10, 16, 25, 35, 50, 70, 95, 120, 150, 185, 240,
+            300, 400, 500, 630, 800, 1000};
+    private static final String[] COMMON_KEYS = java.util.Arrays.stream(COMMON_SIZES).mapToObj(ReferenceData::key).toArray(String[]::new);
 
+    /** A size as the tables' rows name it: "2.5", "16". */
     public static String sizeKey(double mm2) {
-        return KEYS.computeIfAbsent(mm2, v -> v == Math.rint(v) && Math.abs(v) < 1e15 ? Long.toString(v.longValue()) : Double.toString(v));
+        for (int i = 0; i < COMMON_SIZES.length; i++) if (COMMON_SIZES[i] == mm2) return COMMON_KEYS[i];
+        return key(mm2);
+    }
+
+    private static String key(double v) {
+        return v == Math.rint(v) && Math.abs(v) < 1e15 ? Long.toString((long) v) : Double.toString(v);
     }
 
     public Step.Lookup resistance20(String stepId, Conductor conductor, double sizeMm2) {
