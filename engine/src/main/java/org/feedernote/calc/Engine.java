@@ -240,56 +240,57 @@ public final class Engine {
             boolean three = load.phases() == 3;
             String phaseForm = three ? "three-phase" : "single-phase";
             Q pf = load.powerFactor() == null ? null
-                    : Given.input(t, id + "/cos_phi", "Power factor", "cos φ", load.powerFactor(), Units.NONE, path + ".power_factor");
+                    : Given.input(t, id, "/cos_phi", "Power factor", "cos φ", load.powerFactor(), Units.NONE, path, ".power_factor");
             Q p = null;
             Q q = null;
             Q s = null;
             Q ib;
             if (load.powerKw() != null) {
                 if (load.kind() == LoadKind.MOTOR) {
-                    Q out = Given.input(t, id + "/P_out", "Rated output", "P_out", load.powerKw(), Units.KW, path + ".power_kw");
-                    Q eta = Given.input(t, id + "/eta", "Efficiency", "η", load.efficiency(), Units.NONE, path + ".efficiency");
-                    p = DesignCurrentFormulas.MOTOR_INPUT_POWER.eval(t, id + "/P", "",
-                            bind(DesignCurrentFormulas.P_OUT, out), bind(DesignCurrentFormulas.ETA, eta));
+                    Q out = Given.input(t, id, "/P_out", "Rated output", "P_out", load.powerKw(), Units.KW, path, ".power_kw");
+                    Q eta = Given.input(t, id, "/eta", "Efficiency", "η", load.efficiency(), Units.NONE, path, ".efficiency");
+                    p = DesignCurrentFormulas.MOTOR_INPUT_POWER.eval(t, id, "/P", "", bind(DesignCurrentFormulas.P_OUT, out),
+                            bind(DesignCurrentFormulas.ETA, eta));
                 } else {
-                    p = Given.input(t, id + "/P", "Input power", "P", load.powerKw(), Units.KW, path + ".power_kw");
+                    p = Given.input(t, id, "/P", "Input power", "P", load.powerKw(), Units.KW, path, ".power_kw");
                 }
                 ib = (three ? DesignCurrentFormulas.THREE_PHASE_FROM_POWER : DesignCurrentFormulas.SINGLE_PHASE_FROM_POWER)
-                        .eval(t, id + "/I_b", phaseForm + ", power known", bind(DesignCurrentFormulas.P, p),
-                                bind(DesignCurrentFormulas.COS_PHI, pf), bind(three ? DesignCurrentFormulas.U_LINE : DesignCurrentFormulas.U_PHASE, three ? u : u0));
+                        .eval(t, id, "/I_b", phaseForm + ", power known", bind(DesignCurrentFormulas.P, p),
+                                bind(DesignCurrentFormulas.COS_PHI, pf),
+                                bind(three ? DesignCurrentFormulas.U_LINE : DesignCurrentFormulas.U_PHASE, three ? u : u0));
             } else if (load.apparentKva() != null) {
-                s = Given.input(t, id + "/S", "Apparent power", "S", load.apparentKva(), Units.KVA, path + ".apparent_kva");
+                s = Given.input(t, id, "/S", "Apparent power", "S", load.apparentKva(), Units.KVA, path, ".apparent_kva");
                 ib = (three ? DesignCurrentFormulas.THREE_PHASE_FROM_APPARENT : DesignCurrentFormulas.SINGLE_PHASE_FROM_APPARENT)
-                        .eval(t, id + "/I_b", phaseForm + ", apparent power known", bind(DesignCurrentFormulas.S, s),
+                        .eval(t, id, "/I_b", phaseForm + ", apparent power known", bind(DesignCurrentFormulas.S, s),
                                 bind(three ? DesignCurrentFormulas.U_LINE : DesignCurrentFormulas.U_PHASE, three ? u : u0));
                 if (pf != null) {
-                    p = DesignCurrentFormulas.ACTIVE_FROM_APPARENT.eval(t, id + "/P", "", bind(DesignCurrentFormulas.S, s),
+                    p = DesignCurrentFormulas.ACTIVE_FROM_APPARENT.eval(t, id, "/P", "", bind(DesignCurrentFormulas.S, s),
                             bind(DesignCurrentFormulas.COS_PHI, pf));
                 }
             } else {
-                ib = Given.input(t, id + "/I_b", "Design current (load current given)", "I_b", load.currentA(), Units.A, path + ".current_a");
+                ib = Given.input(t, id, "/I_b", "Design current (load current given)", "I_b", load.currentA(), Units.A, path, ".current_a");
                 s = (three ? DesignCurrentFormulas.APPARENT_THREE_PHASE_FROM_CURRENT : DesignCurrentFormulas.APPARENT_SINGLE_PHASE_FROM_CURRENT)
-                        .eval(t, id + "/S", phaseForm, bind(DesignCurrentFormulas.I, ib),
+                        .eval(t, id, "/S", phaseForm, bind(DesignCurrentFormulas.I, ib),
                                 bind(three ? DesignCurrentFormulas.U_LINE : DesignCurrentFormulas.U_PHASE, three ? u : u0));
                 if (pf != null) {
-                    p = DesignCurrentFormulas.ACTIVE_FROM_APPARENT.eval(t, id + "/P", "", bind(DesignCurrentFormulas.S, s),
+                    p = DesignCurrentFormulas.ACTIVE_FROM_APPARENT.eval(t, id, "/P", "", bind(DesignCurrentFormulas.S, s),
                             bind(DesignCurrentFormulas.COS_PHI, pf));
                 }
             }
             if (pf != null) {
-                q = DesignCurrentFormulas.REACTIVE_FROM_ACTIVE.eval(t, id + "/Q", "", bind(DesignCurrentFormulas.P, p),
+                q = DesignCurrentFormulas.REACTIVE_FROM_ACTIVE.eval(t, id, "/Q", "", bind(DesignCurrentFormulas.P, p),
                         bind(DesignCurrentFormulas.COS_PHI, pf));
                 s = null;
             } else {
-                Given.note(t, id + "/pf-unknown", "Power factor not given",
+                if (t.recording()) Given.note(t, id + "/pf-unknown", "Power factor not given",
                         "The power factor is unknown: the voltage drop uses z (the impedance form) and the load's apparent power is added arithmetically to the board's demand, which overstates it.",
                         "BS 7671:2018 Appendix 4, 6.4");
             }
             if (c.designCurrentA() != null) {
                 Q derived = ib;
-                ib = Given.input(t, id + "/I_b_given", "Design current given by the designer", "I_b", c.designCurrentA(), Units.A,
-                        c.where().path() + ".design_current_a");
-                Given.decision(t, id + "/override", "Design current override",
+                ib = Given.input(t, id, "/I_b_given", "Design current given by the designer", "I_b", c.designCurrentA(), Units.A,
+                        c.where().path(), ".design_current_a");
+                if (t.recording()) Given.decision(t, id + "/override", "Design current override",
                         String.format(Locale.ROOT, "design_current_a is given; the derived value was %s A", trim(derived.value())),
                         "I_b = design_current_a is used for this circuit's checks; the board's demand uses the load's power",
                         "design input", derived.id(), ib.id());
@@ -332,7 +333,7 @@ public final class Engine {
                 load[best] += d.apparentKva();
                 demand.put(c.id(), withPhase(d, best + 1));
                 connection.put(c.id(), "L" + (best + 1));
-                Given.decision(t, c.id() + "/phase", "Phase (allocated)",
+                if (t.recording()) Given.decision(t, c.id() + "/phase", "Phase (allocated)",
                         "phase: auto; " + before + " (largest single-phase loads first, each to the least-loaded phase)",
                         "connected to L" + (best + 1), "common practice, no source");
             }
@@ -351,7 +352,7 @@ public final class Engine {
                     ? originTrace
                     : circuitTrace.get(feeder.id()).section(feeder.id() + "/ib", "Design current", "from the demand of board " + boardId);
             String id = boardId + "/demand";
-            Q d = Given.setting(t, id + "/d", "Diversity factor of board " + boardId, "d", board.diversity(), Units.NONE,
+            Q d = Given.setting(t, id, "/d", "Diversity factor of board " + boardId, "d", board.diversity(), Units.NONE,
                     "default: no diversity");
             Q[] p = new Q[3];
             Q[] q = new Q[3];
@@ -393,7 +394,7 @@ public final class Engine {
 
             boolean balanced = same(p) && same(q) && same(su);
             if (balanced) {
-                Given.decision(t, id + "/balanced", "Balance of the phases", "every load on the board is three-phase",
+                if (t.recording()) Given.decision(t, id + "/balanced", "Balance of the phases", "every load on the board is three-phase",
                         "the phases carry equal demand: I = √3 · S_k / U (the three-phase form)", "common practice");
             }
             List<Q> currents = new ArrayList<>();
@@ -428,12 +429,13 @@ public final class Engine {
                     pp[k] = p[k] != null ? p[k] : zero(t, id + "/P0n_L" + (k + 1), "P_L" + (k + 1), Units.KW);
                     qq[k] = q[k] != null ? q[k] : zero(t, id + "/Q0n_L" + (k + 1), "Q_L" + (k + 1), Units.KVAR);
                 }
-                neutral.put(boardId, DemandFormulas.NEUTRAL_CURRENT.eval(t, id + "/I_N", "phasor sum of the line currents",
-                        bind(DemandFormulas.P1, pp[0]), bind(DemandFormulas.P2, pp[1]), bind(DemandFormulas.P3, pp[2]),
-                        bind(DemandFormulas.Q1, qq[0]), bind(DemandFormulas.Q2, qq[1]), bind(DemandFormulas.Q3, qq[2]),
-                        bind(DemandFormulas.U0, u0)));
+                neutral.put(boardId,
+                        DemandFormulas.NEUTRAL_CURRENT.eval(t, id, "/I_N", "phasor sum of the line currents",
+                                bind(DemandFormulas.P1, pp[0]), bind(DemandFormulas.P2, pp[1]), bind(DemandFormulas.P3, pp[2]),
+                                bind(DemandFormulas.Q1, qq[0]), bind(DemandFormulas.Q2, qq[1]), bind(DemandFormulas.Q3, qq[2]),
+                                bind(DemandFormulas.U0, u0)));
             } else {
-                Given.note(t, id + "/I_N", "Neutral current", "Not determined: some loads on this board have no power factor, so their phase angle is unknown.", "");
+                if (t.recording()) Given.note(t, id + "/I_N", "Neutral current", "Not determined: some loads on this board have no power factor, so their phase angle is unknown.", "");
             }
             if (feeder != null) {
                 Var i1 = new Var("I1", "I_L1", Units.A);
@@ -442,15 +444,15 @@ public final class Engine {
                 Formula most = new Formula("ib-most-loaded-phase", "Design current", "I_b", Units.A,
                         Expr.max(Expr.v(i1), Expr.max(Expr.v(i2), Expr.v(i3))),
                         "A feeder's design current is that of its most loaded phase (IEC 60364-4-43:2008, 433.1)");
-                Q ib = most.eval(t, feeder.id() + "/ib/I_b", "feeder, most loaded phase",
-                        bind(i1, currents.get(0)), bind(i2, currents.get(1)), bind(i3, currents.get(2)));
+                Q ib = most.eval(t, feeder.id(), "/ib/I_b", "feeder, most loaded phase", bind(i1, currents.get(0)),
+                        bind(i2, currents.get(1)), bind(i3, currents.get(2)));
                 int worst = 0;
                 for (int k = 1; k < 3; k++) if (currents.get(k).value() > currents.get(worst).value()) worst = k;
                 if (feeder.designCurrentA() != null) {
                     Q derived = ib;
-                    ib = Given.input(t, feeder.id() + "/ib/I_b_given", "Design current given by the designer", "I_b",
-                            feeder.designCurrentA(), Units.A, feeder.where().path() + ".design_current_a");
-                    Given.decision(t, feeder.id() + "/ib/override", "Design current override",
+                    ib = Given.input(t, feeder.id(), "/ib/I_b_given", "Design current given by the designer", "I_b",
+                            feeder.designCurrentA(), Units.A, feeder.where().path(), ".design_current_a");
+                    if (t.recording()) Given.decision(t, feeder.id() + "/ib/override", "Design current override",
                             String.format(Locale.ROOT, "design_current_a is given; the derived value was %s A", trim(derived.value())),
                             "I_b = design_current_a is used for this feeder's checks; upstream demand uses the board's power",
                             "design input", derived.id(), ib.id());
@@ -476,7 +478,7 @@ public final class Engine {
         }
 
         Q relabel(Q q, String symbol) {
-            return new Q(q.id(), symbol, q.value(), q.unit());
+            return q.as(symbol);
         }
 
         Q phaseSum(Trace t, String id, String title, String symbol, String unit, Q d, List<Q> terms, List<Boolean> third) {
@@ -608,11 +610,11 @@ public final class Engine {
 
             Trace dt = ct.recording() ? ct.section(id + "/dev", "Protective device", describeDevice(c.device())) : ct;
             Q in = c.device().ratingA() != null
-                    ? Given.input(dt, id + "/dev/I_n", "Rated current of the device", "I_n", c.device().ratingA(), Units.A,
-                    c.where().path() + ".device.rating_a")
+                    ? Given.input(dt, id, "/dev/I_n", "Rated current of the device", "I_n", c.device().ratingA(), Units.A, c.where().path(),
+                            ".device.rating_a")
                     : Given.lookupUsing(dt, capacityData.ratingAtLeast(id + "/dev/I_n", c.device().kind(), ib.value()), List.of(ib.id()));
             Q k2 = Given.lookup(dt, capacityData.k2(id + "/dev/k2", c.device().kind()));
-            Q i2 = CapacityFormulas.CONVENTIONAL_TRIPPING.eval(dt, id + "/dev/I_2", "", bind(CapacityFormulas.K2, k2),
+            Q i2 = CapacityFormulas.CONVENTIONAL_TRIPPING.eval(dt, id, "/dev/I_2", "", bind(CapacityFormulas.K2, k2),
                     bind(CapacityFormulas.I_N, in));
 
             Trace kt = ct.recording() ? ct.section(id + "/cap", "Current-carrying capacity", describeConditions(c)) : ct;
@@ -621,7 +623,7 @@ public final class Engine {
             List<CheckResult> checks = new ArrayList<>();
             Q demand = cap.neutralDesign() != null ? cap.neutralDesign() : ib;
             checks.add(capacityCheck(kt, id + "/cap/check", demand, in, cap.iz()));
-            Q limit145 = CapacityFormulas.OVERLOAD_LIMIT.eval(kt, id + "/cap/1.45Iz", "", bind(CapacityFormulas.I_Z, cap.iz()));
+            Q limit145 = CapacityFormulas.OVERLOAD_LIMIT.eval(kt, id, "/cap/1.45Iz", "", bind(CapacityFormulas.I_Z, cap.iz()));
             checks.add(check(kt, id + "/cap/overload", "overload", "Overload: I_2 ≤ 1.45 · I_z", relabel(i2, "I_2"), limit145,
                     "IEC 60364-4-43:2008, 433.1"));
 
@@ -631,46 +633,46 @@ public final class Engine {
 
             Trace vt = ct.section(id + "/vd", "Voltage drop", phases == 3 ? "three-phase, referred to U" : "single-phase, referred to U_0");
             String vid = id + "/vd";
-            Q length = Given.input(vt, vid + "/L", "Route length", "L", c.lengthM(), Units.M, c.where().path() + ".length_m");
+            Q length = Given.input(vt, vid, "/L", "Route length", "L", c.lengthM(), Units.M, c.where().path(), ".length_m");
             Q un = Given.alias(phases == 3 ? u.id() : u0.id(), "U_n", phases == 3 ? u : u0);
             Q dropV;
             Q sin = null;
             if (pf != null) {
-                sin = VoltageDropFormulas.SIN_FROM_COS.eval(vt, vid + "/sin_phi", "", bind(VoltageDropFormulas.COS_PHI, pf));
-                dropV = VoltageDropFormulas.APPROXIMATE.eval(vt, vid + "/dU", "power factor known",
-                        bind(VoltageDropFormulas.R, z.r()), bind(VoltageDropFormulas.X, z.x()), bind(VoltageDropFormulas.COS_PHI, pf),
-                        bind(VoltageDropFormulas.SIN_PHI, sin), bind(VoltageDropFormulas.I, ib), bind(VoltageDropFormulas.L, length));
+                sin = VoltageDropFormulas.SIN_FROM_COS.eval(vt, vid, "/sin_phi", "", bind(VoltageDropFormulas.COS_PHI, pf));
+                dropV = VoltageDropFormulas.APPROXIMATE.eval(vt, vid, "/dU", "power factor known", bind(VoltageDropFormulas.R, z.r()),
+                        bind(VoltageDropFormulas.X, z.x()), bind(VoltageDropFormulas.COS_PHI, pf), bind(VoltageDropFormulas.SIN_PHI, sin),
+                        bind(VoltageDropFormulas.I, ib), bind(VoltageDropFormulas.L, length));
             } else {
-                dropV = VoltageDropFormulas.UNKNOWN_POWER_FACTOR.eval(vt, vid + "/dU", "power factor unknown",
+                dropV = VoltageDropFormulas.UNKNOWN_POWER_FACTOR.eval(vt, vid, "/dU", "power factor unknown",
                         bind(VoltageDropFormulas.Z, z.z()), bind(VoltageDropFormulas.I, ib), bind(VoltageDropFormulas.L, length));
             }
-            Q dropPct = VoltageDropFormulas.PERCENT_OF_NOMINAL.eval(vt, vid + "/dU_pct", "",
-                    bind(VoltageDropFormulas.DU, dropV), bind(VoltageDropFormulas.U_N, un));
+            Q dropPct = VoltageDropFormulas.PERCENT_OF_NOMINAL.eval(vt, vid, "/dU_pct", "", bind(VoltageDropFormulas.DU, dropV),
+                    bind(VoltageDropFormulas.U_N, un));
             Q dropExactPct = null;
             double quadrature = pf == null ? 0
                     : ib.value() * length.value() * (z.x().value() * pf.value() - z.r().value() * sin.value()) / 1000;
             boolean exactSolvable = pf != null && Math.abs(quadrature) < un.value();
             if (pf != null && !exactSolvable) {
-                Given.decision(vt, vid + "/exact-none", "Voltage drop, exact phasor form",
+                if (vt.recording()) Given.decision(vt, vid + "/exact-none", "Voltage drop, exact phasor form",
                         "the quadrature drop I_b·L·(x·cos φ − r·sin φ) exceeds U_n",
                         "the exact form has no solution: the cable cannot deliver I_b over this length", "circuit theory", dropPct.id());
             }
             if (exactSolvable) {
-                Q dropExact = VoltageDropFormulas.EXACT.as("ΔU_exact").eval(vt, vid + "/dU_exact", "phasor form",
+                Q dropExact = VoltageDropFormulas.EXACT.as("ΔU_exact").eval(vt, vid, "/dU_exact", "phasor form",
                         bind(VoltageDropFormulas.U_N, un), bind(VoltageDropFormulas.R, z.r()), bind(VoltageDropFormulas.X, z.x()),
-                        bind(VoltageDropFormulas.COS_PHI, pf), bind(VoltageDropFormulas.SIN_PHI, sin),
-                        bind(VoltageDropFormulas.I, ib), bind(VoltageDropFormulas.L, length));
-                dropExactPct = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.as("ΔU_exact").eval(vt, vid + "/dU_exact_pct", "exact form",
+                        bind(VoltageDropFormulas.COS_PHI, pf), bind(VoltageDropFormulas.SIN_PHI, sin), bind(VoltageDropFormulas.I, ib),
+                        bind(VoltageDropFormulas.L, length));
+                dropExactPct = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.as("ΔU_exact").eval(vt, vid, "/dU_exact_pct", "exact form",
                         bind(VoltageDropFormulas.DU, relabel(dropExact, "ΔU")), bind(VoltageDropFormulas.U_N, un)), "ΔU_exact");
             }
             boolean exactGoverns = inst.basis().voltageDropMethod().value() == DropMethod.EXACT && dropExactPct != null;
             if (inst.basis().voltageDropMethod().value() == DropMethod.EXACT) {
-                Given.decision(vt, vid + "/method", "Voltage-drop form checked", "basis.voltage_drop_method = exact"
+                if (vt.recording()) Given.decision(vt, vid + "/method", "Voltage-drop form checked", "basis.voltage_drop_method = exact"
                                 + (dropExactPct == null ? ", but the exact form is not available" : ""),
                         dropExactPct == null ? "the approximate form governs" : "the exact phasor form governs",
                         "design input", (dropExactPct == null ? dropPct : dropExactPct).id());
             } else {
-                Given.decision(vt, vid + "/method", "Voltage-drop form checked",
+                if (vt.recording()) Given.decision(vt, vid + "/method", "Voltage-drop form checked",
                         "basis.voltage_drop_method = approximate" + (inst.basis().voltageDropMethod().given() ? "" : " (default)"),
                         "the approximate form governs" + (dropExactPct != null ? "; the exact form is shown for comparison" : ""),
                         "IEC 60364-5-52:2009, Annex G", dropPct.id());
@@ -703,7 +705,7 @@ public final class Engine {
             Q limit = null;
             Q dip = null;
             if (c.isFeeder()) {
-                Given.note(vt, vid + "/board", "Cumulative drop at board " + c.to(),
+                if (vt.recording()) Given.note(vt, vid + "/board", "Cumulative drop at board " + c.to(),
                         "Checked against the limit at the terminals of each load supplied from " + c.to() + ".", "");
             } else {
                 limit = limit(vt, c);
@@ -712,12 +714,13 @@ public final class Engine {
                 if (c.load().kind() == LoadKind.MOTOR && c.load().startingCurrentMultiple() != null) {
                     Trace st = ct.section(id + "/st", "Motor starting", "voltage dip at the motor terminals while it starts");
                     dip = starting(st, c, z, ib, length, un, done);
-                    Q stLimit = Given.setting(st, id + "/st/limit", "Limit of the starting dip", "ΔU_st,max",
-                            inst.basis().motorStartingLimitPercent(), Units.PERCENT, "default of this program (common practice, no source)");
+                    Q stLimit = Given.setting(st, id, "/st/limit", "Limit of the starting dip", "ΔU_st,max",
+                            inst.basis().motorStartingLimitPercent(), Units.PERCENT,
+                            "default of this program (common practice, no source)");
                     checks.add(check(st, id + "/st/check", "motor-starting", "Voltage dip while the motor starts", dip, stLimit,
                             "common practice, no source"));
                 } else if (c.load().kind() == LoadKind.MOTOR) {
-                    Given.note(vt, id + "/st/none", "Motor starting",
+                    if (vt.recording()) Given.note(vt, id + "/st/none", "Motor starting",
                             "No starting_current_multiple is given: the starting dip is not checked.", "");
                 }
             }
@@ -768,7 +771,7 @@ public final class Engine {
             Cable cable = c.cable();
             Method method = c.conditions().method();
             int loaded = phases == 3 ? 3 : 2;
-            Given.decision(t, id + "/loaded", "Loaded conductors", phases == 3 ? "three-phase circuit (neutral current not counted)"
+            if (t.recording()) Given.decision(t, id + "/loaded", "Loaded conductors", phases == 3 ? "three-phase circuit (neutral current not counted)"
                     : "single-phase circuit: line and neutral", loaded + " loaded conductors", "IEC 60364-5-52:2009, 523.6");
             Q it = Given.lookup(t, capacityData.tabulated(id + "/I_t", cable.insulation(), cable.conductor(), method, loaded,
                     cable.type(), cable.formation(), cable.size().mm2()));
@@ -776,22 +779,22 @@ public final class Engine {
             boolean ground = method == Method.D1 || method == Method.D2;
             Setting<Double> amb = c.conditions().ambientC().given() ? c.conditions().ambientC()
                     : (ground ? inst.basis().ambientGroundC() : inst.basis().ambientAirC());
-            Q thetaA = Given.setting(t, id + "/theta_a", ground ? "Ground temperature" : "Ambient air temperature", "θ_a", amb,
-                    Units.DEG_C, ground ? "IEC 60364-5-52:2009, reference ground temperature 20 °C" : "IEC 60364-5-52:2009, reference ambient 30 °C");
+            Q thetaA = Given.setting(t, id, "/theta_a", ground ? "Ground temperature" : "Ambient air temperature", "θ_a", amb, Units.DEG_C,
+                    ground ? "IEC 60364-5-52:2009, reference ground temperature 20 °C" : "IEC 60364-5-52:2009, reference ambient 30 °C");
             factors.add(Given.lookupUsing(t, ground ? capacityData.ambientGround(id + "/C_a", cable.insulation(), amb.value())
                     : capacityData.ambientAir(id + "/C_a", cable.insulation(), amb.value()), List.of(thetaA.id())));
             int n = c.conditions().groupedCircuits();
             if (n > 1) {
                 factors.add(Given.lookup(t, capacityData.grouping(id + "/C_g", method, c.conditions().groupArrangement(), n)));
             } else {
-                Given.decision(t, id + "/C_g", "Grouping", "grouped_circuits = 1" + (c.conditions().groupedCircuits() == 1 ? " (alone)" : ""),
+                if (t.recording()) Given.decision(t, id + "/C_g", "Grouping", "grouped_circuits = 1" + (c.conditions().groupedCircuits() == 1 ? " (alone)" : ""),
                         "no grouping factor", "IEC 60364-5-52:2009, Table B.52.17");
             }
             if (c.conditions().thermalInsulationMm() > 0) {
                 factors.add(Given.lookup(t, capacityData.thermalInsulation(id + "/C_i", c.conditions().thermalInsulationMm())));
             }
             if (ground) {
-                Q rho = Given.setting(t, id + "/rho", "Soil thermal resistivity", "ρ_T", c.conditions().soilResistivityKmW(), "K·m/W",
+                Q rho = Given.setting(t, id, "/rho", "Soil thermal resistivity", "ρ_T", c.conditions().soilResistivityKmW(), "K·m/W",
                         "IEC 60364-5-52:2009, reference 2.5 K·m/W");
                 factors.add(Given.lookupUsing(t, capacityData.soil(id + "/C_s", method, rho.value()), List.of(rho.id())));
             }
@@ -802,25 +805,25 @@ public final class Engine {
                 CapacityData.Harmonic band = capacityData.harmonic(id + "/C_h", h);
                 factors.add(Given.lookup(t, band.factor()));
                 if (band.neutralBasis()) {
-                    Q hq = Given.input(t, id + "/h", "Third-harmonic content", "h", h, Units.PERCENT,
-                            c.where().path() + ".installation.third_harmonic_percent");
-                    neutralDesign = CapacityFormulas.NEUTRAL_FROM_HARMONICS.eval(t, id + "/I_N", "size by the neutral current",
+                    Q hq = Given.input(t, id, "/h", "Third-harmonic content", "h", h, Units.PERCENT, c.where().path(),
+                            ".installation.third_harmonic_percent");
+                    neutralDesign = CapacityFormulas.NEUTRAL_FROM_HARMONICS.eval(t, id, "/I_N", "size by the neutral current",
                             bind(CapacityFormulas.H, hq), bind(CapacityFormulas.I_B, ib));
                 }
             } else if (h != null && h > 0) {
-                Given.note(t, id + "/C_h", "Third-harmonic currents", "The harmonic reduction of IEC 60364-5-52 Annex E applies to four- and five-core cables of three-phase circuits only; not applied here.",
+                if (t.recording()) Given.note(t, id + "/C_h", "Third-harmonic currents", "The harmonic reduction of IEC 60364-5-52 Annex E applies to four- and five-core cables of three-phase circuits only; not applied here.",
                         "IEC 60364-5-52:2009, Annex E");
             }
             Q product = termFormulas.eval(t, id + "/C", "", "correction-product", "C", "c", Units.NONE, factors,
                     CapacityFormulas::correctionProduct);
             Q iz;
             if (cable.parallel() > 1) {
-                Q np = Given.derived(t, id + "/n", "Conductors in parallel per phase", "n", cable.parallel(), Units.NONE,
+                Q np = Given.derived(t, id, "/n", "Conductors in parallel per phase", "n", cable.parallel(), Units.NONE,
                         "design input (cable.parallel)");
-                iz = CapacityFormulas.CAPACITY_PARALLEL.eval(t, id + "/I_z", "", bind(CapacityFormulas.N, np),
+                iz = CapacityFormulas.CAPACITY_PARALLEL.eval(t, id, "/I_z", "", bind(CapacityFormulas.N, np),
                         bind(CapacityFormulas.I_T, it), bind(CapacityFormulas.C, product));
             } else {
-                iz = CapacityFormulas.CAPACITY.eval(t, id + "/I_z", "", bind(CapacityFormulas.I_T, it), bind(CapacityFormulas.C, product));
+                iz = CapacityFormulas.CAPACITY.eval(t, id, "/I_z", "", bind(CapacityFormulas.I_T, it), bind(CapacityFormulas.C, product));
             }
             return new Capacity(it, product, iz, neutralDesign);
         }
@@ -850,7 +853,7 @@ public final class Engine {
                 String because = setting.value() == ConductorTemperature.MAXIMUM
                         ? "basis.conductor_temperature = maximum" + (setting.given() ? "" : " (default)")
                         : "basis.conductor_temperature = estimated, but I_b ≥ I_z";
-                Given.decision(t, id + "/theta", "Conductor temperature for the voltage drop", because,
+                if (t.recording()) Given.decision(t, id + "/theta", "Conductor temperature for the voltage drop", because,
                         "θ = θ_max of " + c.cable().insulation().token().toUpperCase(Locale.ROOT) + " = " + trim(thetaMax.value()) + " °C",
                         "IEC 60364-5-52:2009, Table 52.1", thetaMax.id());
                 return relabel(thetaMax, "θ");
@@ -858,11 +861,11 @@ public final class Engine {
             boolean ground = c.conditions().method() == Method.D1 || c.conditions().method() == Method.D2;
             Setting<Double> amb = c.conditions().ambientC().given() ? c.conditions().ambientC()
                     : (ground ? inst.basis().ambientGroundC() : inst.basis().ambientAirC());
-            Q thetaA = Given.setting(t, id + "/theta_a", ground ? "Ground temperature" : "Ambient air temperature", "θ_a",
-                    amb, Units.DEG_C, "IEC 60364-5-52:2009, reference ambient");
-            return ImpedanceFormulas.ESTIMATED_TEMPERATURE.eval(t, id + "/theta", "estimated",
-                    bind(ImpedanceFormulas.THETA_A, thetaA), bind(ImpedanceFormulas.THETA_MAX, relabel(thetaMax, "θ_max")),
-                    bind(ImpedanceFormulas.I_B, ib), bind(ImpedanceFormulas.I_REF, relabel(iz, "I_z")));
+            Q thetaA = Given.setting(t, id, "/theta_a", ground ? "Ground temperature" : "Ambient air temperature", "θ_a", amb, Units.DEG_C,
+                    "IEC 60364-5-52:2009, reference ambient");
+            return ImpedanceFormulas.ESTIMATED_TEMPERATURE.eval(t, id, "/theta", "estimated", bind(ImpedanceFormulas.THETA_A, thetaA),
+                    bind(ImpedanceFormulas.THETA_MAX, relabel(thetaMax, "θ_max")), bind(ImpedanceFormulas.I_B, ib),
+                    bind(ImpedanceFormulas.I_REF, relabel(iz, "I_z")));
         }
 
         Q cumulative(Trace t, Circuit c, Q own, Map<String, CircuitResult> done) {
@@ -898,17 +901,17 @@ public final class Engine {
 
         Q starting(Trace t, Circuit c, ImpedanceResult z, Q ib, Q length, Q un, Map<String, CircuitResult> done) {
             String id = c.id() + "/st";
-            Q k = Given.input(t, id + "/k_st", "Starting current multiple", "k_st", c.load().startingCurrentMultiple(), Units.NONE,
-                    c.where().path() + ".load.starting_current_multiple");
-            Q ist = DesignCurrentFormulas.STARTING_CURRENT.eval(t, id + "/I_st", "",
-                    bind(DesignCurrentFormulas.K_ST, k), bind(DesignCurrentFormulas.I_B, ib));
-            Q cosSt = Given.setting(t, id + "/cos_phi_st", "Power factor while starting", "cos φ_st",
-                    c.load().startingPowerFactor(), Units.NONE, "default of this program: 0.3 (common practice, no source)");
-            Q sinSt = VoltageDropFormulas.SIN_FROM_COS_STARTING.eval(t, id + "/sin_phi_st", "", bind(VoltageDropFormulas.COS_ST, cosSt));
-            Q du = VoltageDropFormulas.MOTOR_STARTING.eval(t, id + "/dU", "",
-                    bind(VoltageDropFormulas.R, z.r()), bind(VoltageDropFormulas.X, z.x()), bind(VoltageDropFormulas.COS_ST, cosSt),
-                    bind(VoltageDropFormulas.SIN_ST, sinSt), bind(VoltageDropFormulas.I_ST, ist), bind(VoltageDropFormulas.L, length));
-            Q own = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.as("ΔU_st").eval(t, id + "/dU_pct", "",
+            Q k = Given.input(t, id, "/k_st", "Starting current multiple", "k_st", c.load().startingCurrentMultiple(), Units.NONE,
+                    c.where().path(), ".load.starting_current_multiple");
+            Q ist = DesignCurrentFormulas.STARTING_CURRENT.eval(t, id, "/I_st", "", bind(DesignCurrentFormulas.K_ST, k),
+                    bind(DesignCurrentFormulas.I_B, ib));
+            Q cosSt = Given.setting(t, id, "/cos_phi_st", "Power factor while starting", "cos φ_st", c.load().startingPowerFactor(),
+                    Units.NONE, "default of this program: 0.3 (common practice, no source)");
+            Q sinSt = VoltageDropFormulas.SIN_FROM_COS_STARTING.eval(t, id, "/sin_phi_st", "", bind(VoltageDropFormulas.COS_ST, cosSt));
+            Q du = VoltageDropFormulas.MOTOR_STARTING.eval(t, id, "/dU", "", bind(VoltageDropFormulas.R, z.r()),
+                    bind(VoltageDropFormulas.X, z.x()), bind(VoltageDropFormulas.COS_ST, cosSt), bind(VoltageDropFormulas.SIN_ST, sinSt),
+                    bind(VoltageDropFormulas.I_ST, ist), bind(VoltageDropFormulas.L, length));
+            Q own = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.as("ΔU_st").eval(t, id, "/dU_pct", "",
                     bind(VoltageDropFormulas.DU, relabel(du, "ΔU")), bind(VoltageDropFormulas.U_N, un)), "ΔU_st(" + c.id() + ")");
             List<Q> terms = new ArrayList<>();
             int phases = c.load().phases();

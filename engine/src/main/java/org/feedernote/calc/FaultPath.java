@@ -49,7 +49,7 @@ final class FaultPath {
                         List<CheckResult> boardChecks) {}
 
     private static Q rel(Q q, String symbol) {
-        return new Q(q.id(), symbol, q.value(), q.unit());
+        return q.as(symbol);
     }
 
     private Q series(Trace t, String id, String title, String symbol, Q... terms) {
@@ -86,23 +86,23 @@ final class FaultPath {
             Q uk = Given.input(t, id + "/uk", "Transformer short-circuit impedance", "u_k", tr.impedancePercent(), Units.PERCENT,
                     "supply.source.transformer.impedance_percent");
             Q sr = Given.input(t, id + "/S_rT", "Transformer rating", "S_rT", tr.ratingKva(), Units.KVA, "supply.source.transformer.rating_kva");
-            Q xr = Given.setting(t, id + "/xr", "X/R of the transformer", "X/R", new Setting<>(tr.xrRatio() == null ? 5.0 : tr.xrRatio(),
+            Q xr = Given.setting(t, id, "/xr", "X/R of the transformer", "X/R", new Setting<>(tr.xrRatio() == null ? 5.0 : tr.xrRatio(),
                     tr.xrRatio() != null, "supply.source.transformer.x_r_ratio"), Units.NONE, "assumption of this program: 5 (common practice, no source)");
-            Q z = TRANSFORMER_IMPEDANCE.eval(t, id + "/Z_T", "", bind(UK, uk), bind(U, u), bind(SR, sr));
-            r = RESISTANCE_FROM_XR.as("R_T").eval(t, id + "/R_T", "", bind(Z, z), bind(XR, xr));
-            x = REACTANCE_FROM_XR.as("X_T").eval(t, id + "/X_T", "", bind(R, r), bind(XR, xr));
-            Given.decision(t, id + "/loop", "Loop impedance of the source", "a transformer at the origin (upstream network taken as infinite; Dyn vector group, Z_0 ≈ Z_1)",
+            Q z = TRANSFORMER_IMPEDANCE.eval(t, id, "/Z_T", "", bind(UK, uk), bind(U, u), bind(SR, sr));
+            r = RESISTANCE_FROM_XR.as("R_T").eval(t, id, "/R_T", "", bind(Z, z), bind(XR, xr));
+            x = REACTANCE_FROM_XR.as("X_T").eval(t, id, "/X_T", "", bind(R, r), bind(XR, xr));
+            if (t.recording()) Given.decision(t, id + "/loop", "Loop impedance of the source", "a transformer at the origin (upstream network taken as infinite; Dyn vector group, Z_0 ≈ Z_1)",
                     "the line-neutral and line-earth loops at the origin have the impedance Z_T", "IEC 60909-0:2016, 6.3", z.id());
             ze = rel(z, "Z_e");
         } else {
             Supply.Utility ut = (Supply.Utility) src;
-            Q xr = Given.setting(t, id + "/xr", "X/R of the network", "X/R", new Setting<>(ut.xrRatio() == null ? 1.0 : ut.xrRatio(),
+            Q xr = Given.setting(t, id, "/xr", "X/R of the network", "X/R", new Setting<>(ut.xrRatio() == null ? 1.0 : ut.xrRatio(),
                     ut.xrRatio() != null, "supply.source.utility.x_r_ratio"), Units.NONE, "assumption of this program: 1 (common practice, no source)");
             Q zq;
             if (ut.faultLevelKa() != null) {
                 Q ik = Given.input(t, id + "/Ik", "Prospective fault current at the origin", "I_k", ut.faultLevelKa(), Units.KA,
                         "supply.source.utility.fault_level_ka");
-                zq = NETWORK_IMPEDANCE.eval(t, id + "/Z_Q", "", bind(C_MAX, cmax), bind(U, u), bind(IK, ik));
+                zq = NETWORK_IMPEDANCE.eval(t, id, "/Z_Q", "", bind(C_MAX, cmax), bind(U, u), bind(IK, ik));
             } else {
                 zq = null;
             }
@@ -110,28 +110,31 @@ final class FaultPath {
                 ze = Given.input(t, id + "/Ze", "External earth-fault loop impedance", "Z_e", ut.loopImpedanceOhm(), Units.OHM,
                         "supply.source.utility.loop_impedance_ohm");
             } else {
-                ze = DOUBLE.eval(t, id + "/Ze", "no loop impedance given", bind(Z, zq));
+                ze = DOUBLE.eval(t, id, "/Ze", "no loop impedance given", bind(Z, zq));
             }
-            if (zq == null) zq = HALF.as("Z_Q").eval(t, id + "/Z_Q", "no fault level given", bind(ZE, ze));
-            r = RESISTANCE_FROM_XR.as("R_Q").eval(t, id + "/R_Q", "", bind(Z, zq), bind(XR, xr));
-            x = REACTANCE_FROM_XR.as("X_Q").eval(t, id + "/X_Q", "", bind(R, r), bind(XR, xr));
+            if (zq == null) zq = HALF.as("Z_Q").eval(t, id, "/Z_Q", "no fault level given", bind(ZE, ze));
+            r = RESISTANCE_FROM_XR.as("R_Q").eval(t, id, "/R_Q", "", bind(Z, zq), bind(XR, xr));
+            x = REACTANCE_FROM_XR.as("X_Q").eval(t, id, "/X_Q", "", bind(R, r), bind(XR, xr));
         }
         Q rN = r;
         Q xN = x;
         if (!(src instanceof Supply.Transformer)) {
-            Q zqLoop = DOUBLE.as("Z_QN").eval(t, id + "/Z_QN", "line-neutral loop of the network", bind(Z, rel(magnitude(t, id + "/ZQ_mag", "Z_Q", r, x), "Z")));
+            Q zqLoop = DOUBLE.as("Z_QN").eval(t, id, "/Z_QN", "line-neutral loop of the network",
+                    bind(Z, rel(magnitude(t, id + "/ZQ_mag", "Z_Q", r, x), "Z")));
             Q xr = rel(new Q(id + "/xr", "X/R", x.value() / r.value(), Units.NONE), "X/R");
-            rN = RESISTANCE_FROM_XR.as("R_QN").eval(t, id + "/R_QN", "", bind(Z, rel(zqLoop, "Z")), bind(XR, xr));
-            xN = REACTANCE_FROM_XR.as("X_QN").eval(t, id + "/X_QN", "", bind(R, rN), bind(XR, xr));
+            rN = RESISTANCE_FROM_XR.as("R_QN").eval(t, id, "/R_QN", "", bind(Z, rel(zqLoop, "Z")), bind(XR, xr));
+            xN = REACTANCE_FROM_XR.as("X_QN").eval(t, id, "/X_QN", "", bind(R, rN), bind(XR, xr));
         }
         return atBoard(t, id, board, r, x, rN, xN, ze, ze);
     }
 
     private BoardFault atBoard(Trace t, String id, String board, Q r3, Q x3, Q rN, Q xN, Q ze, Q zeF) {
         Q z3 = magnitude(t, id + "/Z3", "|Z_3|", rel(r3, "R"), rel(x3, "X"));
-        Q ik3 = THREE_PHASE_FAULT.as("I_k3(" + board + ")").eval(t, id + "/Ik3", "at board " + board, bind(C_MAX, cmax), bind(U, u), bind(Z, rel(z3, "Z")));
+        Q ik3 = THREE_PHASE_FAULT.as("I_k3(" + board + ")").eval(t, id, "/Ik3", "at board " + board, bind(C_MAX, cmax), bind(U, u),
+                bind(Z, rel(z3, "Z")));
         Q zn = magnitude(t, id + "/ZN", "|Z_N|", rel(rN, "R"), rel(xN, "X"));
-        Q ik1 = SINGLE_PHASE_FAULT.as("I_k1(" + board + ")").eval(t, id + "/Ik1", "at board " + board, bind(C_MAX, cmax), bind(U0, u0), bind(Z, rel(zn, "Z")));
+        Q ik1 = SINGLE_PHASE_FAULT.as("I_k1(" + board + ")").eval(t, id, "/Ik1", "at board " + board, bind(C_MAX, cmax), bind(U0, u0),
+                bind(Z, rel(zn, "Z")));
         return new BoardFault(r3, x3, rN, xN, rel(ze, "Z_e(" + board + ")"), rel(zeF, "Z_ef(" + board + ")"), ik3, ik1);
     }
 
@@ -153,23 +156,30 @@ final class FaultPath {
     CircuitFault circuit(Trace t, Circuit c, ImpedanceResult z, BoardFault at, Q length, Q in, int phases, Q thetaMax) {
         String id = c.id() + "/fault";
         Cable cable = c.cable();
-        Q n = Given.derived(t, id + "/n", "Conductors in parallel per phase", "n", cable.parallel(), Units.NONE, "design input (cable.parallel)");
+        Q n = Given.derived(t, id, "/n", "Conductors in parallel per phase", "n", cable.parallel(), Units.NONE,
+                "design input (cable.parallel)");
         Q r20 = rel(z.r20(), "R_20");
         Q alpha = rel(z.alpha(), "α_20");
         Q r1km20 = r20;
-        Q r1_20 = LENGTH_RESISTANCE.as("R_1,20").eval(t, id + "/R1_20", "line conductor at 20 °C", bind(R_KM, rel(r1km20, "R")), bind(L, length), bind(N, n));
-        Q x1 = LENGTH_REACTANCE.as("X_1").eval(t, id + "/X1", "line conductor", bind(X_KM, rel(z.reactance(), "X")), bind(L, length));
-        Q xLoop = LOOP_REACTANCE.as("X_loop").eval(t, id + "/Xloop", "line and protective conductor", bind(X_KM, rel(z.reactance(), "X")), bind(L, length));
+        Q r1_20 = LENGTH_RESISTANCE.as("R_1,20").eval(t, id, "/R1_20", "line conductor at 20 °C", bind(R_KM, rel(r1km20, "R")),
+                bind(L, length), bind(N, n));
+        Q x1 = LENGTH_REACTANCE.as("X_1").eval(t, id, "/X1", "line conductor", bind(X_KM, rel(z.reactance(), "X")), bind(L, length));
+        Q xLoop = LOOP_REACTANCE.as("X_loop").eval(t, id, "/Xloop", "line and protective conductor", bind(X_KM, rel(z.reactance(), "X")),
+                bind(L, length));
         Q thetaF = Given.lookup(t, faults.finalTemperature(id + "/theta_f", cable.insulation()));
         Q cpc20 = Given.lookup(t, data.resistance20(id + "/R20_cpc", cable.conductor(), cable.cpc().mm2()));
-        Q r1kmMax = RESISTANCE_AT.as("R_1′").eval(t, id + "/R1km_max", "line, at θ_max", bind(R20, r20), bind(ALPHA, alpha), bind(THETA, rel(thetaMax, "θ")));
-        Q r2kmMax = RESISTANCE_AT.as("R_2′").eval(t, id + "/R2km_max", "cpc, at θ_max", bind(R20, rel(cpc20, "R_20")), bind(ALPHA, alpha), bind(THETA, rel(thetaMax, "θ")));
-        Q r1 = LENGTH_RESISTANCE.as("R_1").eval(t, id + "/R1", "at θ_max", bind(R_KM, rel(r1kmMax, "R")), bind(L, length), bind(N, n));
-        Q r2 = LENGTH_RESISTANCE.as("R_2").eval(t, id + "/R2", "at θ_max", bind(R_KM, rel(r2kmMax, "R")), bind(L, length), bind(N, n));
-        Q r1kmF = RESISTANCE_AT.as("R_1f′").eval(t, id + "/R1km_f", "line, at θ_f", bind(R20, r20), bind(ALPHA, alpha), bind(THETA, rel(thetaF, "θ")));
-        Q r2kmF = RESISTANCE_AT.as("R_2f′").eval(t, id + "/R2km_f", "cpc, at θ_f", bind(R20, rel(cpc20, "R_20")), bind(ALPHA, alpha), bind(THETA, rel(thetaF, "θ")));
-        Q r1f = LENGTH_RESISTANCE.as("R_1f").eval(t, id + "/R1f", "at θ_f", bind(R_KM, rel(r1kmF, "R")), bind(L, length), bind(N, n));
-        Q r2f = LENGTH_RESISTANCE.as("R_2f").eval(t, id + "/R2f", "at θ_f", bind(R_KM, rel(r2kmF, "R")), bind(L, length), bind(N, n));
+        Q r1kmMax = RESISTANCE_AT.as("R_1′").eval(t, id, "/R1km_max", "line, at θ_max", bind(R20, r20), bind(ALPHA, alpha),
+                bind(THETA, rel(thetaMax, "θ")));
+        Q r2kmMax = RESISTANCE_AT.as("R_2′").eval(t, id, "/R2km_max", "cpc, at θ_max", bind(R20, rel(cpc20, "R_20")), bind(ALPHA, alpha),
+                bind(THETA, rel(thetaMax, "θ")));
+        Q r1 = LENGTH_RESISTANCE.as("R_1").eval(t, id, "/R1", "at θ_max", bind(R_KM, rel(r1kmMax, "R")), bind(L, length), bind(N, n));
+        Q r2 = LENGTH_RESISTANCE.as("R_2").eval(t, id, "/R2", "at θ_max", bind(R_KM, rel(r2kmMax, "R")), bind(L, length), bind(N, n));
+        Q r1kmF = RESISTANCE_AT.as("R_1f′").eval(t, id, "/R1km_f", "line, at θ_f", bind(R20, r20), bind(ALPHA, alpha),
+                bind(THETA, rel(thetaF, "θ")));
+        Q r2kmF = RESISTANCE_AT.as("R_2f′").eval(t, id, "/R2km_f", "cpc, at θ_f", bind(R20, rel(cpc20, "R_20")), bind(ALPHA, alpha),
+                bind(THETA, rel(thetaF, "θ")));
+        Q r1f = LENGTH_RESISTANCE.as("R_1f").eval(t, id, "/R1f", "at θ_f", bind(R_KM, rel(r1kmF, "R")), bind(L, length), bind(N, n));
+        Q r2f = LENGTH_RESISTANCE.as("R_2f").eval(t, id, "/R2f", "at θ_f", bind(R_KM, rel(r2kmF, "R")), bind(L, length), bind(N, n));
 
         Q r12 = series(t, id + "/R12", "Resistance of the loop, at θ_max", "R_1 + R_2", r1, r2);
         Q zLoop = magnitude(t, id + "/Zloop", "Z_loop", rel(r12, "R"), rel(xLoop, "X"));
@@ -177,7 +187,7 @@ final class FaultPath {
         Q r12f = series(t, id + "/R12f", "Resistance of the loop, at θ_f", "R_1f + R_2f", r1f, r2f);
         Q zLoopF = magnitude(t, id + "/Zloopf", "Z_loop,f", rel(r12f, "R"), rel(xLoop, "X"));
         Q zsf = loop(t, id + "/Zsf", "Earth-fault loop impedance at the far end, at θ_f", "Z_sf", rel(at.zeF(), "Z_ef"), zLoopF);
-        Q ief = MIN_EARTH_FAULT.as("I_ef,min").eval(t, id + "/Ief", "far end", bind(C_MIN, cmin), bind(U0, u0), bind(ZS, rel(zsf, "Z_s")));
+        Q ief = MIN_EARTH_FAULT.as("I_ef,min").eval(t, id, "/Ief", "far end", bind(C_MIN, cmin), bind(U0, u0), bind(ZS, rel(zsf, "Z_s")));
 
         List<CheckResult> checks = new ArrayList<>();
         Disconnection d = disconnection(t, c, id, zs, in);
@@ -211,45 +221,48 @@ final class FaultPath {
         boolean socket = c.load() != null && c.load().kind() == LoadKind.SOCKET;
         boolean finalTime = !c.isFeeder() && (in.value() <= (socket ? 63 : 32) + 1e-9);
         Setting<Double> ts = finalTime ? b.disconnectionTimeFinalS() : b.disconnectionTimeDistributionS();
-        Given.decision(t, id + "/t-rule", "Required disconnection time",
+        if (t.recording()) Given.decision(t, id + "/t-rule", "Required disconnection time",
                 c.isFeeder() ? "a distribution circuit (feeder)" : (finalTime ? "a final circuit with I_n ≤ " + (socket ? "63 A (socket outlets)" : "32 A")
                         : "a final circuit with I_n > " + (socket ? "63 A" : "32 A")),
                 finalTime ? "the final-circuit time applies" : "the distribution-circuit time applies",
                 "IEC 60364-4-41:2005, 411.3.2.2 and 411.3.2.3", in.id());
-        Q time = Given.setting(t, id + "/t", "Maximum disconnection time", "t", ts, Units.S,
+        Q time = Given.setting(t, id, "/t", "Maximum disconnection time", "t", ts, Units.S,
                 finalTime ? "IEC 60364-4-41:2005, Table 41.1 (TN, 230 V: 0.4 s)" : "IEC 60364-4-41:2005, 411.3.2.3 (TN: 5 s)");
         String name = "disconnection";
         String title = "Automatic disconnection: Z_s ≤ Z_s,max";
         if (b.earthing().value() == Earthing.TT && dev.rcdResidualA() != null) {
             Q ra = Given.input(t, id + "/RA", "Earth electrode resistance", "R_A", b.earthElectrodeOhm(), Units.OHM, "basis.earth_electrode_resistance_ohm");
-            Q idn = Given.input(t, id + "/Idn", "Rated residual operating current", "I_Δn", dev.rcdResidualA(), Units.A, c.where().path() + ".device.residual_current_a");
-            Q ul = TOUCH_VOLTAGE.eval(t, id + "/UL", "TT system, RCD", bind(RA, ra), bind(IDN, idn));
-            Q limit = Given.derived(t, id + "/UL_max", "Conventional touch-voltage limit", "U_L,max", 50, Units.V, "IEC 60364-4-41:2005, 411.5.3");
+            Q idn = Given.input(t, id, "/Idn", "Rated residual operating current", "I_Δn", dev.rcdResidualA(), Units.A, c.where().path(),
+                    ".device.residual_current_a");
+            Q ul = TOUCH_VOLTAGE.eval(t, id, "/UL", "TT system, RCD", bind(RA, ra), bind(IDN, idn));
+            Q limit = Given.derived(t, id, "/UL_max", "Conventional touch-voltage limit", "U_L,max", 50, Units.V,
+                    "IEC 60364-4-41:2005, 411.5.3");
             boolean pass = ul.value() <= 50 + 1e-12;
             if (t.recording()) t.add(new Step.Check(id + "/check", "Fault protection by RCD: R_A · I_Δn ≤ 50 V", name, ul, "≤", limit, pass,
                     "IEC 60364-4-41:2005, 411.5.3", List.of(ul.id(), limit.id())));
-            Q ia = RCD_TRIP.eval(t, id + "/Ia", "RCD", bind(IDN, idn));
+            Q ia = RCD_TRIP.eval(t, id, "/Ia", "RCD", bind(IDN, idn));
             return new Disconnection(new CheckResult(name, "R_A · I_Δn ≤ 50 V", pass, ul.value(), 50, Units.V, false, id + "/check"), null, ia, time, true);
         }
         if (b.earthing().value() == Earthing.TT) {
-            Given.note(t, id + "/tt-ocpd", "TT system without an RCD", "Fault protection by the overcurrent device: Z_s · I_a ≤ U_0 (IEC 60364-4-41:2005, 411.5.4).", "");
+            if (t.recording()) Given.note(t, id + "/tt-ocpd", "TT system without an RCD", "Fault protection by the overcurrent device: Z_s · I_a ≤ U_0 (IEC 60364-4-41:2005, 411.5.4).", "");
         }
         Q ia = tripCurrent(t, c, id, in);
         if (ia == null) {
             String missing = dev.kind() == DeviceKind.MCCB ? "device.instantaneous_a (the MCCB's instantaneous setting)"
                     : "device.disconnection_current_a (the fuse's current for disconnection within " + NumberFormatPolicyLite.s(time.value()) + " s, from the manufacturer's curve)";
-            Given.decision(t, id + "/check", "Automatic disconnection", "the input does not give " + missing,
+            if (t.recording()) Given.decision(t, id + "/check", "Automatic disconnection", "the input does not give " + missing,
                     "FAIL: disconnection cannot be shown", "IEC 60364-4-41:2005, 411.4.4");
             return new Disconnection(CheckResult.undetermined(name, title, Units.OHM, id + "/check"), null, null, time, false);
         }
-        Q zmax = MAX_LOOP.eval(t, id + "/Zs_max", "", bind(C_MIN, cmin), bind(U0, u0), bind(IA, ia));
+        Q zmax = MAX_LOOP.eval(t, id, "/Zs_max", "", bind(C_MIN, cmin), bind(U0, u0), bind(IA, ia));
         boolean pass = zs.value() <= zmax.value() + 1e-12;
         if (t.recording()) t.add(new Step.Check(id + "/check1", title, name, rel(zs, "Z_s"), "≤", rel(zmax, "Z_s,max"), pass,
                 "IEC 60364-4-41:2005, 411.4.4", List.of(zs.id(), zmax.id())));
         if (!pass && dev.rcdResidualA() != null) {
-            Q idn = Given.input(t, id + "/Idn", "Rated residual operating current", "I_Δn", dev.rcdResidualA(), Units.A, c.where().path() + ".device.residual_current_a");
-            Q iaR = RCD_TRIP.eval(t, id + "/Ia_rcd", "the RCD part of the device", bind(IDN, idn));
-            Q zmaxR = MAX_LOOP.as("Z_s,max(RCD)").eval(t, id + "/Zs_max_rcd", "RCD", bind(C_MIN, cmin), bind(U0, u0), bind(IA, iaR));
+            Q idn = Given.input(t, id, "/Idn", "Rated residual operating current", "I_Δn", dev.rcdResidualA(), Units.A, c.where().path(),
+                    ".device.residual_current_a");
+            Q iaR = RCD_TRIP.eval(t, id, "/Ia_rcd", "the RCD part of the device", bind(IDN, idn));
+            Q zmaxR = MAX_LOOP.as("Z_s,max(RCD)").eval(t, id, "/Zs_max_rcd", "RCD", bind(C_MIN, cmin), bind(U0, u0), bind(IA, iaR));
             boolean passR = zs.value() <= zmaxR.value() + 1e-12;
             if (t.recording()) t.add(new Step.Check(id + "/check2", "Automatic disconnection by the RCD: Z_s ≤ Z_s,max(RCD)", name, rel(zs, "Z_s"), "≤",
                     zmaxR, passR, "IEC 60364-4-41:2005, 411.4.5", List.of(zs.id(), zmaxR.id())));
@@ -264,21 +277,22 @@ final class FaultPath {
     private Q tripCurrent(Trace t, Circuit c, String id, Q in) {
         Device dev = c.device();
         if (dev.disconnectionCurrentA() != null) {
-            return Given.input(t, id + "/Ia", "Current that operates the device within the time (manufacturer's curve)", "I_a",
-                    dev.disconnectionCurrentA(), Units.A, c.where().path() + ".device.disconnection_current_a");
+            return Given.input(t, id, "/Ia", "Current that operates the device within the time (manufacturer's curve)", "I_a",
+                    dev.disconnectionCurrentA(), Units.A, c.where().path(), ".device.disconnection_current_a");
         }
         switch (dev.kind()) {
             case MCB:
             case RCBO: {
                 double m = dev.curve() == Curve.B ? 5 : dev.curve() == Curve.C ? 10 : 20;
-                Q mq = Given.derived(t, id + "/m", "Instantaneous tripping multiple, type " + dev.curve().token(), "m", m, Units.NONE,
+                Q mq = Given.derived(t, id, "/m", "Instantaneous tripping multiple, type " + dev.curve().token(), "m", m, Units.NONE,
                         "IEC 60898-1:2015, Table 7 (upper limit: B 5 I_n, C 10 I_n, D 20 I_n), from memory");
-                return TRIP_MULTIPLE.eval(t, id + "/Ia", "type " + dev.curve().token(), bind(MULT, mq), bind(IN, in));
+                return TRIP_MULTIPLE.eval(t, id, "/Ia", "type " + dev.curve().token(), bind(MULT, mq), bind(IN, in));
             }
             case MCCB: {
                 if (dev.instantaneousA() == null) return null;
-                Q ii = Given.input(t, id + "/Ii", "Instantaneous trip setting", "I_i", dev.instantaneousA(), Units.A, c.where().path() + ".device.instantaneous_a");
-                return MCCB_TRIP.eval(t, id + "/Ia", "MCCB", bind(I_INST, ii));
+                Q ii = Given.input(t, id, "/Ii", "Instantaneous trip setting", "I_i", dev.instantaneousA(), Units.A, c.where().path(),
+                        ".device.instantaneous_a");
+                return MCCB_TRIP.eval(t, id, "/Ia", "MCCB", bind(I_INST, ii));
             }
             default:
                 return null;
@@ -290,39 +304,40 @@ final class FaultPath {
         Cable cable = c.cable();
         Device dev = c.device();
         Q current = currentA != null ? currentA
-                : rel(A_FROM_KA.eval(t, id + "/I", "", bind(IK_KA, prospectiveKa)), "I_k");
+                : rel(A_FROM_KA.eval(t, id, "/I", "", bind(IK_KA, prospectiveKa)), "I_k");
         Q i2t;
         if (dev.letThroughA2s() != null) {
-            i2t = Given.input(t, id + "/I2t", "Let-through energy of the device", "I²t", dev.letThroughA2s(), "A²s", c.where().path() + ".device.let_through_a2s");
+            i2t = Given.input(t, id, "/I2t", "Let-through energy of the device", "I²t", dev.letThroughA2s(), "A²s", c.where().path(),
+                    ".device.let_through_a2s");
         } else {
             boolean instantaneous = d.ia() != null && current.value() >= d.ia().value() - 1e-9;
             Step.Lookup class3 = (dev.kind() == DeviceKind.MCB || dev.kind() == DeviceKind.RCBO) && instantaneous
                     ? faults.classThreeLetThrough(id + "/I2t", dev.curve(), in.value(), current.value() / 1000) : null;
             if (class3 != null) {
                 i2t = Given.lookupUsing(t, class3, List.of(current.id()));
-                Given.note(t, id + "/class3", "Energy-limiting class", "The circuit-breaker is taken as energy-limiting class 3, the usual class of modern MCBs; confirm with the manufacturer.", "");
+                if (t.recording()) Given.note(t, id + "/class3", "Energy-limiting class", "The circuit-breaker is taken as energy-limiting class 3, the usual class of modern MCBs; confirm with the manufacturer.", "");
             } else if (dev.kind() == DeviceKind.FUSE && !protective) {
-                Given.decision(t, id + "/check", title, "the input gives no let_through_a2s for the fuse",
+                if (t.recording()) Given.decision(t, id + "/check", title, "the input gives no let_through_a2s for the fuse",
                         "FAIL: the let-through energy cannot be shown (give device.let_through_a2s from the manufacturer's data)", "IEC 60364-4-43:2008, 434.5.2");
                 return CheckResult.undetermined(name, title, Units.MM2, id + "/check");
             } else if (d.ia() == null) {
-                Given.decision(t, id + "/check", title, "the operating current of the device is not known", "FAIL: cannot be shown", "IEC 60364-4-43:2008, 434.5.2");
+                if (t.recording()) Given.decision(t, id + "/check", title, "the operating current of the device is not known", "FAIL: cannot be shown", "IEC 60364-4-43:2008, 434.5.2");
                 return CheckResult.undetermined(name, title, Units.MM2, id + "/check");
             } else {
                 Q time = instantaneous
-                        ? Given.derived(t, id + "/t", "Operating time", "t", 0.1, Units.S, T_INSTANT)
+                        ? Given.derived(t, id, "/t", "Operating time", "t", 0.1, Units.S, T_INSTANT)
                         : Given.alias(d.time().id(), "t", d.time());
                 if (!instantaneous) {
-                    Given.decision(t, id + "/t-basis", "Operating time", "I = " + NumberFormatPolicyLite.a(current.value()) + " A is below I_a = "
+                    if (t.recording()) Given.decision(t, id + "/t-basis", "Operating time", "I = " + NumberFormatPolicyLite.a(current.value()) + " A is below I_a = "
                             + NumberFormatPolicyLite.a(d.ia().value()) + " A", "the device is taken to operate within the required time t", "IEC 60364-4-43:2008, 434.5.2");
                 }
-                i2t = ENERGY.eval(t, id + "/I2t", instantaneous ? "instantaneous region" : "within the required time",
+                i2t = ENERGY.eval(t, id, "/I2t", instantaneous ? "instantaneous region" : "within the required time",
                         bind(I, rel(current, "I")), bind(T, time));
             }
         }
         Q k = kFactor(t, id, cable, thetaMax, protective);
-        Q smin = MIN_SIZE.as(protective ? "S_PE,min" : "S_min").eval(t, id + "/Smin", "", bind(I2T, rel(i2t, "I²t")), bind(KF, k));
-        Q installed = Given.derived(t, id + "/S", protective ? "Protective conductor installed" : "Line conductor installed",
+        Q smin = MIN_SIZE.as(protective ? "S_PE,min" : "S_min").eval(t, id, "/Smin", "", bind(I2T, rel(i2t, "I²t")), bind(KF, k));
+        Q installed = Given.derived(t, id, "/S", protective ? "Protective conductor installed" : "Line conductor installed",
                 protective ? "S_PE" : "S", size * cable.parallel(), Units.MM2,
                 "design input" + (cable.parallel() > 1 ? " (" + cable.parallel() + " conductors in parallel share the fault current)" : ""));
         boolean pass = installed.value() >= smin.value() - 1e-12;
@@ -338,25 +353,25 @@ final class FaultPath {
         Q thetaI;
         if (protective && cable.type() == CableType.SINGLE_CORE) {
             thetaI = Given.lookup(t, faults.separateInitialTemperature(id + "/theta_i", cable.insulation()));
-            Given.decision(t, id + "/cpc-kind", "Kind of protective conductor", "single-core cables: the protective conductor is a separate insulated conductor",
+            if (t.recording()) Given.decision(t, id + "/cpc-kind", "Kind of protective conductor", "single-core cables: the protective conductor is a separate insulated conductor",
                     "initial temperature 30 °C (Table A.54.2)", "IEC 60364-5-54:2011, Table A.54.2", thetaI.id());
         } else {
             thetaI = rel(thetaMax, "θ_i");
-            Given.decision(t, id + "/theta-i", "Initial conductor temperature", protective ? "the protective conductor is a core of the cable or in its sheath"
+            if (t.recording()) Given.decision(t, id + "/theta-i", "Initial conductor temperature", protective ? "the protective conductor is a core of the cable or in its sheath"
                     : "the line conductor starts at its maximum operating temperature", "θ_i = θ_max", "IEC 60364-5-54:2011, Tables A.54.3 and A.54.4", thetaMax.id());
         }
-        return K_FACTOR.eval(t, id + "/k", "", bind(K, kc), bind(BETA, beta), bind(THETA_F, thetaF), bind(THETA_I, thetaI));
+        return K_FACTOR.eval(t, id, "/k", "", bind(K, kc), bind(BETA, beta), bind(THETA_F, thetaF), bind(THETA_I, thetaI));
     }
 
     private CheckResult breaking(Trace t, Circuit c, String id, Q prospective) {
         String title = "Breaking capacity ≥ prospective fault current";
         if (c.device().breakingCapacityKa() == null) {
-            Given.decision(t, id + "/check", title, "the input gives no breaking_capacity_ka for the device",
+            if (t.recording()) Given.decision(t, id + "/check", title, "the input gives no breaking_capacity_ka for the device",
                     "FAIL: the device cannot be shown to break " + NumberFormatPolicyLite.ka(prospective.value()) + " kA", "IEC 60364-4-43:2008, 434.5.1");
             return CheckResult.undetermined("breaking-capacity", title, Units.KA, id + "/check");
         }
-        Q icu = Given.input(t, id + "/Icu", "Rated breaking capacity of the device", "I_cu", c.device().breakingCapacityKa(), Units.KA,
-                c.where().path() + ".device.breaking_capacity_ka");
+        Q icu = Given.input(t, id, "/Icu", "Rated breaking capacity of the device", "I_cu", c.device().breakingCapacityKa(), Units.KA,
+                c.where().path(), ".device.breaking_capacity_ka");
         boolean pass = icu.value() >= prospective.value() - 1e-12;
         if (t.recording()) t.add(new Step.Check(id + "/check", title, "breaking-capacity", icu, "≥", prospective, pass,
                 "IEC 60364-4-43:2008, 434.5.1", List.of(icu.id(), prospective.id())));

@@ -7,7 +7,12 @@ import org.feedernote.trace.Q;
 import org.feedernote.trace.Step;
 import org.feedernote.trace.Trace;
 
-/** Records the values a calculation starts from: inputs, defaults, lookups, decisions, notes. */
+/**
+ * Records the values a calculation starts from: inputs, defaults, lookups, decisions, notes.
+ * Decisions and notes record nothing with the no-op trace; the calculation calls them under
+ * {@code if (t.recording())} all the same, so that their texts are not even written for the
+ * hundreds of thousands of candidates the sizing evaluates.
+ */
 final class Given {
     private Given() {}
 
@@ -34,6 +39,26 @@ final class Given {
         return s.q();
     }
 
+    /** As {@link #input(Trace, String, String, String, double, String, String)} for the step owner + step, key path pathOwner + pathStep. */
+    static Q input(Trace t, String owner, String step, String title, String symbol, double value, String unit, String pathOwner,
+                   String pathStep) {
+        if (!t.recording()) return new Q(owner, step, symbol, value, unit);
+        return input(t, owner + step, title, symbol, value, unit, pathOwner + pathStep);
+    }
+
+    /** As {@link #setting(Trace, String, String, String, Setting, String, String)} for the step owner + step. */
+    static Q setting(Trace t, String owner, String step, String title, String symbol, Setting<Double> setting, String unit,
+                     String defaultReference) {
+        if (!t.recording()) return new Q(owner, step, symbol, setting.value(), unit);
+        return setting(t, owner + step, title, symbol, setting, unit, defaultReference);
+    }
+
+    /** As {@link #derived(Trace, String, String, String, double, String, String)} for the step owner + step. */
+    static Q derived(Trace t, String owner, String step, String title, String symbol, double value, String unit, String reference) {
+        if (!t.recording()) return new Q(owner, step, symbol, value, unit);
+        return derived(t, owner + step, title, symbol, value, unit, reference);
+    }
+
     static Q lookup(Trace t, Step.Lookup step) {
         t.add(step);
         return step.q();
@@ -56,7 +81,7 @@ final class Given {
     }
 
     static Q alias(String id, String symbol, Q q) {
-        return new Q(q.id(), symbol, q.value(), q.unit());
+        return q.as(symbol);
     }
 
 }

@@ -37,39 +37,38 @@ final class ImpedanceCalc {
         double size = cable.size().mm2();
         Q r20 = Given.lookup(t, data.resistance20(id + "/R20", cable.conductor(), size));
         Q alpha = Given.lookup(t, data.alpha20(id + "/alpha20", cable.conductor()));
-        Q rTheta = RESISTANCE_AT_TEMPERATURE.eval(t, id + "/R_theta", "",
-                bind(R20, r20), bind(ALPHA, alpha), bind(THETA, theta));
+        Q rTheta = RESISTANCE_AT_TEMPERATURE.eval(t, id, "/R_theta", "", bind(R20, r20), bind(ALPHA, alpha), bind(THETA, theta));
 
-        Q area = Given.derived(t, id + "/S", "Nominal cross-section", "S", size, Units.MM2, "design input (cable.size_mm2)");
-        Q dc = CONDUCTOR_DIAMETER.eval(t, id + "/dc", "", bind(S_AREA, area));
+        Q area = Given.derived(t, id, "/S", "Nominal cross-section", "S", size, Units.MM2, "design input (cable.size_mm2)");
+        Q dc = CONDUCTOR_DIAMETER.eval(t, id, "/dc", "", bind(S_AREA, area));
         Q ti = Given.lookup(t, data.insulationThickness(id + "/t_i", cable.insulation(), size));
         Q spacing;
         Q gmd;
         if (cable.type() == CableType.MULTICORE && cable.formation() != null) {
-            Given.note(t, id + "/formation", "Formation", "formation: " + cable.formation().token()
+            if (t.recording()) Given.note(t, id + "/formation", "Formation", "formation: " + cable.formation().token()
                     + " is given, but it applies to single-core cables; this multicore cable's geometry is that of its cores.", "");
         }
         if (cable.type() == CableType.SINGLE_CORE && cable.cores() > 0) {
-            Given.note(t, id + "/cores", "Cores", "cores: " + cable.cores() + " is given, but it applies to multicore cables; ignored for single-core cables.", "");
+            if (t.recording()) Given.note(t, id + "/cores", "Cores", "cores: " + cable.cores() + " is given, but it applies to multicore cables; ignored for single-core cables.", "");
         }
         if (cable.type() == CableType.MULTICORE) {
-            spacing = CORE_SPACING.eval(t, id + "/s", "cores of a multicore cable", bind(DC, dc), bind(T_I, ti));
+            spacing = CORE_SPACING.eval(t, id, "/s", "cores of a multicore cable", bind(DC, dc), bind(T_I, ti));
             gmd = Given.alias(spacing.id(), "s_g", spacing);
-            Given.decision(t, id + "/gmd", "Geometric mean distance", "multicore cable: the cores sit at the corners of a triangle",
+            if (t.recording()) Given.decision(t, id + "/gmd", "Geometric mean distance", "multicore cable: the cores sit at the corners of a triangle",
                     "s_g = s", "common practice", spacing.id());
         } else {
-            Q du = DIAMETER_UNDER_SHEATH.eval(t, id + "/D_u", "", bind(DC, dc), bind(T_I, ti));
-            Q ts = SHEATH_THICKNESS.eval(t, id + "/t_s", "", bind(D_U, du));
-            Q de = CABLE_DIAMETER.eval(t, id + "/D_e", "", bind(D_U, du), bind(T_S, ts));
+            Q du = DIAMETER_UNDER_SHEATH.eval(t, id, "/D_u", "", bind(DC, dc), bind(T_I, ti));
+            Q ts = SHEATH_THICKNESS.eval(t, id, "/t_s", "", bind(D_U, du));
+            Q de = CABLE_DIAMETER.eval(t, id, "/D_e", "", bind(D_U, du), bind(T_S, ts));
             Formation formation = cable.formation();
             spacing = formation == Formation.FLAT_SPACED
-                    ? SPACING_SPACED.eval(t, id + "/s", "flat spaced", bind(D_E, de))
-                    : SPACING_TOUCHING.eval(t, id + "/s", formation == Formation.TREFOIL ? "trefoil" : "flat touching", bind(D_E, de));
+                    ? SPACING_SPACED.eval(t, id, "/s", "flat spaced", bind(D_E, de))
+                    : SPACING_TOUCHING.eval(t, id, "/s", formation == Formation.TREFOIL ? "trefoil" : "flat touching", bind(D_E, de));
             if (phases == 3 && formation != Formation.TREFOIL) {
-                gmd = GMD_FLAT.eval(t, id + "/s_g", "flat formation, outer phases 2s apart", bind(S_AXIS, spacing));
+                gmd = GMD_FLAT.eval(t, id, "/s_g", "flat formation, outer phases 2s apart", bind(S_AXIS, spacing));
             } else {
                 gmd = Given.alias(spacing.id(), "s_g", spacing);
-                Given.decision(t, id + "/gmd", "Geometric mean distance",
+                if (t.recording()) Given.decision(t, id + "/gmd", "Geometric mean distance",
                         phases == 3 ? "trefoil: the three cables are equally spaced" : "single-phase: two conductors",
                         "s_g = s", "common practice", spacing.id());
             }
@@ -79,30 +78,30 @@ final class ImpedanceCalc {
         if (size >= AC_EFFECT_FROM_MM2) {
             Q ks = Given.lookup(t, data.skinCoefficient(id + "/k_s", cable.conductor()));
             Q kp = Given.lookup(t, data.proximityCoefficient(id + "/k_p", cable.conductor()));
-            Q xs2 = SKIN_ARGUMENT.eval(t, id + "/xs2", "", bind(F, frequency), bind(K_S, ks), bind(R_THETA, rTheta));
-            Q ys = SKIN_FACTOR.eval(t, id + "/ys", "", bind(XS2, xs2));
-            Q xp2 = PROXIMITY_ARGUMENT.eval(t, id + "/xp2", "", bind(F, frequency), bind(K_P, kp), bind(R_THETA, rTheta));
-            Q fp = PROXIMITY_BASE.eval(t, id + "/Fp", "", bind(XP2, xp2));
-            Q yp = PROXIMITY_FACTOR.eval(t, id + "/yp", "", bind(FP, fp), bind(DC, dc), bind(S_AXIS, spacing));
-            rAc = AC_RESISTANCE.eval(t, id + "/R_ac", "", bind(R_THETA, rTheta), bind(YS, ys), bind(YP, yp));
+            Q xs2 = SKIN_ARGUMENT.eval(t, id, "/xs2", "", bind(F, frequency), bind(K_S, ks), bind(R_THETA, rTheta));
+            Q ys = SKIN_FACTOR.eval(t, id, "/ys", "", bind(XS2, xs2));
+            Q xp2 = PROXIMITY_ARGUMENT.eval(t, id, "/xp2", "", bind(F, frequency), bind(K_P, kp), bind(R_THETA, rTheta));
+            Q fp = PROXIMITY_BASE.eval(t, id, "/Fp", "", bind(XP2, xp2));
+            Q yp = PROXIMITY_FACTOR.eval(t, id, "/yp", "", bind(FP, fp), bind(DC, dc), bind(S_AXIS, spacing));
+            rAc = AC_RESISTANCE.eval(t, id, "/R_ac", "", bind(R_THETA, rTheta), bind(YS, ys), bind(YP, yp));
         } else {
             rAc = Given.alias(rTheta.id(), "R_ac", rTheta);
-            Given.decision(t, id + "/ac", "Skin and proximity effect",
+            if (t.recording()) Given.decision(t, id + "/ac", "Skin and proximity effect",
                     String.format(Locale.ROOT, "S = %s mm² < %s mm²: y_s + y_p stays below 0.2 %%", ReferenceData.sizeKey(size),
                             ReferenceData.sizeKey(AC_EFFECT_FROM_MM2)),
                     "neglected: R_ac = R_θ", "IEC 60287-1-1:2006, 2.1.2 and 2.1.4 (evaluated; negligible)", rTheta.id());
         }
 
-        Q inductance = INDUCTANCE_AT.eval(t, id + "/L", "", bind(S_G, gmd), bind(DC, dc));
-        Q xPer = REACTANCE.eval(t, id + "/X1", "", bind(F, frequency), bind(L_IND, inductance));
+        Q inductance = INDUCTANCE_AT.eval(t, id, "/L", "", bind(S_G, gmd), bind(DC, dc));
+        Q xPer = REACTANCE.eval(t, id, "/X1", "", bind(F, frequency), bind(L_IND, inductance));
 
         Q resistance;
         Q reactance;
         if (cable.parallel() > 1) {
-            Q n = Given.derived(t, id + "/n", "Conductors in parallel per phase", "n", cable.parallel(), Units.NONE,
+            Q n = Given.derived(t, id, "/n", "Conductors in parallel per phase", "n", cable.parallel(), Units.NONE,
                     "design input (cable.parallel)");
-            resistance = PARALLEL_RESISTANCE.eval(t, id + "/R", "", bind(R_AC, rAc), bind(N_PAR, n));
-            reactance = PARALLEL_REACTANCE.eval(t, id + "/X", "", bind(X, xPer), bind(N_PAR, n));
+            resistance = PARALLEL_RESISTANCE.eval(t, id, "/R", "", bind(R_AC, rAc), bind(N_PAR, n));
+            reactance = PARALLEL_REACTANCE.eval(t, id, "/X", "", bind(X, xPer), bind(N_PAR, n));
         } else {
             resistance = Given.alias(rAc.id(), "R", rAc);
             reactance = Given.alias(xPer.id(), "X", xPer);

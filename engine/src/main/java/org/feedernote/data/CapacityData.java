@@ -159,8 +159,14 @@ public final class CapacityData {
         return new Harmonic(s, "neutral".equals(t.text(band, "basis")));
     }
 
+    private final java.util.Map<DeviceKind, TableRef> deviceRefs = new java.util.concurrent.ConcurrentHashMap<>();
+
     /** The row of the devices table, with its own standard as the citation. */
     private TableRef deviceRef(DeviceKind kind) {
+        return deviceRefs.computeIfAbsent(kind, this::deviceRefOf);
+    }
+
+    private TableRef deviceRefOf(DeviceKind kind) {
         ReferenceTable t = data.table("devices.csv");
         String k = kind.token();
         return new TableRef("devices-" + k, "Conventional tripping current and standard ratings, " + k,

@@ -59,18 +59,21 @@ public final class Evaluator {
             this.root = root;
         }
 
-        /** @param values the value of each variable, in the order the tree was compiled with */
-        public double evaluate(double[] values, String stepId) {
-            double result = root.value(values, stepId);
+        /**
+         * @param values the value of each variable, in the order the tree was compiled with
+         * @param owner  with step, the id of the step evaluated (joined only for a message)
+         */
+        public double evaluate(double[] values, String owner, String step) {
+            double result = root.value(values, owner, step);
             if (!Double.isFinite(result)) {
-                throw new EvaluationException(stepId, "the result is not a finite number (" + result + ")");
+                throw new EvaluationException(owner + step, "the result is not a finite number (" + result + ")");
             }
             return result;
         }
     }
 
     private abstract static class Node {
-        abstract double value(double[] values, String stepId);
+        abstract double value(double[] values, String owner, String step);
     }
 
     private static Node node(Expr e, java.util.List<Var> vars) {
@@ -79,10 +82,10 @@ public final class Evaluator {
             Node right = node(bin.right(), vars);
             Op op = bin.op();
             return new Node() {
-                @Override double value(double[] values, String stepId) {
-                    double a = left.value(values, stepId);
-                    double b = right.value(values, stepId);
-                    if (op == Op.DIV && b == 0.0) throw new EvaluationException(stepId, "division by zero");
+                @Override double value(double[] values, String owner, String step) {
+                    double a = left.value(values, owner, step);
+                    double b = right.value(values, owner, step);
+                    if (op == Op.DIV && b == 0.0) throw new EvaluationException(owner + step, "division by zero");
                     return op.apply(a, b);
                 }
             };
@@ -93,22 +96,22 @@ public final class Evaluator {
             if (slot < 0) throw new IllegalArgumentException(ref.var().symbol() + " is not among the variables given");
             int index = slot;
             return new Node() {
-                @Override double value(double[] values, String stepId) { return values[index]; }
+                @Override double value(double[] values, String owner, String step) { return values[index]; }
             };
         }
         if (e instanceof Expr.Num num) {
             double v = num.value();
             return new Node() {
-                @Override double value(double[] values, String stepId) { return v; }
+                @Override double value(double[] values, String owner, String step) { return v; }
             };
         }
         if (!(e instanceof Expr.Call call)) throw new IllegalStateException("no evaluation for " + e);
         Node arg = node(call.arg(), vars);
         Fn fn = call.fn();
         return new Node() {
-            @Override double value(double[] values, String stepId) {
-                double x = arg.value(values, stepId);
-                checkArgument(fn, x, stepId);
+            @Override double value(double[] values, String owner, String step) {
+                double x = arg.value(values, owner, step);
+                if (fn == Fn.SQRT && x < 0 || fn == Fn.LN && x <= 0) checkArgument(fn, x, owner + step);
                 return fn.apply(x);
             }
         };

@@ -110,24 +110,34 @@ public final class Formula {
      * @param form why this form of the formula applies (shown on the step's heading), or ""
      */
     public Q eval(Trace trace, String stepId, String form, Step.Binding... bindings) {
+        return eval(trace, stepId, "", form, bindings);
+    }
+
+    /**
+     * As {@link #eval(Trace, String, String, Step.Binding...)} for the step owner + step (a
+     * circuit's id and the step's own part, "C-12" and "/vd/dU"): the two are joined only where
+     * the id is read, never for the no-op trace of a sizing candidate.
+     */
+    public Q eval(Trace trace, String owner, String step, String form, Step.Binding... bindings) {
         for (Step.Binding b : bindings) {
             if (!b.var().unit().equals(b.q().unit())) {
-                throw new IllegalStateException(stepId + ": " + b.var().symbol() + " must be in '" + b.var().unit()
+                throw new IllegalStateException(owner + step + ": " + b.var().symbol() + " must be in '" + b.var().unit()
                         + "' but " + b.q().id() + " is in '" + b.q().unit() + "'");
             }
         }
         double[] values = new double[vars.size()];
         for (int i = 0; i < values.length; i++) {
             Step.Binding b = find(bindings, vars.get(i));
-            if (b == null) throw new IllegalStateException(stepId + ": formula " + id + " needs " + vars.get(i).symbol() + " bound");
+            if (b == null) throw new IllegalStateException(owner + step + ": formula " + id + " needs " + vars.get(i).symbol() + " bound");
             values[i] = b.q().value();
         }
-        double value = compiled.evaluate(values, stepId);
+        double value = compiled.evaluate(values, owner, step);
+        Q q = new Q(owner, step, symbol, value, unit);
         if (trace.recording()) {
             List<Step.Binding> used = new ArrayList<>();
             for (Step.Binding b : bindings) if (vars.contains(b.var())) used.add(b);
-            trace.add(new Step.Formula(stepId, title, symbol, unit, id, expr, List.copyOf(used), value, form, reference));
+            trace.add(new Step.Formula(q.id(), title, symbol, unit, id, expr, List.copyOf(used), value, form, reference));
         }
-        return new Q(stepId, symbol, value, unit);
+        return q;
     }
 }
