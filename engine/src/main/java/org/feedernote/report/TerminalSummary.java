@@ -18,33 +18,16 @@ public final class TerminalSummary {
     public static String render(Result result, String fileName) {
         List<String[]> rows = new ArrayList<>();
         rows.add(new String[] {"circuit", "from", "to/load", "Ib A", "size mm²", "ΔU own %", "ΔU total %", "limit %", "verdict", "governing / failing"});
-        for (CircuitResult c : result.circuits()) {
-            String to = c.circuit().isFeeder() ? "→ " + c.circuit().to() : c.circuit().load().kind().token() + " " + c.connection();
-            String size = (c.circuit().cable().parallel() > 1 ? c.circuit().cable().parallel() + "×" : "")
-                    + ReferenceData.sizeKey(c.circuit().cable().size().mm2());
-            String failing = c.failing().stream().map(CheckResult::name).collect(Collectors.joining(", "));
-            rows.add(new String[] {c.id(), c.circuit().from(), to,
-                    NumberFormatPolicy.number(c.designCurrent().value(), Units.A), size,
-                    NumberFormatPolicy.number(c.dropPercent().value(), Units.PERCENT),
-                    NumberFormatPolicy.number(c.cumulativePercent().value(), Units.PERCENT),
-                    c.limitPercent() == null ? "—" : NumberFormatPolicy.number(c.limitPercent().value(), Units.PERCENT),
-                    c.pass() ? "PASS" : "FAIL ×",
-                    c.pass() ? c.governingCheck() : failing});
-        }
+        // Rows are independent: made side by side (the numbers' formatting is most of the time for large installations).
+        rows.addAll(result.circuits().parallelStream().map(TerminalSummary::row).toList());
         int[] width = new int[rows.get(0).length];
         for (String[] r : rows) for (int i = 0; i < r.length; i++) width[i] = Math.max(width[i], r[i].length());
         StringBuilder b = new StringBuilder();
         b.append(fileName).append(" — ").append(result.input().project().title()).append('\n');
-        for (int j = 0; j < rows.size(); j++) {
-            String[] r = rows.get(j);
-            StringBuilder line = new StringBuilder();
-            for (int i = 0; i < r.length; i++) {
-                boolean numeric = i >= 3 && i <= 7;
-                String cell = numeric ? pad(r[i], width[i], true) : pad(r[i], width[i], false);
-                line.append(cell).append(i + 1 < r.length ? "  " : "");
-            }
-            b.append(line.toString().stripTrailing()).append('\n');
-            if (j == 0) b.append("-".repeat(line.toString().stripTrailing().length())).append('\n');
+        List<String> lines = rows.parallelStream().map(r -> line(r, width)).toList();
+        for (int j = 0; j < lines.size(); j++) {
+            b.append(lines.get(j)).append('\n');
+            if (j == 0) b.append("-".repeat(lines.get(0).length())).append('\n');
         }
         int failing = result.failingChecks();
         long failingCircuits = result.circuits().stream().filter(c -> !c.pass()).count();
@@ -72,6 +55,29 @@ public final class TerminalSummary {
              .append(". The design is not shown to conform until these are verified.\n");
         }
         return b.toString();
+    }
+
+    private static String[] row(CircuitResult c) {
+        String to = c.circuit().isFeeder() ? "→ " + c.circuit().to() : c.circuit().load().kind().token() + " " + c.connection();
+        String size = (c.circuit().cable().parallel() > 1 ? c.circuit().cable().parallel() + "×" : "")
+                + ReferenceData.sizeKey(c.circuit().cable().size().mm2());
+        String failing = c.failing().stream().map(CheckResult::name).collect(Collectors.joining(", "));
+        return new String[] {c.id(), c.circuit().from(), to,
+                NumberFormatPolicy.number(c.designCurrent().value(), Units.A), size,
+                NumberFormatPolicy.number(c.dropPercent().value(), Units.PERCENT),
+                NumberFormatPolicy.number(c.cumulativePercent().value(), Units.PERCENT),
+                c.limitPercent() == null ? "—" : NumberFormatPolicy.number(c.limitPercent().value(), Units.PERCENT),
+                c.pass() ? "PASS" : "FAIL ×",
+                c.pass() ? c.governingCheck() : failing};
+    }
+
+    private static String line(String[] r, int[] width) {
+        StringBuilder line = new StringBuilder();
+        for (int i = 0; i < r.length; i++) {
+            boolean numeric = i >= 3 && i <= 7;
+            line.append(pad(r[i], width[i], numeric)).append(i + 1 < r.length ? "  " : "");
+        }
+        return line.toString().stripTrailing();
     }
 
     private static String pad(String s, int w, boolean right) {
