@@ -70,18 +70,33 @@ public final class Engine {
 
     /**
      * One evaluation with the no-op trace: the circuit's sizes, the results of the feeders above it
-     * it was calculated with, and its result. A circuit's result depends on nothing else (design
-     * currents and the supply are fixed before sizing starts), so an evaluation of an equal circuit
-     * under the same feeder results gives the same result: the sizing returns to sizes it has tried
-     * (a step undone, the chosen size after a smaller one failed) and the final pass of check
-     * repeats the sizing's last evaluations.
+     * it was calculated with, its result and its own figures. A circuit's result depends on nothing
+     * else (design currents and the supply are fixed before sizing starts), so an evaluation of an
+     * equal circuit under the same feeder results gives the same result: the sizing returns to
+     * sizes it has tried (a step undone, the chosen size after a smaller one failed) and the final
+     * pass of check repeats the sizing's last evaluations. Under other feeder results the own
+     * figures still hold, and only the rest is calculated.
      */
-    private record Evaluated(Circuit circuit, CircuitResult[] upstream, CircuitResult result, Evaluated older) {
+    private record Evaluated(Circuit circuit, CircuitResult[] upstream, CircuitResult result, Run.OwnFigures own, Evaluated older) {
         static CircuitResult find(Evaluated e, Circuit c, CircuitResult[] upstream) {
             for (; e != null; e = e.older) {
-                if (sameResults(e.upstream, upstream) && (e.circuit == c || e.circuit.equals(c))) return e.result;
+                if (sameResults(e.upstream, upstream) && same(e.circuit, c)) return e.result;
             }
             return null;
+        }
+
+        /**
+         * The own figures of an evaluation of an equal circuit, under any feeder results: they do
+         * not depend on the circuits upstream (a motor recalculated after a feeder grew, a final
+         * circuit in the final pass).
+         */
+        static Run.OwnFigures ownFigures(Evaluated e, Circuit c) {
+            for (; e != null; e = e.older) if (same(e.circuit, c)) return e.own;
+            return null;
+        }
+
+        private static boolean same(Circuit a, Circuit b) {
+            return a == b || a.equals(b);
         }
 
         private static boolean sameResults(CircuitResult[] a, CircuitResult[] b) {
@@ -93,9 +108,9 @@ public final class Engine {
         /** This and at most n - 1 older evaluations. */
         Evaluated keep(int n) {
             if (older == null) return this;
-            if (n <= 1) return new Evaluated(circuit, upstream, result, null);
+            if (n <= 1) return new Evaluated(circuit, upstream, result, own, null);
             Evaluated rest = older.keep(n - 1);
-            return rest == older ? this : new Evaluated(circuit, upstream, result, rest);
+            return rest == older ? this : new Evaluated(circuit, upstream, result, own, rest);
         }
     }
 
@@ -575,10 +590,13 @@ public final class Engine {
                 Circuit[] path = feederPath(c.from());
                 CircuitResult[] upstream = new CircuitResult[path.length];
                 for (int i = 0; i < path.length; i++) upstream[i] = done.get(path[i].id());
-                CircuitResult known = Evaluated.find(evaluated.get(c.id()), c, upstream);
+                Evaluated before = evaluated.get(c.id());
+                CircuitResult known = Evaluated.find(before, c, upstream);
                 if (known == null) {
-                    known = completed(c, ct, own != null ? own : ownFigures(c, ct), done, finalPass);
-                    evaluated.put(c.id(), new Evaluated(c, upstream, known, evaluated.get(c.id())).keep(EVALUATIONS_KEPT));
+                    if (own == null) own = Evaluated.ownFigures(before, c);
+                    if (own == null) own = ownFigures(c, ct);
+                    known = completed(c, ct, own, done, finalPass);
+                    evaluated.put(c.id(), new Evaluated(c, upstream, known, own, before).keep(EVALUATIONS_KEPT));
                 } else if (finalPass && c.isFeeder()) {
                     boardChecks.put(c.to(), faultPath.boardWithstand(ct, boards.get(c.to()), known.downstream()));
                 }
