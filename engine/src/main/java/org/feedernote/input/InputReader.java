@@ -43,8 +43,33 @@ public final class InputReader {
         InputReader r = new InputReader(name);
         Node root = TreeReader.read(name, text, json, r.errors);
         if (root == null) throw new InputException(r.errors);
-        new StructureValidator(name, r.errors).check(root, InputSchema.ROOT, "");
-        Installation model = r.errors.isEmpty() || root instanceof Node.Obj ? r.bind(root, text) : null;
+        Installation model = null;
+        if (root instanceof Node.Obj) {
+            // The structure check and the binding only read the tree: side by side. The binding
+            // stops short of some checks once there are errors, so where the structure check finds
+            // any it is bound again after it, as one after the other would.
+            List<InputError> structural = new ArrayList<>();
+            java.util.concurrent.CompletableFuture<Void> check = java.util.concurrent.CompletableFuture.runAsync(
+                    () -> new StructureValidator(name, structural).check(root, InputSchema.ROOT, ""));
+            InputReader alongside = new InputReader(name);
+            RuntimeException failure = null;
+            try {
+                model = alongside.bind(root, text);
+            } catch (RuntimeException e) {
+                failure = e;
+            }
+            check.join();
+            r.errors.addAll(structural);
+            if (structural.isEmpty()) {
+                if (failure != null) throw failure;
+                r.errors.addAll(alongside.errors);
+            } else {
+                model = r.bind(root, text);
+            }
+        } else {
+            new StructureValidator(name, r.errors).check(root, InputSchema.ROOT, "");
+            model = r.errors.isEmpty() ? r.bind(root, text) : null;
+        }
         if (!r.errors.isEmpty() || model == null) {
             List<InputError> sorted = new ArrayList<>(new java.util.LinkedHashSet<>(r.errors));
             Collections.sort(sorted);
