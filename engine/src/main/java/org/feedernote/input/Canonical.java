@@ -33,13 +33,17 @@ public final class Canonical {
         }
     }
 
-    /** The canonical JSON of a tree, made once when first asked for. */
-    public static java.util.function.Supplier<String> lazy(Node root) {
+    /**
+     * The canonical JSON of a tree, made once when first asked for. The tree is asked for then,
+     * too: a large input's tree is not kept alive through the calculation for a form that only the
+     * note and the archive read.
+     */
+    public static java.util.function.Supplier<String> lazy(java.util.function.Supplier<Node> root) {
         return new java.util.function.Supplier<>() {
             private String json;
 
             @Override public synchronized String get() {
-                if (json == null) json = json(root);
+                if (json == null) json = json(root.get());
                 return json;
             }
         };

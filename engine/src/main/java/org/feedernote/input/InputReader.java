@@ -54,7 +54,7 @@ public final class InputReader {
             InputReader alongside = new InputReader(name);
             RuntimeException failure = null;
             try {
-                model = alongside.bind(root, text);
+                model = alongside.bind(root, text, json);
             } catch (RuntimeException e) {
                 failure = e;
             }
@@ -64,11 +64,11 @@ public final class InputReader {
                 if (failure != null) throw failure;
                 r.errors.addAll(alongside.errors);
             } else {
-                model = r.bind(root, text);
+                model = r.bind(root, text, json);
             }
         } else {
             new StructureValidator(name, r.errors).check(root, InputSchema.ROOT, "");
-            model = r.errors.isEmpty() ? r.bind(root, text) : null;
+            model = r.errors.isEmpty() ? r.bind(root, text, json) : null;
         }
         if (!r.errors.isEmpty() || model == null) {
             List<InputError> sorted = new ArrayList<>(new java.util.LinkedHashSet<>(r.errors));
@@ -154,7 +154,14 @@ public final class InputReader {
 
     // ---- binding and the rules that span several keys ----
 
-    private Installation bind(Node root, String text) {
+    /** The tree of a text already read without errors. */
+    private Node reread(String text, boolean json) {
+        Node root = TreeReader.read(file, text, json, new ArrayList<>());
+        if (root == null) throw new IllegalStateException(file + ": read once, but not again");
+        return root;
+    }
+
+    private Installation bind(Node root, String text, boolean json) {
         Project project = project(at(root, "project"));
         Basis basis = basis(at(root, "basis"));
         Supply supply = supply(at(root, "supply"));
@@ -184,7 +191,8 @@ public final class InputReader {
         topology(boards, circuits, circuitNodes);
         voltages(at(root, "supply"), supply);
         return errors.isEmpty()
-                ? new Installation(file, project, basis, supply, List.copyOf(boards), List.copyOf(circuits), Canonical.lazy(root), text)
+                ? new Installation(file, project, basis, supply, List.copyOf(boards), List.copyOf(circuits), Canonical.lazy(() -> reread(text, json)),
+                        text)
                 : null;
     }
 
