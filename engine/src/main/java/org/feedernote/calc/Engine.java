@@ -567,8 +567,13 @@ public final class Engine {
          * the evaluations of protective conductors of another size, which reuse them.
          */
         OwnFigures ownFigures(Circuit c) {
+            return ownFigures(c, (Capacity) null);
+        }
+
+        /** As {@link #ownFigures(Circuit)}, with the capacity a {@link #probe} has made. */
+        OwnFigures ownFigures(Circuit c, Capacity known) {
             try {
-                return ownFigures(c, Trace.noop());
+                return ownFigures(c, Trace.noop(), known);
             } catch (DataGapException e) {
                 if (e.located()) throw e;
                 throw new DataGapException(c.where().text() + ": " + c.where().path() + " (" + c.id() + "): " + e.getMessage(), true);
@@ -621,6 +626,11 @@ public final class Engine {
                           ImpedanceResult z, Trace vt, String vid, Q length, Q un, Q dropV, Q dropPct, Q dropExactPct, Q own) {}
 
         private OwnFigures ownFigures(Circuit c, Trace ct) {
+            return ownFigures(c, ct, null);
+        }
+
+        /** @param known the circuit's capacity with the no-op trace where a probe has made it, else null */
+        private OwnFigures ownFigures(Circuit c, Trace ct, Capacity known) {
             int phases = c.isFeeder() ? 3 : c.load().phases();
             Q ib = designCurrent.get(c.id());
             Q pf = powerFactor.get(c.id());
@@ -636,7 +646,7 @@ public final class Engine {
                     bind(CapacityFormulas.I_N, in));
 
             Trace kt = ct.recording() ? ct.section(id + "/cap", "Current-carrying capacity", describeConditions(c)) : ct;
-            Capacity cap = capacity(kt, c, phases, ib);
+            Capacity cap = known != null && !kt.recording() ? known : capacity(kt, c, phases, ib);
 
             List<CheckResult> checks = new ArrayList<>();
             Q demand = cap.neutralDesign() != null ? cap.neutralDesign() : ib;
@@ -761,6 +771,13 @@ public final class Engine {
          * sizing; the reason in words, or null when it passes.
          */
         String capacityShortfall(Circuit c) {
+            return probe(c).shortfall();
+        }
+
+        /** The capacity check alone: why it fails (null where it passes), and the capacity, for the evaluation that may follow. */
+        record Probe(String shortfall, Capacity capacity) {}
+
+        Probe probe(Circuit c) {
             Trace t = Trace.noop();
             int phases = c.isFeeder() ? 3 : c.load().phases();
             Q ib = designCurrent.get(c.id());
@@ -769,9 +786,9 @@ public final class Engine {
             Capacity cap = capacity(t, c, phases, ib);
             double need = cap.neutralDesign() != null ? Math.max(in, cap.neutralDesign().value()) : in;
             if (cap.iz().value() + 1e-9 < need) {
-                return String.format(Locale.ROOT, "I_z %s A < I_n %s A", trim(cap.iz().value()), trim(in));
+                return new Probe(String.format(Locale.ROOT, "I_z %s A < I_n %s A", trim(cap.iz().value()), trim(in)), cap);
             }
-            return null;
+            return new Probe(null, cap);
         }
 
         /** The check nearest its limit; on a tie, the one listed first. */

@@ -395,7 +395,8 @@ final class Sizing {
         for (double size : sizes) {
             if (!covered.contains(size)) continue;
             Circuit candidate = withCpc(c, size);
-            String quick = run.capacityShortfall(candidate);
+            Engine.Run.Probe probe = run.probe(candidate);
+            String quick = probe.shortfall();
             if (quick != null && size < sizes.get(sizes.size() - 1)) {
                 notes.add(new String[] {"Size rejected", quick, mm2(size) + " rejected"});
                 lastReason = quick;
@@ -403,7 +404,8 @@ final class Sizing {
                 last = candidate;
                 continue;
             }
-            CircuitResult r = run.evaluate(candidate, Trace.noop(), working);
+            // The probe's capacity serves the evaluation too (the same figures, made once).
+            CircuitResult r = run.evaluate(candidate, run.ownFigures(candidate, probe.capacity()), working);
             if (firstCoordinated == null && r.check("capacity").pass() && r.check("overload").pass()) firstCoordinated = candidate;
             Failure failure = ownFailure(r);
             if (failure == null) {

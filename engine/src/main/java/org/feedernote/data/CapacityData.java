@@ -92,8 +92,51 @@ public final class CapacityData {
         }
     }
 
+    /** Where a next-higher lookup lands: asked for once per table, column and key (the sizing asks thousands of times). */
+    private record Landing(String row, double value, String rowLabel, String method) {}
+
+    private static final class LandingKey {
+        final ReferenceTable table;
+        final String column;
+        final double key;
+        final String keyUnit;
+        final String what;
+
+        LandingKey(ReferenceTable table, String column, double key, String keyUnit, String what) {
+            this.table = table;
+            this.column = column;
+            this.key = key;
+            this.keyUnit = keyUnit;
+            this.what = what;
+        }
+
+        @Override public boolean equals(Object o) {
+            return o instanceof LandingKey k && k.table == table && Double.compare(k.key, key) == 0 && k.column.equals(column)
+                    && k.keyUnit.equals(keyUnit) && k.what.equals(what);
+        }
+
+        @Override public int hashCode() {
+            return (System.identityHashCode(table) * 31 + column.hashCode()) * 31 + Double.hashCode(key);
+        }
+    }
+
+    private final java.util.Map<LandingKey, Landing> landings = new java.util.concurrent.ConcurrentHashMap<>();
+
     private Step.Lookup nextHigher(ReferenceTable table, String id, String title, String symbol, double key, String column,
                                    String keyUnit, String columnLabel, String what) {
+        LandingKey k = new LandingKey(table, column, key, keyUnit, what);
+        Landing landing = landings.get(k);
+        if (landing == null) {
+            Step.Lookup s = landingOf(table, id, title, symbol, key, column, keyUnit, columnLabel, what);
+            landings.putIfAbsent(k, new Landing(s.row(), s.value(), s.row(), s.method()));
+            return s;
+        }
+        return new Step.Lookup(id, title, symbol, landing.value(), "", table.ref(), landing.rowLabel(), columnLabel, landing.method(),
+                List.of());
+    }
+
+    private Step.Lookup landingOf(ReferenceTable table, String id, String title, String symbol, double key, String column,
+                                  String keyUnit, String columnLabel, String what) {
         List<String> rows = table.rowKeys();
         String chosen = null;
         for (String r : rows) {
