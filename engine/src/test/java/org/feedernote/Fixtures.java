@@ -22,6 +22,11 @@ public final class Fixtures {
         return root().resolve("inputs");
     }
 
+    /** The example inputs of inputs/ (YAML), in name order: a source for parameterised tests. */
+    public static java.util.stream.Stream<Path> examples() throws java.io.IOException {
+        return java.nio.file.Files.list(inputs()).filter(p -> p.toString().endsWith(".yaml")).sorted();
+    }
+
     public static Installation parse(String yaml) {
         try {
             return InputReader.parse("test.yaml", yaml, false);

@@ -713,35 +713,21 @@ public final class Engine {
         /** The rest of the calculation of c from its own figures: cumulative drop, motor starting, fault path. */
         private CircuitResult completed(Circuit c, Trace ct, OwnFigures o, Map<String, CircuitResult> done, boolean finalPass) {
             String id = c.id();
-            int phases = o.phases();
-            Q ib = o.ib();
-            Q pf = o.pf();
-            Q in = o.in();
-            Q i2 = o.i2();
-            Capacity cap = o.cap();
             List<CheckResult> checks = new ArrayList<>(o.checks());
-            ImpedanceResult z = o.z();
             Trace vt = o.vt();
-            String vid = o.vid();
-            Q length = o.length();
-            Q un = o.un();
-            Q dropV = o.dropV();
-            Q dropPct = o.dropPct();
-            Q dropExactPct = o.dropExactPct();
-            Q own = o.own();
-            Q cumulative = cumulative(vt, c, own, done);
+            Q cumulative = cumulative(vt, c, o.own(), done);
             Q limit = null;
             Q dip = null;
             if (c.isFeeder()) {
-                if (vt.recording()) Given.note(vt, vid + "/board", "Cumulative drop at board " + c.to(),
+                if (vt.recording()) Given.note(vt, o.vid() + "/board", "Cumulative drop at board " + c.to(),
                         "Checked against the limit at the terminals of each load supplied from " + c.to() + ".", "");
             } else {
                 limit = limit(vt, c);
-                checks.add(check(vt, vid + "/check", "voltage-drop", "Voltage drop, origin to terminals", cumulative, limit,
+                checks.add(check(vt, o.vid() + "/check", "voltage-drop", "Voltage drop, origin to terminals", cumulative, limit,
                         "IEC 60364-5-52:2009, 525 and Annex G"));
                 if (c.load().kind() == LoadKind.MOTOR && c.load().startingCurrentMultiple() != null) {
                     Trace st = ct.section(id + "/st", "Motor starting", "voltage dip at the motor terminals while it starts");
-                    dip = starting(st, c, z, ib, length, un, done);
+                    dip = starting(st, c, o.z(), o.ib(), o.length(), o.un(), done);
                     Q stLimit = Given.setting(st, id, "/st/limit", "Limit of the starting dip", "ΔU_st,max",
                             inst.basis().motorStartingLimitPercent(), Units.PERCENT,
                             "default of this program (common practice, no source)");
@@ -754,16 +740,17 @@ public final class Engine {
             }
             Trace ft = ct.section(id + "/fault", "Fault path", "earth-fault loop, disconnection, short-circuit withstand, breaking capacity");
             Q thetaMax = Given.lookup(ft, data.maxTemperature(id + "/fault/theta_max", c.cable().insulation()));
-            FaultPath.CircuitFault fault = faultPath.circuit(ft, c, z, boardFault(c.from(), done), length, in, phases, thetaMax);
+            FaultPath.CircuitFault fault = faultPath.circuit(ft, c, o.z(), boardFault(c.from(), done), o.length(), o.in(), o.phases(),
+                    thetaMax);
             checks.addAll(fault.checks());
             if (c.isFeeder() && finalPass) {
                 boardChecks.put(c.to(), faultPath.boardWithstand(ft, boards.get(c.to()), fault.downstream()));
             }
             String governing = closestToLimit(checks);
-            return new CircuitResult(id, c, phases, connection.getOrDefault(id, "L1 L2 L3"), ib, pf,
-                    c.isFeeder() ? neutral.get(c.to()) : null, in, i2, cap.it(), cap.factor(), cap.iz(), z, length, dropV, dropPct,
-                    dropExactPct, cumulative, limit, dip, fault.prospective(), fault.zs(), fault.zsMax(), fault.iefMin(),
-                    fault.downstream(), List.copyOf(checks), governing);
+            return new CircuitResult(id, c, o.phases(), connection.getOrDefault(id, "L1 L2 L3"), o.ib(), o.pf(),
+                    c.isFeeder() ? neutral.get(c.to()) : null, o.in(), o.i2(), o.cap().it(), o.cap().factor(), o.cap().iz(), o.z(),
+                    o.length(), o.dropV(), o.dropPct(), o.dropExactPct(), cumulative, limit, dip, fault.prospective(), fault.zs(),
+                    fault.zsMax(), fault.iefMin(), fault.downstream(), List.copyOf(checks), governing);
         }
 
         /**

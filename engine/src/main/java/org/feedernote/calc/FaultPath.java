@@ -153,6 +153,30 @@ final class FaultPath {
 
     // ---------------- one circuit ----------------
 
+    /** The symbols, step ids and forms of the conductor resistances at one temperature. */
+    private record Temperature(String r1PerKm, String r2PerKm, String r1, String r2, String r1PerKmStep,
+                               String r2PerKmStep, String r1Step, String r2Step, String lineForm, String cpcForm, String lengthForm) {}
+
+    private static final Temperature AT_MAX = new Temperature("R_1′", "R_2′", "R_1", "R_2", "/R1km_max", "/R2km_max",
+            "/R1", "/R2", "line, at θ_max", "cpc, at θ_max", "at θ_max");
+    private static final Temperature AT_FINAL = new Temperature("R_1f′", "R_2f′", "R_1f", "R_2f", "/R1km_f", "/R2km_f",
+            "/R1f", "/R2f", "line, at θ_f", "cpc, at θ_f", "at θ_f");
+
+    /** R_1 and R_2 of the route: line and protective conductor per km at the temperature, then for the length. */
+    private record Conductors(Q r1, Q r2) {}
+
+    private Conductors conductors(Trace t, String id, Temperature at, Q theta, Q r20, Q cpc20, Q alpha, Q length, Q n) {
+        Q r1km = RESISTANCE_AT.as(at.r1PerKm()).eval(t, id, at.r1PerKmStep(), at.lineForm(), bind(R20, r20), bind(ALPHA, alpha),
+                bind(THETA, rel(theta, "θ")));
+        Q r2km = RESISTANCE_AT.as(at.r2PerKm()).eval(t, id, at.r2PerKmStep(), at.cpcForm(), bind(R20, rel(cpc20, "R_20")),
+                bind(ALPHA, alpha), bind(THETA, rel(theta, "θ")));
+        Q r1 = LENGTH_RESISTANCE.as(at.r1()).eval(t, id, at.r1Step(), at.lengthForm(), bind(R_KM, rel(r1km, "R")), bind(L, length),
+                bind(N, n));
+        Q r2 = LENGTH_RESISTANCE.as(at.r2()).eval(t, id, at.r2Step(), at.lengthForm(), bind(R_KM, rel(r2km, "R")), bind(L, length),
+                bind(N, n));
+        return new Conductors(r1, r2);
+    }
+
     CircuitFault circuit(Trace t, Circuit c, ImpedanceResult z, BoardFault at, Q length, Q in, int phases, Q thetaMax) {
         String id = c.id() + "/fault";
         Cable cable = c.cable();
@@ -168,18 +192,12 @@ final class FaultPath {
                 bind(L, length));
         Q thetaF = Given.lookup(t, faults.finalTemperature(id + "/theta_f", cable.insulation()));
         Q cpc20 = Given.lookup(t, data.resistance20(id + "/R20_cpc", cable.conductor(), cable.cpc().mm2()));
-        Q r1kmMax = RESISTANCE_AT.as("R_1′").eval(t, id, "/R1km_max", "line, at θ_max", bind(R20, r20), bind(ALPHA, alpha),
-                bind(THETA, rel(thetaMax, "θ")));
-        Q r2kmMax = RESISTANCE_AT.as("R_2′").eval(t, id, "/R2km_max", "cpc, at θ_max", bind(R20, rel(cpc20, "R_20")), bind(ALPHA, alpha),
-                bind(THETA, rel(thetaMax, "θ")));
-        Q r1 = LENGTH_RESISTANCE.as("R_1").eval(t, id, "/R1", "at θ_max", bind(R_KM, rel(r1kmMax, "R")), bind(L, length), bind(N, n));
-        Q r2 = LENGTH_RESISTANCE.as("R_2").eval(t, id, "/R2", "at θ_max", bind(R_KM, rel(r2kmMax, "R")), bind(L, length), bind(N, n));
-        Q r1kmF = RESISTANCE_AT.as("R_1f′").eval(t, id, "/R1km_f", "line, at θ_f", bind(R20, r20), bind(ALPHA, alpha),
-                bind(THETA, rel(thetaF, "θ")));
-        Q r2kmF = RESISTANCE_AT.as("R_2f′").eval(t, id, "/R2km_f", "cpc, at θ_f", bind(R20, rel(cpc20, "R_20")), bind(ALPHA, alpha),
-                bind(THETA, rel(thetaF, "θ")));
-        Q r1f = LENGTH_RESISTANCE.as("R_1f").eval(t, id, "/R1f", "at θ_f", bind(R_KM, rel(r1kmF, "R")), bind(L, length), bind(N, n));
-        Q r2f = LENGTH_RESISTANCE.as("R_2f").eval(t, id, "/R2f", "at θ_f", bind(R_KM, rel(r2kmF, "R")), bind(L, length), bind(N, n));
+        Conductors hot = conductors(t, id, AT_MAX, thetaMax, r20, cpc20, alpha, length, n);
+        Conductors fin = conductors(t, id, AT_FINAL, thetaF, r20, cpc20, alpha, length, n);
+        Q r1 = hot.r1();
+        Q r2 = hot.r2();
+        Q r1f = fin.r1();
+        Q r2f = fin.r2();
 
         Q r12 = series(t, id + "/R12", "Resistance of the loop, at θ_max", "R_1 + R_2", r1, r2);
         Q zLoop = magnitude(t, id + "/Zloop", "Z_loop", rel(r12, "R"), rel(xLoop, "X"));

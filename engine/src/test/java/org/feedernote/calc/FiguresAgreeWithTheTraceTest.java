@@ -2,10 +2,7 @@ package org.feedernote.calc;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.stream.Stream;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -25,12 +22,8 @@ import org.feedernote.synthetic.SyntheticInstallation;
  */
 class FiguresAgreeWithTheTraceTest {
 
-    static Stream<Path> examples() throws IOException {
-        return Files.list(Fixtures.inputs()).filter(p -> p.toString().endsWith(".yaml")).sorted();
-    }
-
     @ParameterizedTest
-    @MethodSource("examples")
+    @MethodSource("org.feedernote.Fixtures#examples")
     void theExamplesGiveTheSameResultWithAndWithoutTheTrace(Path input) throws Exception {
         assertSameResult(InputReader.read(input));
     }

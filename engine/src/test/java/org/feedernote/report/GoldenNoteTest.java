@@ -6,7 +6,6 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.stream.Stream;
 
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
@@ -21,12 +20,8 @@ import org.feedernote.Fixtures;
 class GoldenNoteTest {
     static final boolean REWRITE = Boolean.getBoolean("feedernote.rewrite");
 
-    static Stream<Path> examples() throws IOException {
-        return Files.list(Fixtures.inputs()).filter(p -> p.toString().endsWith(".yaml")).sorted();
-    }
-
     @ParameterizedTest
-    @MethodSource("examples")
+    @MethodSource("org.feedernote.Fixtures#examples")
     void traceAndNoteTextMatchTheGoldenFiles(Path input) throws Exception {
         NoteFixture note = NoteFixture.of(input);
         String name = input.getFileName().toString().replaceFirst("\\.yaml$", "");

@@ -2,15 +2,12 @@ package org.feedernote.trace;
 
 import static org.junit.jupiter.api.Assertions.*;
 
-import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.stream.Stream;
 
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
@@ -28,12 +25,8 @@ import org.feedernote.input.InputReader;
  */
 class TraceSelfCheckTest {
 
-    static Stream<Path> examples() throws IOException {
-        return Files.list(Fixtures.inputs()).filter(p -> p.toString().endsWith(".yaml")).sorted();
-    }
-
     @ParameterizedTest
-    @MethodSource("examples")
+    @MethodSource("org.feedernote.Fixtures#examples")
     void everyFormulaStepRecomputesFromItsBindings(Path input) throws Exception {
         selfCheck(new Engine(ReferenceData.standard()).run(InputReader.read(input)));
     }
