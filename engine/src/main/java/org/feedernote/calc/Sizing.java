@@ -75,20 +75,18 @@ final class Sizing {
 
     /**
      * The smallest size passing each circuit's own checks, board by board from the origin. A
-     * final circuit depends only on the feeders above it, so the final circuits of a board are
-     * sized in parallel; feeders go one at a time. The outcome is merged in input order, so it is
+     * circuit depends only on the feeders above it, never on another circuit of its own board, so
+     * the circuits of a board are sized in parallel. The outcome is merged in input order, so it is
      * the same as one circuit after another.
      */
     private void firstPass() {
         for (String board : run.boardOrder) {
             List<Circuit> outgoing = run.outgoing.getOrDefault(board, List.of());
-            List<Circuit> finals = outgoing.stream().filter(c -> !c.isFeeder()).toList();
-            List<FirstChoice> finalChoices = (finals.size() > 8 ? finals.parallelStream() : finals.stream())
+            List<FirstChoice> choices = (outgoing.size() > 8 ? outgoing.parallelStream() : outgoing.stream())
                     .map(c -> firstChoice(c, results)).toList();
-            Map<String, FirstChoice> chosen = new HashMap<>();
-            for (int i = 0; i < finals.size(); i++) chosen.put(finals.get(i).id(), finalChoices.get(i));
-            for (Circuit c : outgoing) {
-                FirstChoice f = c.isFeeder() ? firstChoice(c, results) : chosen.get(c.id());
+            for (int i = 0; i < outgoing.size(); i++) {
+                Circuit c = outgoing.get(i);
+                FirstChoice f = choices.get(i);
                 if (f.error() != null) throw f.error();
                 current.put(c.id(), f.chosen());
                 results.put(c.id(), f.result());
@@ -590,6 +588,7 @@ final class Sizing {
                 batch.add(Candidate.of(k));
             }
         }
+        weighNextSteps(best, batch);
         apply(best.slot(), best.to());
         for (Candidate c : batch) {
             note(c.id(), "Enlarged for the cumulative voltage drop", "its own drop limit fails; no feeder step buys more drop per volume",
@@ -597,6 +596,31 @@ final class Sizing {
             apply(c.slot(), c.to());
         }
         return true;
+    }
+
+    /**
+     * The own drop each circuit about to be enlarged would have one size further, which its next
+     * step is weighed by once it has grown: found side by side beforehand, since a circuit's own
+     * drop depends on nothing upstream. A data gap is left to the step itself, which meets it in
+     * order, as it would have without this.
+     */
+    private void weighNextSteps(Candidate best, List<Candidate> batch) {
+        List<Candidate> growing = new ArrayList<>(batch.size() + 1);
+        growing.add(best);
+        growing.addAll(batch);
+        (growing.size() > 8 ? growing.parallelStream() : growing.stream()).forEach(c -> {
+            Slot k = c.slot();
+            for (double size : k.covered) {
+                if (size > c.to() + 1e-9) {
+                    try {
+                        ownDropAt(k, size);
+                    } catch (RuntimeException gap) {
+                        // met again, in order, when the step weighs this size
+                    }
+                    break;
+                }
+            }
+        });
     }
 
     /** Enlarges a circuit chosen by a step; every candidate final circuit was failing when the step began. */
