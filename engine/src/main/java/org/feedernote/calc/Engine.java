@@ -164,8 +164,22 @@ public final class Engine {
             }
             originTrace = root.section(boardOrder.get(0) + "/demand", "Demand at the origin board " + boardOrder.get(0),
                     boards.get(boardOrder.get(0)).description());
-            for (Circuit c : inst.circuits()) {
-                if (!c.isFeeder()) loadDemand(c);
+            // Each final circuit's design current depends on its load alone: side by side, kept in input order.
+            List<Circuit> loaded = inst.circuits().stream().filter(c -> !c.isFeeder()).toList();
+            List<LoadFigures> loads = (loaded.size() > 8 ? loaded.parallelStream() : loaded.stream()).map(c -> {
+                try {
+                    return loadDemand(c);
+                } catch (RuntimeException e) {
+                    return new LoadFigures(null, null, null, e);
+                }
+            }).toList();
+            for (int i = 0; i < loaded.size(); i++) {
+                LoadFigures l = loads.get(i);
+                if (l.error() != null) throw l.error();
+                String id = loaded.get(i).id();
+                designCurrent.put(id, l.ib());
+                if (l.pf() != null) powerFactor.put(id, l.pf());
+                demand.put(id, l.demand());
             }
             for (String b : boardOrder) allocatePhases(b);
             for (int i = boardOrder.size() - 1; i >= 0; i--) boardDemand(boardOrder.get(i));
@@ -247,7 +261,10 @@ public final class Engine {
 
         // ---------------- design current of final circuits ----------------
 
-        void loadDemand(Circuit c) {
+        /** A final circuit's design current, power factor (null where unknown) and demand, or what went wrong. */
+        record LoadFigures(Q ib, Q pf, LoadDemand demand, RuntimeException error) {}
+
+        LoadFigures loadDemand(Circuit c) {
             Trace t = circuitTrace.get(c.id()).section(c.id() + "/ib", "Design current", "");
             Load load = c.load();
             String id = c.id() + "/ib";
@@ -310,9 +327,7 @@ public final class Engine {
                         "I_b = design_current_a is used for this circuit's checks; the board's demand uses the load's power",
                         "design input", derived.id(), ib.id());
             }
-            designCurrent.put(c.id(), ib);
-            if (pf != null) powerFactor.put(c.id(), pf);
-            demand.put(c.id(), new LoadDemand(c.id(), load.phases(), 0, p, q, s, pf != null));
+            return new LoadFigures(ib, pf, new LoadDemand(c.id(), load.phases(), 0, p, q, s, pf != null), null);
         }
 
         // ---------------- phase allocation ----------------
