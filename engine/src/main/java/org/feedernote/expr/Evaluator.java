@@ -1,52 +1,41 @@
 package org.feedernote.expr;
 
 import java.util.Map;
-import java.util.function.ToDoubleFunction;
 
 /** Evaluates an expression tree against bound values; every failure is loud and names the step. */
 public final class Evaluator {
     private Evaluator() {}
 
-    public static double evaluate(Expr expr, Map<String, Double> values, String stepId) {
-        return evaluate(expr, (ToDoubleFunction<Var>) v -> {
-            Double d = values.get(v.key());
-            if (d == null) throw new EvaluationException(stepId, "symbol " + v.symbol() + " is not bound");
-            return d;
-        }, stepId);
-    }
-
-    /** @param values gives each variable's bound value; it throws where a variable is unbound */
-    public static double evaluate(Expr expr, ToDoubleFunction<Var> values, String stepId) {
-        double result = value(expr, values, stepId);
-        if (!Double.isFinite(result)) {
-            throw new EvaluationException(stepId, "the result is not a finite number (" + result + ")");
-        }
-        return result;
-    }
-
     /**
-     * Evaluates on primitives (not through a visitor returning Double): the engine evaluates
-     * formulas millions of times during sizing, and boxing every node's value would dominate.
+     * Evaluates a tree against values bound by variable key (for re-checking a recorded step from
+     * its bindings): the same compiled evaluation the formulas use.
      */
-    static double value(Expr e, ToDoubleFunction<Var> values, String stepId) {
-        if (e instanceof Expr.Bin bin) {
-            double a = value(bin.left(), values, stepId);
-            double b = value(bin.right(), values, stepId);
-            if (bin.op() == Op.DIV && b == 0.0) throw new EvaluationException(stepId, "division by zero");
-            return bin.op().apply(a, b);
+    public static double evaluate(Expr expr, Map<String, Double> values, String stepId) {
+        java.util.List<Var> vars = new java.util.ArrayList<>();
+        collect(expr, vars);
+        double[] bound = new double[vars.size()];
+        for (int i = 0; i < bound.length; i++) {
+            Double d = values.get(vars.get(i).key());
+            if (d == null) throw new EvaluationException(stepId, "symbol " + vars.get(i).symbol() + " is not bound");
+            bound[i] = d;
         }
-        if (e instanceof Expr.Ref ref) return values.applyAsDouble(ref.var());
-        if (e instanceof Expr.Num num) return num.value();
-        if (!(e instanceof Expr.Call call)) throw new IllegalStateException(stepId + ": no evaluation for " + e);
-        double x = value(call.arg(), values, stepId);
-        checkArgument(call.fn(), x, stepId);
-        return call.fn().apply(x);
+        return compile(expr, vars).evaluate(bound, stepId, "");
+    }
+
+    private static void collect(Expr e, java.util.List<Var> vars) {
+        if (e instanceof Expr.Bin bin) {
+            collect(bin.left(), vars);
+            collect(bin.right(), vars);
+        } else if (e instanceof Expr.Call call) {
+            collect(call.arg(), vars);
+        } else if (e instanceof Expr.Ref ref && !vars.contains(ref.var())) {
+            vars.add(ref.var());
+        }
     }
 
     /**
      * The tree made ready for evaluation against an array of values, one per variable in the order
-     * given: references become array indices, so an evaluation allocates nothing. Same operations
-     * in the same order as {@link #evaluate(Expr, ToDoubleFunction, String)}, hence the same result.
+     * given: references become array indices, so an evaluation allocates nothing.
      */
     public static Compiled compile(Expr expr, java.util.List<Var> vars) {
         return new Compiled(node(expr, vars));
@@ -92,7 +81,7 @@ public final class Evaluator {
         }
         if (e instanceof Expr.Ref ref) {
             int slot = -1;
-            for (int i = 0; i < vars.size(); i++) if (vars.get(i) == ref.var()) slot = i;
+            for (int i = 0; i < vars.size() && slot < 0; i++) if (vars.get(i).equals(ref.var())) slot = i;
             if (slot < 0) throw new IllegalArgumentException(ref.var().symbol() + " is not among the variables given");
             int index = slot;
             return new Node() {

@@ -36,8 +36,9 @@ class FiguresAgreeWithTheTraceTest {
 
     @Test
     void boardsWithAWithstandRatingGiveTheSameVerdictWithAndWithoutTheTrace() throws Exception {
-        // Sub-boards rated 10 kA and 60 kA by turns: a 1 600 kVA, 6 % transformer gives about 38 kA at
-        // its terminals (IEC 60909-0), so the 10 kA boards near the origin fail and the 60 kA ones pass.
+        // Sub-boards rated 10 kA and 60 kA by turns: a 1 600 kVA, 6 % transformer gives about 42 kA at
+        // its terminals (IEC 60909-0:2016, eq. (29), c_max = 1.10: 1.1 × 400 V / (√3 × 0.006 Ω)), so the
+        // 10 kA boards near the origin fail and the 60 kA ones pass.
         String yaml = java.util.regex.Pattern.compile("\\{id: (DB-\\d*[02468]), diversity: 0.6}")
                 .matcher(SyntheticInstallation.generate(300, 4)).replaceAll("{id: $1, diversity: 0.6, fault_rating_ka: 10}")
                 .replaceAll("\\{id: (DB-\\d*[13579]), diversity: 0.6}", "{id: $1, diversity: 0.6, fault_rating_ka: 60}");
