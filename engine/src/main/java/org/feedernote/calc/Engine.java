@@ -166,16 +166,9 @@ public final class Engine {
                     boards.get(boardOrder.get(0)).description());
             // Each final circuit's design current depends on its load alone: side by side, kept in input order.
             List<Circuit> loaded = inst.circuits().stream().filter(c -> !c.isFeeder()).toList();
-            List<LoadFigures> loads = (loaded.size() > 8 ? loaded.parallelStream() : loaded.stream()).map(c -> {
-                try {
-                    return loadDemand(c);
-                } catch (RuntimeException e) {
-                    return new LoadFigures(null, null, null, e);
-                }
-            }).toList();
+            List<SideBySide.Outcome<LoadFigures>> loads = SideBySide.map(loaded, this::loadDemand);
             for (int i = 0; i < loaded.size(); i++) {
-                LoadFigures l = loads.get(i);
-                if (l.error() != null) throw l.error();
+                LoadFigures l = loads.get(i).get();
                 String id = loaded.get(i).id();
                 designCurrent.put(id, l.ib());
                 if (l.pf() != null) powerFactor.put(id, l.pf());
@@ -194,13 +187,12 @@ public final class Engine {
             for (String board : boardOrder) {
                 List<Circuit> out = outgoing.getOrDefault(board, List.of());
                 List<Circuit> finals = out.stream().filter(c -> !c.isFeeder()).toList();
-                List<Recorded> recorded = (finals.size() > 8 ? finals.parallelStream() : finals.stream())
-                        .map(original -> record(sizing, original, sized.get(original.id()))).toList();
-                Map<String, Recorded> byId = new HashMap<>();
+                List<SideBySide.Outcome<Recorded>> recorded = SideBySide.map(finals,
+                        original -> record(sizing, original, sized.get(original.id())));
+                Map<String, SideBySide.Outcome<Recorded>> byId = new HashMap<>();
                 for (int i = 0; i < finals.size(); i++) byId.put(finals.get(i).id(), recorded.get(i));
                 for (Circuit original : out) {
-                    Recorded r = original.isFeeder() ? record(sizing, original, sized.get(original.id())) : byId.get(original.id());
-                    if (r.error() != null) throw r.error();
+                    Recorded r = original.isFeeder() ? record(sizing, original, sized.get(original.id())) : byId.get(original.id()).get();
                     Circuit c = r.result().circuit();
                     results.put(c.id(), r.result());
                     calculated.put(c.id(), r.calculated());
@@ -211,22 +203,18 @@ public final class Engine {
 
         /**
          * A circuit of the final pass: its result as calculated (what the circuits below read) and
-         * as reported (with the check that governed its size), or the data gap it ran into.
+         * as reported (with the check that governed its size).
          */
-        private record Recorded(CircuitResult calculated, CircuitResult result, RuntimeException error) {}
+        private record Recorded(CircuitResult calculated, CircuitResult result) {}
 
         /** The results of the final pass as calculated, for the circuits below (results adds the governing check). */
         private final Map<String, CircuitResult> calculated = new HashMap<>();
 
         private Recorded record(Sizing sizing, Circuit original, Circuit c) {
-            try {
-                Trace ct = circuitTrace.get(c.id());
-                sizing.record(ct, original, c);
-                CircuitResult r = evaluate(c, ct, calculated, true);
-                return new Recorded(r, r.withGoverning(sizing.governing(c.id(), r)), null);
-            } catch (RuntimeException e) {
-                return new Recorded(null, null, e);
-            }
+            Trace ct = circuitTrace.get(c.id());
+            sizing.record(ct, original, c);
+            CircuitResult r = evaluate(c, ct, calculated, true);
+            return new Recorded(r, r.withGoverning(sizing.governing(c.id(), r)));
         }
 
         void topology() {
@@ -261,8 +249,8 @@ public final class Engine {
 
         // ---------------- design current of final circuits ----------------
 
-        /** A final circuit's design current, power factor (null where unknown) and demand, or what went wrong. */
-        record LoadFigures(Q ib, Q pf, LoadDemand demand, RuntimeException error) {}
+        /** A final circuit's design current, power factor (null where unknown) and demand. */
+        record LoadFigures(Q ib, Q pf, LoadDemand demand) {}
 
         LoadFigures loadDemand(Circuit c) {
             Trace t = circuitTrace.get(c.id()).section(c.id() + "/ib", "Design current", "");
@@ -327,7 +315,7 @@ public final class Engine {
                         "I_b = design_current_a is used for this circuit's checks; the board's demand uses the load's power",
                         "design input", derived.id(), ib.id());
             }
-            return new LoadFigures(ib, pf, new LoadDemand(c.id(), load.phases(), 0, p, q, s, pf != null), null);
+            return new LoadFigures(ib, pf, new LoadDemand(c.id(), load.phases(), 0, p, q, s, pf != null));
         }
 
         // ---------------- phase allocation ----------------

@@ -82,12 +82,10 @@ final class Sizing {
     private void firstPass() {
         for (String board : run.boardOrder) {
             List<Circuit> outgoing = run.outgoing.getOrDefault(board, List.of());
-            List<FirstChoice> choices = (outgoing.size() > 8 ? outgoing.parallelStream() : outgoing.stream())
-                    .map(c -> firstChoice(c, results)).toList();
+            List<SideBySide.Outcome<FirstChoice>> choices = SideBySide.map(outgoing, c -> firstChoice(c, results));
             for (int i = 0; i < outgoing.size(); i++) {
                 Circuit c = outgoing.get(i);
-                FirstChoice f = choices.get(i);
-                if (f.error() != null) throw f.error();
+                FirstChoice f = choices.get(i).get();
                 current.put(c.id(), f.chosen());
                 results.put(c.id(), f.result());
                 if (!f.notes().isEmpty()) notes.computeIfAbsent(c.id(), k -> new ArrayList<>()).addAll(f.notes());
@@ -110,21 +108,13 @@ final class Sizing {
         List<Circuit> finals = run.order().stream()
                 .filter(c -> !run.original(c.id()).isFeeder() && run.original(c.id()).cable().cpc().auto()).toList();
         // Each final circuit's search depends only on the feeders above it (fixed by now): side by side.
-        record Smallest(Circuit best, RuntimeException error) {}
-        List<Smallest> found = finals.parallelStream().map(c -> {
-            try {
-                return new Smallest(smallestProtectiveConductor(current.get(c.id())), null);
-            } catch (RuntimeException e) {
-                return new Smallest(null, e);
-            }
-        }).toList();
+        List<SideBySide.Outcome<Circuit>> found = SideBySide.map(finals, c -> smallestProtectiveConductor(current.get(c.id())));
         for (int i = 0; i < finals.size(); i++) {
-            Smallest s = found.get(i);
-            if (s.error() != null) throw s.error();
+            Circuit best = found.get(i).get();
             Circuit chosen = current.get(finals.get(i).id());
-            if (s.best() != chosen) {
+            if (best != chosen) {
                 cpcByCalculation.put(chosen.id(), chosen.cable().cpc().mm2());
-                current.put(chosen.id(), s.best());
+                current.put(chosen.id(), best);
             }
         }
     }
@@ -312,18 +302,8 @@ final class Sizing {
             if (a.feeder) results.put(a.id, run.evaluate(a.current, Trace.noop(), results));
             else if (recalculated(a)) motors.add(a);
         }
-        record Motor(CircuitResult result, RuntimeException error) {}
-        List<Motor> done = (motors.size() > 8 ? motors.parallelStream() : motors.stream()).map(a -> {
-            try {
-                return new Motor(run.evaluate(a.current, Trace.noop(), results), null);
-            } catch (RuntimeException e) {
-                return new Motor(null, e);
-            }
-        }).toList();
-        for (int i = 0; i < motors.size(); i++) {
-            if (done.get(i).error() != null) throw done.get(i).error();
-            results.put(motors.get(i).id, done.get(i).result());
-        }
+        List<SideBySide.Outcome<CircuitResult>> done = SideBySide.map(motors, a -> run.evaluate(a.current, Trace.noop(), results));
+        for (int i = 0; i < motors.size(); i++) results.put(motors.get(i).id, done.get(i).get());
         track(slot);
         for (Slot a : slot.below) track(a);
     }
@@ -362,25 +342,19 @@ final class Sizing {
 
     /**
      * The first pass for one circuit: the size chosen, its evaluation, and the decisions to record.
-     * Made without touching the sizing's state, so the final circuits of a board can be sized side
-     * by side; error is the data gap the circuit ran into, reported in input order afterwards.
+     * Made without touching the sizing's state, so the circuits of a board can be sized side by side.
      */
-    private record FirstChoice(Circuit chosen, CircuitResult result, List<String[]> notes, Double size, String decidedBy,
-                               RuntimeException error) {}
+    private record FirstChoice(Circuit chosen, CircuitResult result, List<String[]> notes, Double size, String decidedBy) {}
 
     /** Why a candidate fails its own checks (in words) and the check's name. */
     private record Failure(String reason, String check) {}
 
     private FirstChoice firstChoice(Circuit c, Map<String, CircuitResult> working) {
-        try {
-            if (!auto(c)) {
-                Circuit chosen = withCpc(c, c.cable().size().mm2());
-                return new FirstChoice(chosen, run.evaluate(chosen, Trace.noop(), working), List.of(), null, null, null);
-            }
-            return smallestPassingOwnChecks(c, working);
-        } catch (RuntimeException e) {
-            return new FirstChoice(null, null, List.of(), null, null, e);
+        if (!auto(c)) {
+            Circuit chosen = withCpc(c, c.cable().size().mm2());
+            return new FirstChoice(chosen, run.evaluate(chosen, Trace.noop(), working), List.of(), null, null);
         }
+        return smallestPassingOwnChecks(c, working);
     }
 
     private FirstChoice smallestPassingOwnChecks(Circuit c, Map<String, CircuitResult> working) {
@@ -409,7 +383,7 @@ final class Sizing {
             if (failure == null) {
                 notes.add(new String[] {"Size chosen", "the smallest standard size that passes the capacity, overload, disconnection and withstand checks",
                         mm2(size)});
-                return new FirstChoice(candidate, r, notes, size, lastReason != null ? lastReasonCheck : null, null);
+                return new FirstChoice(candidate, r, notes, size, lastReason != null ? lastReasonCheck : null);
             }
             notes.add(new String[] {"Size rejected", failure.reason(), mm2(size) + " rejected"});
             last = candidate;
@@ -438,7 +412,7 @@ final class Sizing {
                     "the largest is used and the circuit fails"});
             chosen = last;
         }
-        return new FirstChoice(chosen, run.evaluate(chosen, Trace.noop(), working), notes, null, null, null);
+        return new FirstChoice(chosen, run.evaluate(chosen, Trace.noop(), working), notes, null, null);
     }
 
     /** Why a candidate fails its own checks, or null when it passes them. */
