@@ -154,7 +154,8 @@ public final class NoteRenderer {
         float[] margins = pageMargins(sheet);
         Document document = new Document(PageSize.A4, margins[3], margins[1], margins[0], margins[2]);
         Fonts fonts = new Fonts();
-        PdfWriter writer = PdfWriter.getInstance(document, out);
+        CountingStream counted = new CountingStream(out);
+        PdfWriter writer = PdfWriter.getInstance(document, counted);
         writer.setCompressionLevel(6);
         document.addTitle(note.cover().reference() + " rev " + note.cover().revision() + " — " + note.cover().title());
         document.addSubject("Calculation note " + note.cover().reference() + " revision " + note.cover().revision());
@@ -185,19 +186,43 @@ public final class NoteRenderer {
             writer.addFileAttachment(a.description(), spec);
         }
         placeParts(note, typesetter, progress);
-        long tail = writer.getCurrentDocumentSize();
+        // Bytes written so far; OpenPDF's getCurrentDocumentSize() adds an estimate of the
+        // cross-reference table and so lies past the font objects of a long note.
+        long tail = counted.count;
         document.close();
         return tail;
+    }
+
+    /** Counts the bytes OpenPDF has written (it writes straight through, without a buffer of its own). */
+    private static final class CountingStream extends java.io.FilterOutputStream {
+        long count;
+
+        CountingStream(OutputStream out) {
+            super(out);
+        }
+
+        @Override public void write(int b) throws IOException {
+            out.write(b);
+            count++;
+        }
+
+        @Override public void write(byte[] b, int off, int len) throws IOException {
+            out.write(b, off, len);
+            count += len;
+        }
     }
 
     /** How many parts the preparing thread may run ahead of the pages (bounds the memory held). */
     private static final int PREPARED_AHEAD = 16;
 
+
     /**
      * The front matter, every worked section and the appendices, in order. Building a part's view,
-     * running its template, parsing the markup and turning it into blocks happens on a second
-     * thread, a few parts ahead of the thread that places the blocks on the pages; the pages, and
-     * so the bytes, come out the same as if one thread did both.
+     * running its template, parsing the markup and turning it into blocks happens on a preparing
+     * thread, a few parts ahead of the thread that places the blocks on the pages in order; when the
+     * next part is not ready and not begun, the placing thread prepares it itself rather than wait
+     * (preparing costs more than placing). Each part's blocks depend on that part alone, so the
+     * pages, and the bytes, come out the same as if one thread did everything.
      */
     private void placeParts(NoteView note, Typesetter typesetter, Progress progress) throws IOException {
         int sections = note.sections().size();
@@ -208,12 +233,12 @@ public final class NoteRenderer {
             return t;
         });
         try {
-            java.util.ArrayDeque<java.util.concurrent.Future<Typesetter.Prepared>> ahead = new java.util.ArrayDeque<>();
+            java.util.ArrayDeque<java.util.concurrent.FutureTask<Typesetter.Prepared>> ahead = new java.util.ArrayDeque<>();
             int next = 0;
-            while (next < parts && ahead.size() < PREPARED_AHEAD) ahead.add(preparing.submit(prepareTask(note, typesetter, next++, sections)));
+            while (next < parts && ahead.size() < PREPARED_AHEAD) ahead.add(schedule(preparing, prepareTask(note, typesetter, next++, sections)));
             for (int i = 0; i < parts; i++) {
                 Typesetter.Prepared part = await(ahead.removeFirst());
-                if (next < parts) ahead.add(preparing.submit(prepareTask(note, typesetter, next++, sections)));
+                if (next < parts) ahead.add(schedule(preparing, prepareTask(note, typesetter, next++, sections)));
                 typesetter.place(part);
                 if (i >= 1 && i <= sections) progress.sectionDone(i, sections);
             }
@@ -232,7 +257,16 @@ public final class NoteRenderer {
         };
     }
 
-    private static Typesetter.Prepared await(java.util.concurrent.Future<Typesetter.Prepared> future) throws IOException {
+    private static java.util.concurrent.FutureTask<Typesetter.Prepared> schedule(java.util.concurrent.ExecutorService preparing,
+                                                                                 java.util.concurrent.Callable<Typesetter.Prepared> task) {
+        java.util.concurrent.FutureTask<Typesetter.Prepared> future = new java.util.concurrent.FutureTask<>(task);
+        preparing.execute(future);
+        return future;
+    }
+
+    /** The prepared part; prepared here if the preparing thread has not begun it (its own later run does nothing). */
+    private static Typesetter.Prepared await(java.util.concurrent.FutureTask<Typesetter.Prepared> future) throws IOException {
+        future.run();
         try {
             return future.get();
         } catch (InterruptedException e) {

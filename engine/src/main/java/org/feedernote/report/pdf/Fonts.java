@@ -2,7 +2,6 @@ package org.feedernote.report.pdf;
 
 import java.awt.Color;
 import java.io.IOException;
-import java.util.HashMap;
 import java.util.Map;
 
 import com.lowagie.text.Font;
@@ -15,7 +14,7 @@ public final class Fonts {
     private final BaseFont italic;
     private final BaseFont boldItalic;
     private final BaseFont mono;
-    private final Map<Key, Font> fonts = new HashMap<>();
+    private final Map<Key, Font> fonts = new java.util.concurrent.ConcurrentHashMap<>();
 
     private record Key(BaseFont face, float size, Color color, boolean underline) {}
 
@@ -25,6 +24,10 @@ public final class Fonts {
         italic = load("liberation/LiberationSans-Italic.ttf");
         boldItalic = load("liberation/LiberationSans-BoldItalic.ttf");
         mono = load("liberation/LiberationMono-Regular.ttf");
+        for (int k = 0; k < widths.length; k++) {
+            widths[k] = new float[65536];
+            java.util.Arrays.fill(widths[k], -1);
+        }
     }
 
     private static BaseFont load(String resource) throws IOException {
@@ -37,16 +40,20 @@ public final class Fonts {
         return s.italic ? italic : regular;
     }
 
-    /** Advance widths per character, looked up once (OpenPDF's own lookup boxes every character). */
-    private final Map<BaseFont, float[]> widths = new HashMap<>();
+    /**
+     * Advance widths per character of each face, looked up once (OpenPDF's own lookup boxes every
+     * character; -1 where not yet looked up). Filled lazily from several threads: a thread that
+     * does not yet see another's entry looks the same width up again.
+     */
+    private final float[][] widths = new float[5][];
+
+    private float[] widths(BaseFont face) {
+        return widths[face == regular ? 0 : face == bold ? 1 : face == italic ? 2 : face == boldItalic ? 3 : 4];
+    }
 
     /** The advance width of a text in points, without kerning (as OpenPDF lays it out). */
     float width(BaseFont face, String text, float size) {
-        float[] w = widths.computeIfAbsent(face, f -> {
-            float[] a = new float[65536];
-            java.util.Arrays.fill(a, -1);
-            return a;
-        });
+        float[] w = widths(face);
         float units = 0;
         for (int i = 0; i < text.length(); i++) {
             char c = text.charAt(i);

@@ -221,7 +221,7 @@ public final class Style {
      */
     public static final class Resolver {
         private final StyleSheet sheet;
-        private final Map<Key, Style> cache = new HashMap<>();
+        private final Map<Key, Style> cache = new java.util.concurrent.ConcurrentHashMap<>();
         private final Style root;
 
         private record Key(Style parent, String tag, String classes, String inline) {}
@@ -250,8 +250,9 @@ public final class Style {
             }
             if (!key.inline().isEmpty()) d.putAll(StyleSheet.declarations(key.inline()));
             Style s = new Style(parent, d);
-            cache.put(key, s);
-            return s;
+            // One instance per key whichever thread comes first: runs of text compare styles by identity.
+            Style first = cache.putIfAbsent(key, s);
+            return first != null ? first : s;
         }
 
         private static boolean matches(List<StyleSheet.Compound> selector, List<String[]> ancestors, String tag, String classes) {

@@ -11,6 +11,7 @@ import com.lowagie.text.Font;
 import com.lowagie.text.Paragraph;
 import com.lowagie.text.Rectangle;
 import com.lowagie.text.pdf.BaseFont;
+import com.lowagie.text.pdf.PdfContentByte;
 import com.lowagie.text.pdf.PdfDestination;
 import com.lowagie.text.pdf.PdfOutline;
 import com.lowagie.text.pdf.PdfPCell;
@@ -18,14 +19,20 @@ import com.lowagie.text.pdf.PdfPTable;
 import com.lowagie.text.pdf.PdfWriter;
 import com.lowagie.text.pdf.draw.VerticalPositionMark;
 
+import org.feedernote.report.pdf.LineBreaker.Run;
+
 /**
- * Lays the note's XHTML out on OpenPDF pages directly, one part at a time, so a note of any
- * length streams to the file in bounded memory. It reads the markup the note's templates write
- * (div, p, h1–h4, span, b, i, sub, sup, ul/li, tables) styled by the {@link StyleSheet} subset:
- * fonts, colours, line height, alignment, margins and padding, borders and backgrounds of boxes and
- * cells, widths, inline blocks of fixed width, right floats, and the page-break properties. Keeping
- * a block together or a heading with what follows is decided on an estimate of the block's height
- * from the font metrics (a greedy line break), which costs far less than laying it out twice.
+ * Lays the note's XHTML out on OpenPDF pages, one part at a time, so a note of any length streams
+ * to the file in bounded memory. It reads the markup the note's templates write (div, p, h1–h4,
+ * span, b, i, sub, sup, ul/li, tables) styled by the {@link StyleSheet} subset: fonts, colours,
+ * line height, alignment, margins and padding, borders and backgrounds of boxes and cells, widths,
+ * inline blocks of fixed width, right floats, and the page-break properties.
+ *
+ * <p>Paragraphs of the flow are broken into lines here ({@link LineBreaker}) and written straight
+ * onto the page's content, so their heights are exact and the page-break decisions (keep a step
+ * together, a heading with what follows) rest on them. Tables and boxes are OpenPDF tables whose
+ * rows this class places, page by page, repeating header rows; the paragraphs inside their cells
+ * are laid out by OpenPDF.
  */
 public final class Typesetter {
     private static final Set<String> INLINE = Set.of("span", "b", "strong", "i", "em", "sub", "sup", "a", "code", "br", "u");
@@ -39,16 +46,30 @@ public final class Typesetter {
     private final PdfWriter writer;
     private final float bodyWidth;
     private final float bodyHeight;
+    /** Where the next block begins on the current page (points from the page's foot). */
+    private float y;
+    /** Nothing placed on the current page yet: space above the first block is dropped, as at a page top. */
+    private boolean pageEmpty = true;
 
-    /** One laid-out piece of the flow, with its estimated height. */
+    /** One piece of the flow, with its height. */
     private sealed interface Item permits Block, PageBreak, Group {}
 
-    private record Block(Element element, float height, boolean keepWithNext, String outline) implements Item {}
+    /**
+     * A block and its height: in the flow a {@link Text}, {@link Rule} or {@link PdfPTable}; inside
+     * a table cell an OpenPDF element.
+     */
+    private record Block(Object content, float height, boolean keepWithNext, String outline) implements Item {}
 
     private record PageBreak() implements Item {}
 
     /** Blocks that go on one page where they can (page-break-inside: avoid). */
     private record Group(List<Item> items, boolean keepWithNext) implements Item {}
+
+    /** A paragraph of the flow broken into lines, {@code left} points in from the body's edge. */
+    private record Text(List<LineBreaker.Line> lines, float left, float leading, float before, float after) {}
+
+    /** A rule under a heading: its baseline {@code leading} below the block above. */
+    private record Rule(float left, float leading, float lineWidth, java.awt.Color color, float after) {}
 
     public Typesetter(Fonts fonts, StyleSheet sheet, Document document, PdfWriter writer) {
         this.fonts = fonts;
@@ -57,6 +78,7 @@ public final class Typesetter {
         this.writer = writer;
         this.bodyWidth = document.right() - document.left();
         this.bodyHeight = document.top() - document.bottom();
+        this.y = document.top();
     }
 
     /** Style of an element under the body (for the page furniture). */
@@ -68,7 +90,7 @@ public final class Typesetter {
         return styles.resolve(styles.root(), List.of(), "body", "", "");
     }
 
-    /** A part turned into blocks with their estimated heights, ready to be placed on the pages. */
+    /** A part turned into blocks with their heights, ready to be placed on the pages. */
     public static final class Prepared {
         private final List<Item> items;
 
@@ -83,9 +105,9 @@ public final class Typesetter {
     }
 
     /**
-     * Turns a part into blocks. Touches neither the document nor the writer, so it may run on
-     * another thread than {@link #place} (one preparing thread at a time: the style and width
-     * caches are not shared between threads).
+     * Turns a part into blocks. Touches neither the document nor the writer, so parts may be
+     * prepared on other threads than {@link #place}, several at once (the style, font and width
+     * caches are safe to share and give every thread the same answers).
      */
     public Prepared prepare(Markup.Element root) {
         List<Item> items = new ArrayList<>();
@@ -94,7 +116,7 @@ public final class Typesetter {
         if (body == null) body = root;
         Style s = styles.resolve(styles.root(), ancestors, "body", body.classes(), body.style());
         ancestors.add(new String[] {"body", body.classes()});
-        children(body, s, ancestors, 0, bodyWidth, items);
+        children(body, s, ancestors, 0, bodyWidth, true, items);
         return new Prepared(items);
     }
 
@@ -117,7 +139,7 @@ public final class Typesetter {
     // ---------------------------------------------------------------- flow on the pages
 
     private float remaining() {
-        return writer.getVerticalPosition(true) - document.bottom();
+        return y - document.bottom();
     }
 
     private static float height(Item item) {
@@ -134,15 +156,23 @@ public final class Typesetter {
         for (int i = 0; i < items.size(); i++) {
             Item item = items.get(i);
             if (item instanceof PageBreak) {
-                document.newPage();
+                newPage();
                 continue;
             }
             float needed = height(item);
             boolean keepWithNext = item instanceof Block b ? b.keepWithNext() : ((Group) item).keepWithNext();
             if (keepWithNext && i + 1 < items.size()) needed += Math.min(height(items.get(i + 1)), KEEP_WITH_NEXT_CAP);
-            if ((item instanceof Group || keepWithNext) && needed > remaining() && needed <= bodyHeight) document.newPage();
+            if ((item instanceof Group || keepWithNext) && needed > remaining() && needed <= bodyHeight) newPage();
             add(item);
         }
+    }
+
+    /** Ends the current page unless nothing is on it. */
+    private void newPage() {
+        if (pageEmpty) return;
+        document.newPage();
+        y = document.top();
+        pageEmpty = true;
     }
 
     private void add(Item item) {
@@ -150,13 +180,160 @@ public final class Typesetter {
             for (Item i : g.items()) add(i);
         } else if (item instanceof Block b) {
             if (b.outline() != null) {
-                float y = Math.min(writer.getVerticalPosition(true) + 4, document.top() + 4);
-                new PdfOutline(writer.getDirectContent().getRootOutline(), new PdfDestination(PdfDestination.FITH, y), b.outline(), false);
+                float top = Math.min(y + 4, document.top() + 4);
+                new PdfOutline(writer.getDirectContent().getRootOutline(), new PdfDestination(PdfDestination.FITH, top), b.outline(), false);
             }
-            document.add(b.element());
+            if (b.content() instanceof Text t) write(t);
+            else if (b.content() instanceof Rule r) write(r);
+            else write((PdfPTable) b.content());
         } else {
-            document.newPage();
+            newPage();
         }
+    }
+
+    /** Space above a block; none at the top of a page. */
+    private void spaceBefore(float space) {
+        if (pageEmpty || space <= 0) return;
+        if (space >= remaining()) newPage();
+        else y -= space;
+    }
+
+    private void spaceAfter(float space) {
+        y = Math.max(document.bottom(), y - space);
+    }
+
+    /** Writes a paragraph's lines, carrying on over the page foot line by line. */
+    private void write(Text t) {
+        spaceBefore(t.before());
+        PdfContentByte cb = writer.getDirectContent();
+        float x0 = document.left() + t.left();
+        List<float[]> underlines = new ArrayList<>();
+        boolean open = false;
+        for (LineBreaker.Line line : t.lines()) {
+            if (y - t.leading() < document.bottom() - 0.01f && !pageEmpty) {
+                if (open) endText(cb, underlines);
+                open = false;
+                newPage();
+                cb = writer.getDirectContent();
+            }
+            y -= t.leading();
+            pageEmpty = false;
+            if (line.fragments().isEmpty()) continue;
+            if (!open) {
+                cb.beginText();
+                open = true;
+            }
+            writeLine(cb, line, x0, y, underlines);
+        }
+        if (open) endText(cb, underlines);
+        spaceAfter(t.after());
+    }
+
+    private void writeLine(PdfContentByte cb, LineBreaker.Line line, float x0, float baseline, List<float[]> underlines) {
+        BaseFont face = null;
+        float size = 0;
+        java.awt.Color color = java.awt.Color.BLACK;
+        float rise = 0;
+        for (LineBreaker.Fragment f : line.fragments()) {
+            Style s = f.style();
+            BaseFont fFace = fonts.face(s);
+            if (fFace != face || s.fontSize != size) {
+                cb.setFontAndSize(fFace, s.fontSize);
+                face = fFace;
+                size = s.fontSize;
+            }
+            if (!s.color.equals(color)) {
+                cb.setColorFill(s.color);
+                color = s.color;
+            }
+            if (s.rise != rise) {
+                cb.setTextRise(s.rise);
+                rise = s.rise;
+            }
+            cb.setTextMatrix(x0 + f.x(), baseline);
+            cb.showText(f.text());
+            if (s.underline) {
+                underlines.add(new float[] {x0 + f.x(), baseline + s.rise - s.fontSize / 3, f.width(), s.fontSize / 15,
+                        s.color.getRGB()});
+            }
+        }
+        if (rise != 0) cb.setTextRise(0);
+        if (!color.equals(java.awt.Color.BLACK)) cb.setColorFill(java.awt.Color.BLACK);
+    }
+
+    /** Ends a text object and strokes the underlines of its lines (as OpenPDF's underlined fonts draw them). */
+    private static void endText(PdfContentByte cb, List<float[]> underlines) {
+        cb.endText();
+        if (underlines.isEmpty()) return;
+        cb.saveState();
+        for (float[] u : underlines) {
+            cb.setLineWidth(u[3]);
+            cb.setColorStroke(new java.awt.Color((int) u[4]));
+            cb.moveTo(u[0], u[1]);
+            cb.lineTo(u[0] + u[2], u[1]);
+            cb.stroke();
+        }
+        cb.restoreState();
+        underlines.clear();
+    }
+
+    private void write(Rule r) {
+        if (y - r.leading() < document.bottom()) newPage();
+        y -= r.leading();
+        pageEmpty = false;
+        PdfContentByte cb = writer.getDirectContent();
+        cb.saveState();
+        cb.setLineWidth(r.lineWidth());
+        cb.setColorStroke(r.color());
+        cb.moveTo(document.left() + r.left(), y);
+        cb.lineTo(document.right(), y);
+        cb.stroke();
+        cb.restoreState();
+        spaceAfter(r.after());
+    }
+
+    /**
+     * Places a table's rows: as many whole rows as fit on each page (a row is not split), the
+     * header rows again at the top of every page the table continues on; a table that keeps
+     * together starts a new page where that page holds it whole.
+     */
+    private void write(PdfPTable table) {
+        spaceBefore(table.spacingBefore());
+        int rows = table.size();
+        int headers = Math.min(table.getHeaderRows(), rows);
+        if (table.getKeepTogether()) {
+            float total = table.getTotalHeight();
+            if (total > remaining() && total <= bodyHeight) newPage();
+        }
+        float x = document.left();
+        int next = 0;
+        while (next < rows) {
+            int from = next;
+            float h = 0;
+            if (from > 0 && from < headers) from = headers;
+            boolean continued = next > 0;
+            float headerHeight = 0;
+            if (continued) for (int r = 0; r < headers; r++) headerHeight += table.getRowHeight(r);
+            int to = from;
+            while (to < rows && headerHeight + h + table.getRowHeight(to) <= remaining() + 0.01f) h += table.getRowHeight(to++);
+            boolean onlyHeaders = !continued && to <= headers && to < rows;
+            if ((to == from || onlyHeaders) && !pageEmpty) {
+                newPage();
+                continue;
+            }
+            if (to == from) h += table.getRowHeight(to++);
+            PdfContentByte cb = writer.getDirectContent();
+            if (continued && headers > 0) {
+                table.writeSelectedRows(0, headers, x, y, cb);
+                y -= headerHeight;
+            }
+            table.writeSelectedRows(from, to, x, y, cb);
+            y -= h;
+            pageEmpty = false;
+            next = to;
+            if (next < rows) newPage();
+        }
+        spaceAfter(table.spacingAfter());
     }
 
     // ---------------------------------------------------------------- blocks
@@ -177,8 +354,12 @@ public final class Typesetter {
         return out;
     }
 
-    /** The items of a block element and its descendants, indented by {@code indent} points. */
-    private void block(Markup.Element e, Style parent, List<String[]> ancestors, float indent, float width, List<Item> out) {
+    /**
+     * The items of a block element and its descendants, indented by {@code indent} points; in the
+     * flow ({@code flow}) or for a table cell.
+     */
+    private void block(Markup.Element e, Style parent, List<String[]> ancestors, float indent, float width, boolean flow,
+                       List<Item> out) {
         if (SKIPPED.contains(e.tag())) return;
         Style s = styles.resolve(parent, ancestors, e.tag(), e.classes(), e.style());
         if (s.hidden) return;
@@ -199,10 +380,10 @@ public final class Typesetter {
             for (Object c : e.children()) {
                 if (!(c instanceof Markup.Element li) || !li.tag().equals("li")) continue;
                 Style ls = styles.resolve(s, inner, "li", li.classes(), li.style());
-                String marker = e.tag().equals("ol") ? (++n) + "." : "•";
+                Run marker = new Run(e.tag().equals("ol") ? (++n) + "." : "•", ls);
                 float hang = 4 * Style.MM;
                 Measured p = paragraph(li.children(), ls, with(inner, li), indent + s.marginLeft + s.paddingLeft + hang, -hang, width,
-                        marker, hang);
+                        marker, hang, flow);
                 list.add(new Block(p.element(), p.height(), false, null));
             }
             spaceAround(list, s.marginTop == 0 ? 1.5f * Style.MM : s.marginTop, s.marginBottom == 0 ? 1.5f * Style.MM : s.marginBottom);
@@ -218,50 +399,54 @@ public final class Typesetter {
             return;
         }
         if (inlineOnly(e)) {
-            Measured p = paragraph(e.children(), s, inner, indent + s.marginLeft + s.paddingLeft, s.textIndent, width, null, 0);
+            Measured p = paragraph(e.children(), s, inner, indent + s.marginLeft + s.paddingLeft, s.textIndent, width, null, 0, flow);
             if (p.element() == null) return;
-            Paragraph para = (Paragraph) p.element();
-            para.setSpacingBefore(s.marginTop);
-            float rule = 0;
             if (s.ruleWidth > 0) {
-                Paragraph line = new Paragraph();
-                line.setLeading(s.paddingBottom + s.ruleWidth + 1);
-                line.add(new Chunk(new com.lowagie.text.pdf.draw.LineSeparator(s.ruleWidth, 100, s.ruleColor, Element.ALIGN_LEFT, 0)));
-                line.setIndentationLeft(indent + s.marginLeft);
-                line.setSpacingAfter(s.marginBottom);
-                rule = line.getLeading();
-                out.add(new Block(para, p.height() + s.marginTop, true, outline));
-                out.add(new Block(line, rule + s.marginBottom, s.breakAfterAvoid, null));
+                float leading = s.paddingBottom + s.ruleWidth + 1;
+                float left = indent + s.marginLeft;
+                Object rule;
+                if (flow) {
+                    rule = new Rule(left, leading, s.ruleWidth, s.ruleColor, s.marginBottom);
+                } else {
+                    Paragraph line = new Paragraph();
+                    line.setLeading(leading);
+                    line.add(new Chunk(new com.lowagie.text.pdf.draw.LineSeparator(s.ruleWidth, 100, s.ruleColor, Element.ALIGN_LEFT, 0)));
+                    line.setIndentationLeft(left);
+                    line.setSpacingAfter(s.marginBottom);
+                    rule = line;
+                }
+                out.add(new Block(spacing(p.element(), s.marginTop, 0), p.height() + s.marginTop, true, outline));
+                out.add(new Block(rule, leading + s.marginBottom, s.breakAfterAvoid, null));
                 return;
             }
-            para.setSpacingAfter(s.marginBottom);
-            out.add(new Block(p.element(), p.height() + s.marginTop + s.marginBottom, s.breakAfterAvoid, outline));
+            out.add(new Block(spacing(p.element(), s.marginTop, s.marginBottom), p.height() + s.marginTop + s.marginBottom,
+                    s.breakAfterAvoid, outline));
             return;
         }
         List<Item> mine = new ArrayList<>();
-        children(e, s, inner, indent + s.marginLeft + s.paddingLeft, width, mine);
+        children(e, s, inner, indent + s.marginLeft + s.paddingLeft, width, flow, mine);
         spaceAround(mine, s.marginTop, s.marginBottom);
         if (s.breakInsideAvoid) out.add(new Group(mine, s.breakAfterAvoid));
         else out.addAll(mine);
     }
 
     /** Children of a block: runs of inline content become anonymous paragraphs, blocks recurse. */
-    private void children(Markup.Element e, Style s, List<String[]> inner, float indent, float width, List<Item> out) {
+    private void children(Markup.Element e, Style s, List<String[]> inner, float indent, float width, boolean flow, List<Item> out) {
         List<Object> run = new ArrayList<>();
         for (Object c : e.children()) {
             if (inline(c)) {
                 run.add(c);
                 continue;
             }
-            flushRun(run, s, inner, indent, width, out);
-            block((Markup.Element) c, s, inner, indent, width, out);
+            flushRun(run, s, inner, indent, width, flow, out);
+            block((Markup.Element) c, s, inner, indent, width, flow, out);
         }
-        flushRun(run, s, inner, indent, width, out);
+        flushRun(run, s, inner, indent, width, flow, out);
     }
 
-    private void flushRun(List<Object> run, Style s, List<String[]> inner, float indent, float width, List<Item> out) {
+    private void flushRun(List<Object> run, Style s, List<String[]> inner, float indent, float width, boolean flow, List<Item> out) {
         if (run.isEmpty()) return;
-        Measured p = paragraph(List.copyOf(run), s, inner, indent, 0, width, null, 0);
+        Measured p = paragraph(List.copyOf(run), s, inner, indent, 0, width, null, 0, flow);
         run.clear();
         if (p.element() != null) out.add(new Block(p.element(), p.height(), false, null));
     }
@@ -281,8 +466,8 @@ public final class Typesetter {
         for (int k = first ? 0 : out.size() - 1; k >= 0 && k < out.size(); k += first ? 1 : -1) {
             Item i = out.get(k);
             if (i instanceof Block b) {
-                spacing(b.element(), first ? delta : 0, first ? 0 : delta);
-                out.set(k, new Block(b.element(), b.height() + delta, b.keepWithNext(), b.outline()));
+                Object spaced = spacing(b.content(), first ? delta : 0, first ? 0 : delta);
+                out.set(k, new Block(spaced, b.height() + delta, b.keepWithNext(), b.outline()));
                 return out;
             }
             if (i instanceof Group g) {
@@ -293,30 +478,36 @@ public final class Typesetter {
         return out;
     }
 
-    private static void spacing(Element e, float before, float after) {
-        if (e instanceof Paragraph p) {
+    /** A block's content with more space above and below (OpenPDF elements are changed in place). */
+    private static Object spacing(Object content, float before, float after) {
+        if (content instanceof Text t) return new Text(t.lines(), t.left(), t.leading(), t.before() + before, t.after() + after);
+        if (content instanceof Rule r) return new Rule(r.left(), r.leading() + before, r.lineWidth(), r.color(), r.after() + after);
+        if (content instanceof Paragraph p) {
             p.setSpacingBefore(p.getSpacingBefore() + before);
             p.setSpacingAfter(p.getSpacingAfter() + after);
-        } else if (e instanceof PdfPTable t) {
+        } else if (content instanceof PdfPTable t) {
             t.setSpacingBefore(t.spacingBefore() + before);
             t.setSpacingAfter(t.spacingAfter() + after);
         }
+        return content;
     }
 
     // ---------------------------------------------------------------- paragraphs
 
     /** An element and its estimated height. */
-    private record Measured(Element element, float height) {
+    private record Measured(Object element, float height) {
         PdfPTable table() {
             return (PdfPTable) element;
         }
     }
 
-    /** A text run with its font, before it becomes a chunk. */
-    private record Run(String text, Style style) {}
 
+    /**
+     * A paragraph of inline content: in the flow broken into lines here, for a table cell an
+     * OpenPDF paragraph (with the estimate of its height a greedy break gives).
+     */
     private Measured paragraph(List<Object> nodes, Style s, List<String[]> ancestors, float indentLeft, float firstIndent,
-                               float width, String marker, float markerWidth) {
+                               float width, Run marker, float markerWidth, boolean flow) {
         List<Run> runs = new ArrayList<>();
         List<Run> right = new ArrayList<>();
         List<Float> tabs = new ArrayList<>();
@@ -324,19 +515,23 @@ public final class Typesetter {
         trim(runs);
         trim(right);
         if (runs.isEmpty() && right.isEmpty() && marker == null) return new Measured(null, 0);
+        float lineWidth = width - indentLeft;
+        if (flow) {
+            List<LineBreaker.Line> lines = LineBreaker.lines(fonts, runs, right, tabs, lineWidth, firstIndent, marker, markerWidth, s.align);
+            return new Measured(new Text(lines, indentLeft, s.leading(), 0, 0), lines.size() * s.leading());
+        }
         Paragraph p = new Paragraph();
         p.setFont(fonts.font(s));
         p.setLeading(s.leading());
         p.setAlignment(s.align);
         p.setIndentationLeft(indentLeft);
         p.setFirstLineIndent(firstIndent);
-        float lineWidth = width - indentLeft;
         float x = firstIndent;
         if (marker != null) {
-            Chunk m = new Chunk(marker, fonts.font(s));
-            float w = fonts.width(s, marker);
+            Chunk m = new Chunk(marker.text(), fonts.font(marker.style()));
+            float w = fonts.width(marker.style(), marker.text());
             p.add(m);
-            p.add(advance(s, Math.max(1, markerWidth - w)));
+            p.add(advance(marker.style(), Math.max(1, markerWidth - w)));
             x += markerWidth;
         }
         int t = 0;
@@ -548,15 +743,15 @@ public final class Typesetter {
     private float fill(PdfPCell cell, Markup.Element e, Style s, List<String[]> inner, float width) {
         List<Item> items = new ArrayList<>();
         if (inlineOnly(e)) {
-            Measured p = paragraph(e.children(), s, inner, 0, s.textIndent, width, null, 0);
+            Measured p = paragraph(e.children(), s, inner, 0, s.textIndent, width, null, 0, false);
             if (p.element() != null) items.add(new Block(p.element(), p.height(), false, null));
         } else {
-            children(e, s, inner, 0, width, items);
+            children(e, s, inner, 0, width, false, items);
         }
         float h = 0;
         for (Item i : flatten(items)) {
             Block b = (Block) i;
-            cell.addElement(b.element());
+            cell.addElement((Element) b.content());
             h += b.height();
         }
         return h;
