@@ -49,7 +49,16 @@ public final class Benchmark {
         }
     }
 
-    /** The note's layout against bare OpenPDF writing the same text, both to a file, in the same process. */
+    /** Runs before the measured ones, so that the JIT compiler has finished with the code measured. */
+    private static final int WARM_UPS = 3;
+    private static final int MEASURED = 3;
+
+    /**
+     * The note's layout against bare OpenPDF writing the same text, both to a file, in the same
+     * process. Each is run {@value #WARM_UPS} times unmeasured and then {@value #MEASURED} times;
+     * the median is compared (the state of a long-running process, where the JIT compiler no
+     * longer competes for the cores). The run after a single warm-up is printed beside it.
+     */
     private static void note(ReferenceData data, int n) throws Exception {
         Installation inst = InputReader.parse("synthetic.json",
                 SyntheticInstallation.toJson(SyntheticInstallation.generate(n, 1)), true);
@@ -59,12 +68,10 @@ public final class Benchmark {
         Path dir = Files.createTempDirectory("feedernote-bench");
         try {
             Path pdf = dir.resolve("note.pdf");
-            // once to load classes and compile the hot paths, as in a long-running process; then measured
-            renderer.write(NoteBuilder.build(result, data, fingerprint, Version.engine()), inst.project().date(), pdf, NoteRenderer.Progress.NONE);
-            long t0 = System.nanoTime();
-            NoteView view = NoteBuilder.build(result, data, fingerprint, Version.engine());
-            renderer.write(view, inst.project().date(), pdf, NoteRenderer.Progress.NONE);
-            double noteSeconds = (System.nanoTime() - t0) / 1e9;
+            double[] noteSeconds = runs(() -> {
+                NoteView view = NoteBuilder.build(result, data, fingerprint, Version.engine());
+                renderer.write(view, inst.project().date(), pdf, NoteRenderer.Progress.NONE);
+            });
             String text;
             int pages;
             try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
@@ -72,18 +79,42 @@ public final class Benchmark {
                 text = new PDFTextStripper().getText(doc);
             }
             Path bare = dir.resolve("bare.pdf");
-            bare(text, bare);
-            t0 = System.nanoTime();
-            bare(text, bare);
-            double baseSeconds = (System.nanoTime() - t0) / 1e9;
-            System.out.printf(Locale.ROOT, "note   %6d circuits: %d pages in %.1f s (%.0f pages/s, trace to view to XHTML to PDF); "
-                            + "bare OpenPDF writing the same text: %.1f s; ratio %.2f%n",
-                    n, pages, noteSeconds, pages / noteSeconds, baseSeconds, noteSeconds / baseSeconds);
+            double[] bareSeconds = runs(() -> bare(text, bare));
+            double note = median(noteSeconds);
+            double base = median(bareSeconds);
+            System.out.printf(Locale.ROOT, "note   %6d circuits: %d pages in %.1f s (%.0f pages/s, trace to view to XHTML to PDF; median of %d "
+                            + "after %d warm-ups); bare OpenPDF writing the same text: %.1f s; ratio %.2f "
+                            + "(after one warm-up: %.1f s against %.1f s, ratio %.2f)%n",
+                    n, pages, note, pages / note, MEASURED, WARM_UPS, base, note / base,
+                    noteSeconds[0], bareSeconds[0], noteSeconds[0] / bareSeconds[0]);
         } finally {
             try (var files = Files.walk(dir)) {
                 for (Path p : files.sorted(java.util.Comparator.reverseOrder()).toList()) Files.deleteIfExists(p);
             }
         }
+    }
+
+    private interface Run {
+        void run() throws Exception;
+    }
+
+    /** Seconds of the run after the first warm-up, then of each measured run. */
+    private static double[] runs(Run run) throws Exception {
+        double[] out = new double[1 + MEASURED];
+        for (int i = 0; i < WARM_UPS + MEASURED; i++) {
+            long t0 = System.nanoTime();
+            run.run();
+            double seconds = (System.nanoTime() - t0) / 1e9;
+            if (i == 1) out[0] = seconds;
+            if (i >= WARM_UPS) out[1 + i - WARM_UPS] = seconds;
+        }
+        return out;
+    }
+
+    private static double median(double[] runs) {
+        double[] measured = java.util.Arrays.copyOfRange(runs, 1, runs.length);
+        java.util.Arrays.sort(measured);
+        return measured[measured.length / 2];
     }
 
     /** The rendering floor: the same text in paragraphs, same font, no layout engine. */
