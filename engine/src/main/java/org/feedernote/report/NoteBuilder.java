@@ -160,9 +160,28 @@ public final class NoteBuilder {
                 "BS 7671:2018 Appendix 4 — voltage drop in mV/A/m (the form of the figures; values here are derived)");
     }
 
+    /**
+     * What the other documents a note may cite are about, by number (any edition); subjects from
+     * the standards' titles, shortened (from memory).
+     */
+    private static final Map<String, String> SUBJECTS = Map.ofEntries(
+            Map.entry("IEC 60364-5-54", "Selection and erection: earthing arrangements and protective conductors"),
+            Map.entry("IEC 60364-1", "Fundamental principles, assessment of general characteristics, definitions"),
+            Map.entry("IEC 60909-0", "Short-circuit currents in three-phase a.c. systems: calculation of currents"),
+            Map.entry("IEC 60898-1", "Circuit-breakers for overcurrent protection for household and similar installations (a.c.)"),
+            Map.entry("EN 60898-1", "Circuit-breakers for overcurrent protection for household and similar installations (a.c.)"),
+            Map.entry("IEC 60947-2", "Low-voltage switchgear and controlgear: circuit-breakers"),
+            Map.entry("IEC 61009-1", "Residual current operated circuit-breakers with integral overcurrent protection (RCBOs)"),
+            Map.entry("IEC 61008-1", "Residual current operated circuit-breakers without integral overcurrent protection (RCCBs)"),
+            Map.entry("IEC 60269-1", "Low-voltage fuses: general requirements"),
+            Map.entry("IEC 61439-1", "Low-voltage switchgear and controlgear assemblies: general rules"),
+            Map.entry("IEC 60038", "IEC standard voltages"),
+            Map.entry("IEC 60034-2-1", "Rotating electrical machines: losses and efficiency from tests"));
+
     static String documentTitle(String doc) {
         for (String s : standards()) if (s.startsWith(doc)) return s.substring(doc.length()).replaceFirst("^\\s*—\\s*", "");
-        return "";
+        String number = doc.replaceFirst(":\\d{4}$", "");
+        return SUBJECTS.getOrDefault(number, "");
     }
 
     static List<String> assumptions() {

@@ -69,6 +69,11 @@ class NoteStructureTest {
     }
 
     @Test
+    void everyDocumentInTheSourcesAppendixSaysWhatItIsAbout() {
+        for (SourceView d : note.view().documents()) assertFalse(d.detail().isBlank(), d.citation() + " has no subject in Appendix A");
+    }
+
+    @Test
     void coverCarriesStampSignaturesCautionsAndFingerprint() {
         assertTrue(text.contains(note.result().pass() ? "CONFORMS" : "DOES NOT CONFORM"), "the stamp states the verdict");
         assertTrue(text.contains("FOR REVIEW"));
