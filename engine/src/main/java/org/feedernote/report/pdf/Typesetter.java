@@ -99,11 +99,6 @@ public final class Typesetter {
         }
     }
 
-    /** Lays out one part (a body element) at the current position. */
-    public void typeset(Markup.Element root) {
-        place(prepare(root));
-    }
-
     /**
      * Turns a part into blocks. Touches neither the document nor the writer, so parts may be
      * prepared on other threads than {@link #place}, several at once (the style, font and width
@@ -548,7 +543,8 @@ public final class Typesetter {
             p.add(new Chunk(new VerticalPositionMark()));
             for (Run r : right) if (r.text() != null) p.add(chunk(r));
         }
-        float lines = lines(runs, right, lineWidth, firstIndent + (marker == null ? 0 : markerWidth));
+        // OpenPDF breaks the cell's lines itself (at hyphens too); ours is the estimate of its height.
+        int lines = LineBreaker.lines(fonts, runs, right, tabs, lineWidth, firstIndent, marker, markerWidth, s.align).size();
         return new Measured(p, lines * s.leading());
     }
 
@@ -648,50 +644,6 @@ public final class Typesetter {
                 runs.set(k, new Run(cur.text().substring(1), cur.style()));
             }
         }
-    }
-
-    /** Lines a greedy break would make: the estimate behind keep-together and keep-with-next. */
-    private float lines(List<Run> runs, List<Run> right, float width, float start) {
-        if (width <= 10) return 1;
-        int lines = 1;
-        float x = start;
-        for (Run r : runs) {
-            if (r.text() == null) continue;
-            BaseFont face = fonts.face(r.style());
-            float size = r.style().fontSize;
-            float space = fonts.width(face, " ", size);
-            int from = 0;
-            String text = r.text();
-            while (from < text.length()) {
-                int nl = text.indexOf('\n', from);
-                int sp = text.indexOf(' ', from);
-                int end = sp < 0 ? text.length() : sp;
-                if (nl >= 0 && nl < end) end = nl;
-                float w = fonts.width(face, text.substring(from, end), size);
-                if (x + w > width && x > 0) {
-                    lines++;
-                    x = 0;
-                }
-                x += w;
-                while (w > width && x > width) {
-                    lines++;
-                    x -= width;
-                }
-                if (end < text.length() && text.charAt(end) == '\n') {
-                    lines++;
-                    x = 0;
-                } else if (end < text.length()) {
-                    x += space;
-                }
-                from = end + 1;
-            }
-        }
-        if (!right.isEmpty()) {
-            float w = 0;
-            for (Run r : right) if (r.text() != null) w += fonts.width(r.style(), r.text());
-            if (x + w + 6 > width) lines++;
-        }
-        return lines;
     }
 
     private static String text(Markup.Element e) {
