@@ -72,4 +72,20 @@ class NoteLayoutTest {
             assertFalse(body.get(0).startsWith("= "), "page " + (p + 1) + " begins inside a step: " + body.get(0));
         }
     }
+
+    @Test
+    void aTableContinuedOnTheNextPageRepeatsItsHeaderRow() {
+        // The summary schedule of the sports hall runs over two pages.
+        String header = "Circuit From → to Load";
+        int continued = 0;
+        for (int p = 1; p < pages.size(); p++) {
+            List<String> previous = body(pages.get(p - 1));
+            List<String> body = body(pages.get(p));
+            boolean tableGoesOn = previous.stream().anyMatch(l -> l.startsWith(header)) && previous.get(previous.size() - 1).contains("PASS");
+            if (!tableGoesOn) continue;
+            continued++;
+            assertTrue(body.get(0).startsWith(header), "page " + (p + 1) + " continues the table without its header: " + body.get(0));
+        }
+        assertTrue(continued > 0, "the sports hall's summary schedule should run over a page break");
+    }
 }
