@@ -59,6 +59,9 @@ public final class NoteRenderer {
 
     private final Configuration freemarker;
 
+    /** Deflate level of the attached input and trace. */
+    private static final int ATTACHMENT_COMPRESSION = 6;
+
     /** @param templates a folder holding a copy of the templates, or null for the packaged ones */
     public NoteRenderer(Path templates) throws IOException {
         Configuration cfg = new Configuration(Configuration.VERSION_2_3_34);
@@ -180,9 +183,11 @@ public final class NoteRenderer {
         info.put(PdfName.CREATIONDATE, date);
         info.put(PdfName.MODDATE, date);
         for (Attachment a : attachments) {
+            // zlib's default level: OpenPDF's "compress" means level 9, three times slower on a
+            // long trace for a file a few per cent smaller.
             PdfFileSpecification spec = a.file() != null
-                    ? PdfFileSpecification.fileEmbedded(writer, a.file().toString(), a.name(), null, true)
-                    : PdfFileSpecification.fileEmbedded(writer, null, a.name(), a.content(), true);
+                    ? PdfFileSpecification.fileEmbedded(writer, a.file().toString(), a.name(), null, ATTACHMENT_COMPRESSION)
+                    : PdfFileSpecification.fileEmbedded(writer, null, a.name(), a.content(), ATTACHMENT_COMPRESSION);
             writer.addFileAttachment(a.description(), spec);
         }
         placeParts(note, typesetter, progress);
@@ -219,8 +224,8 @@ public final class NoteRenderer {
     /**
      * The front matter, every worked section and the appendices, in order. Building a part's view,
      * running its template, parsing the markup and turning it into blocks happens on a preparing
-     * thread, a few parts ahead of the thread that places the blocks on the pages in order; when the
-     * next part is not ready and not begun, the placing thread prepares it itself rather than wait
+     * thread, a few parts ahead of the thread that places the blocks on the pages in order; while
+     * the next part is not ready, the placing thread prepares parts nobody has begun rather than wait
      * (preparing costs more than placing). Each part's blocks depend on that part alone, so the
      * pages, and the bytes, come out the same as if one thread did everything.
      */
@@ -237,7 +242,9 @@ public final class NoteRenderer {
             int next = 0;
             while (next < parts && ahead.size() < PREPARED_AHEAD) ahead.add(schedule(preparing, prepareTask(note, typesetter, next++, sections)));
             for (int i = 0; i < parts; i++) {
-                Typesetter.Prepared part = await(ahead.removeFirst());
+                java.util.concurrent.FutureTask<Typesetter.Prepared> first = ahead.removeFirst();
+                helpWhileWaiting(first, ahead);
+                Typesetter.Prepared part = await(first);
                 if (next < parts) ahead.add(schedule(preparing, prepareTask(note, typesetter, next++, sections)));
                 typesetter.place(part);
                 if (i >= 1 && i <= sections) progress.sectionDone(i, sections);
@@ -264,9 +271,21 @@ public final class NoteRenderer {
         return future;
     }
 
-    /** The prepared part; prepared here if the preparing thread has not begun it (its own later run does nothing). */
+    /**
+     * While the part to place next is not ready, prepares here the first part nobody has begun:
+     * that part itself, or one behind it, so that both cores prepare when preparing is the slower
+     * side. A task's run does nothing once another thread has begun or finished it.
+     */
+    private static void helpWhileWaiting(java.util.concurrent.FutureTask<Typesetter.Prepared> wanted,
+                                         java.util.Collection<java.util.concurrent.FutureTask<Typesetter.Prepared>> later) {
+        wanted.run();
+        for (java.util.concurrent.FutureTask<Typesetter.Prepared> task : later) {
+            if (wanted.isDone()) return;
+            if (!task.isDone()) task.run();
+        }
+    }
+
     private static Typesetter.Prepared await(java.util.concurrent.FutureTask<Typesetter.Prepared> future) throws IOException {
-        future.run();
         try {
             return future.get();
         } catch (InterruptedException e) {
