@@ -4,10 +4,13 @@ import static org.junit.jupiter.api.Assertions.*;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.regex.Pattern;
 
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.interactive.documentnavigation.destination.PDPageDestination;
+import org.apache.pdfbox.pdmodel.interactive.documentnavigation.outline.PDOutlineItem;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -19,12 +22,19 @@ class NoteLayoutTest {
     /** A step or section heading: "4.6.11  Resistance of the run". */
     private static final Pattern HEADING = Pattern.compile("^\\d+(\\.\\d+)+\\s+\\S.*");
     static List<List<String>> pages;
+    /** Each bookmark's title and the page (from 1) it opens. */
+    static List<Map.Entry<String, Integer>> bookmarks;
 
     @BeforeAll
     static void render() throws Exception {
         NoteFixture note = NoteFixture.of(Fixtures.inputs().resolve("sports-hall.yaml"));
         pages = new ArrayList<>();
+        bookmarks = new ArrayList<>();
         try (PDDocument doc = Loader.loadPDF(note.pdf())) {
+            for (PDOutlineItem item : doc.getDocumentCatalog().getDocumentOutline().children()) {
+                PDPageDestination dest = (PDPageDestination) item.getDestination();
+                bookmarks.add(Map.entry(item.getTitle(), doc.getPages().indexOf(dest.getPage()) + 1));
+            }
             PDFTextStripper stripper = new PDFTextStripper();
             stripper.setSortByPosition(true);
             for (int p = 1; p <= doc.getNumberOfPages(); p++) {
@@ -87,5 +97,16 @@ class NoteLayoutTest {
             assertTrue(body.get(0).startsWith(header), "page " + (p + 1) + " continues the table without its header: " + body.get(0));
         }
         assertTrue(continued > 0, "the sports hall's summary schedule should run over a page break");
+    }
+
+    @Test
+    void everyBookmarkOpensThePageThatCarriesItsHeading() {
+        assertTrue(bookmarks.size() > 10, "a bookmark per top-level section");
+        for (Map.Entry<String, Integer> b : bookmarks) {
+            String heading = b.getKey().replaceAll("\\s+", " ");
+            List<String> page = pages.get(b.getValue() - 1);
+            assertTrue(page.stream().anyMatch(l -> l.replaceAll("\\s+", " ").startsWith(heading.substring(0, Math.min(heading.length(), 20)))),
+                    "bookmark '" + heading + "' opens page " + b.getValue() + ", which does not carry it");
+        }
     }
 }

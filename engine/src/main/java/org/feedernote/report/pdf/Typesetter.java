@@ -174,16 +174,22 @@ public final class Typesetter {
         if (item instanceof Group g) {
             for (Item i : g.items()) add(i);
         } else if (item instanceof Block b) {
-            if (b.outline() != null) {
-                float top = Math.min(y + 4, document.top() + 4);
-                new PdfOutline(writer.getDirectContent().getRootOutline(), new PdfDestination(PdfDestination.FITH, top), b.outline(), false);
-            }
-            if (b.content() instanceof Text t) write(t);
+            if (b.content() instanceof Text t) write(t, b.outline());
             else if (b.content() instanceof Rule r) write(r);
-            else write((PdfPTable) b.content());
+            else write((PdfPTable) b.content(), b.outline());
         } else {
             newPage();
         }
+    }
+
+    /**
+     * A bookmark (PDF outline entry) to the current position: made once the block's space above
+     * and any page break before its first line are behind, so that it lands on the block's page.
+     */
+    private void bookmark(String title) {
+        if (title == null) return;
+        float top = Math.min(y + 4, document.top() + 4);
+        new PdfOutline(writer.getDirectContent().getRootOutline(), new PdfDestination(PdfDestination.FITH, top), title, false);
     }
 
     /** Space above a block; none at the top of a page. */
@@ -198,7 +204,7 @@ public final class Typesetter {
     }
 
     /** Writes a paragraph's lines, carrying on over the page foot line by line. */
-    private void write(Text t) {
+    private void write(Text t, String outline) {
         spaceBefore(t.before());
         PdfContentByte cb = writer.getDirectContent();
         float x0 = document.left() + t.left();
@@ -211,6 +217,8 @@ public final class Typesetter {
                 newPage();
                 cb = writer.getDirectContent();
             }
+            bookmark(outline);
+            outline = null;
             y -= t.leading();
             pageEmpty = false;
             if (line.fragments().isEmpty()) continue;
@@ -292,7 +300,7 @@ public final class Typesetter {
      * header rows again at the top of every page the table continues on; a table that keeps
      * together starts a new page where that page holds it whole.
      */
-    private void write(PdfPTable table) {
+    private void write(PdfPTable table, String outline) {
         spaceBefore(table.spacingBefore());
         int rows = table.size();
         int headers = Math.min(table.getHeaderRows(), rows);
@@ -318,6 +326,8 @@ public final class Typesetter {
             }
             if (to == from) h += table.getRowHeight(to++);
             PdfContentByte cb = writer.getDirectContent();
+            bookmark(outline);
+            outline = null;
             if (continued && headers > 0) {
                 table.writeSelectedRows(0, headers, x, y, cb);
                 y -= headerHeight;
