@@ -15,6 +15,7 @@ import com.lowagie.text.pdf.PdfContentByte;
 import com.lowagie.text.pdf.PdfDestination;
 import com.lowagie.text.pdf.PdfOutline;
 import com.lowagie.text.pdf.PdfPCell;
+import com.lowagie.text.pdf.PdfPRow;
 import com.lowagie.text.pdf.PdfPTable;
 import com.lowagie.text.pdf.PdfWriter;
 import com.lowagie.text.pdf.draw.VerticalPositionMark;
@@ -296,21 +297,21 @@ public final class Typesetter {
     }
 
     /**
-     * Places a table's rows: as many whole rows as fit on each page (a row is not split), the
-     * header rows again at the top of every page the table continues on; a table that keeps
-     * together starts a new page where that page holds it whole.
+     * Places a table's rows: as many whole rows as fit on each page, the header rows again at the
+     * top of every page the table continues on; a row that does not fit begins the next page and
+     * is split only when it is taller than a page; a table that keeps together starts a new page
+     * where that page holds it whole.
      */
     private void write(PdfPTable table, String outline) {
         spaceBefore(table.spacingBefore());
-        int rows = table.size();
-        int headers = Math.min(table.getHeaderRows(), rows);
+        int headers = Math.min(table.getHeaderRows(), table.size());
         if (table.getKeepTogether()) {
             float total = table.getTotalHeight();
             if (total > remaining() && total <= bodyHeight) newPage();
         }
         float x = document.left();
         int next = 0;
-        while (next < rows) {
+        while (next < table.size()) {
             int from = next;
             float h = 0;
             if (from > 0 && from < headers) from = headers;
@@ -318,13 +319,19 @@ public final class Typesetter {
             float headerHeight = 0;
             if (continued) for (int r = 0; r < headers; r++) headerHeight += table.getRowHeight(r);
             int to = from;
-            while (to < rows && headerHeight + h + table.getRowHeight(to) <= remaining() + 0.01f) h += table.getRowHeight(to++);
-            boolean onlyHeaders = !continued && to <= headers && to < rows;
+            while (to < table.size() && headerHeight + h + table.getRowHeight(to) <= remaining() + 0.01f) h += table.getRowHeight(to++);
+            boolean onlyHeaders = !continued && to <= headers && to < table.size();
             if ((to == from || onlyHeaders) && !pageEmpty) {
                 newPage();
                 continue;
             }
-            if (to == from) h += table.getRowHeight(to++);
+            if (to == from || onlyHeaders) {
+                // On an empty page, a row taller than the page: what fits goes here, the rest on the
+                // next page, as OpenPDF itself splits such rows.
+                PdfPRow rest = table.getRow(to).splitRow(table, to, remaining() - headerHeight - h);
+                if (rest != null) table.getRows().add(to + 1, rest);
+                h += table.getRowHeight(to++);
+            }
             PdfContentByte cb = writer.getDirectContent();
             bookmark(outline);
             outline = null;
@@ -336,7 +343,7 @@ public final class Typesetter {
             y -= h;
             pageEmpty = false;
             next = to;
-            if (next < rows) newPage();
+            if (next < table.size()) newPage();
         }
         spaceAfter(table.spacingAfter());
     }
