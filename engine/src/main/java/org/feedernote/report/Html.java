@@ -49,4 +49,29 @@ public final class Html {
         return b.toString();
     }
 
+    /**
+     * Like {@link #math(String)}, but the given words (the installation's ids that hold an
+     * underscore, such as DB_1) are only escaped: an id is printed as written, never as a symbol
+     * with a subscript. The longest word wins where two begin at the same place.
+     */
+    public static String math(String text, java.util.List<String> verbatim) {
+        if (verbatim.isEmpty() || text.indexOf('_') < 0) return math(text);
+        StringBuilder b = new StringBuilder();
+        int from = 0;
+        while (true) {
+            int at = -1;
+            String word = null;
+            for (String w : verbatim) {
+                int k = text.indexOf(w, from);
+                if (k >= 0 && (at < 0 || k < at || (k == at && w.length() > word.length()))) {
+                    at = k;
+                    word = w;
+                }
+            }
+            if (at < 0) break;
+            b.append(math(text.substring(from, at))).append(escape(word));
+            from = at + word.length();
+        }
+        return b.append(math(text.substring(from))).toString();
+    }
 }

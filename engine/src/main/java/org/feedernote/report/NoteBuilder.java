@@ -80,7 +80,14 @@ public final class NoteBuilder {
         Map<String, Step> index = new java.util.HashMap<>();
         for (Step s : TraceWalk.steps(result.trace())) index.put(s.id(), s);
         for (Section s : result.trace().sections()) circuitSection.put(s.id(), Integer.toString(n++));
-        List<SectionView> sections = new LazySections(result.trace().sections(), index);
+        Set<String> ids = new TreeSet<>();
+        for (CircuitResult c : result.circuits()) {
+            ids.add(c.id());
+            ids.add(c.circuit().from());
+            if (c.circuit().to() != null) ids.add(c.circuit().to());
+        }
+        ids.removeIf(id -> id.indexOf('_') < 0);
+        List<SectionView> sections = new LazySections(result.trace().sections(), new Context(index, List.copyOf(ids)));
 
         List<SummaryRow> summary = new ArrayList<>();
         for (CircuitResult c : result.circuits()) summary.add(summaryRow(c, circuitSection.get(c.id())));
@@ -252,16 +259,16 @@ public final class NoteBuilder {
      */
     private static final class LazySections extends java.util.AbstractList<SectionView> {
         private final List<Section> sections;
-        private final Map<String, Step> index;
+        private final Context cx;
 
-        LazySections(List<Section> sections, Map<String, Step> index) {
+        LazySections(List<Section> sections, Context cx) {
             this.sections = sections;
-            this.index = index;
+            this.cx = cx;
         }
 
         @Override public SectionView get(int i) {
             Section s = sections.get(i);
-            return section(s, Integer.toString(i + 3), !s.id().equals("supply"), index);
+            return section(s, Integer.toString(i + 3), !s.id().equals("supply"), cx);
         }
 
         @Override public int size() {
@@ -269,13 +276,24 @@ public final class NoteBuilder {
         }
     }
 
-    static SectionView section(Section s, String number, boolean newPage, Map<String, Step> index) {
+    /**
+     * What the views of the worked sections need: the steps by id, and the installation's ids that
+     * hold an underscore, which are printed as written (never as a symbol with a subscript).
+     */
+    record Context(Map<String, Step> index, List<String> verbatim) {
+        String math(String text) {
+            return Html.math(text, verbatim);
+        }
+    }
+
+    static SectionView section(Section s, String number, boolean newPage, Context cx) {
         List<StepView> steps = new ArrayList<>();
         List<SectionView> subs = new ArrayList<>();
         int i = 1;
-        for (Step step : s.steps()) steps.add(step(step, number + "." + i++, index));
-        for (Section sub : s.sections()) subs.add(section(sub, number + "." + i++, false, index));
-        return new SectionView(number, "s-" + number, s.title(), s.subtitle(), newPage, steps, subs);
+        for (Step step : s.steps()) steps.add(step(step, number + "." + i++, cx));
+        for (Section sub : s.sections()) subs.add(section(sub, number + "." + i++, false, cx));
+        String subtitle = s.subtitle() == null ? "" : s.subtitle();
+        return new SectionView(number, "s-" + number, s.title(), subtitle, cx.math(s.title()), cx.math(subtitle), newPage, steps, subs);
     }
 
     static String valueHtml(double value, String unit) {
@@ -284,8 +302,8 @@ public final class NoteBuilder {
     }
 
     /** A bound value at its display precision; a given or tabulated value is shown as written. */
-    static String boundHtml(Q q, Map<String, Step> index) {
-        Step source = index.get(q.id());
+    static String boundHtml(Q q, Context cx) {
+        Step source = cx.index().get(q.id());
         if (source instanceof Step.Input || source instanceof Step.Lookup) {
             String text = NumberFormatPolicy.given(q.value(), q.unit());
             return Html.math(q.value() < 0 ? "(" + text + ")" : text);
@@ -293,18 +311,18 @@ public final class NoteBuilder {
         return valueHtml(q.value(), q.unit());
     }
 
-    static StepView step(Step step, String number, Map<String, Step> index) {
+    static StepView step(Step step, String number, Context cx) {
         if (step instanceof Step.Formula f) {
             Map<String, Q> bound = new LinkedHashMap<>();
             f.bindings().forEach(b -> bound.put(b.var().key(), b.q()));
-            String symbolic = Html.math(f.symbol()) + " = " + Html.math(Printer.symbolic(f.expr()));
+            String symbolic = cx.math(f.symbol()) + " = " + cx.math(Printer.symbolic(f.expr()));
             String substituted = "= " + Printer.substituted(f.expr(), v -> {
                 Q q = bound.get(v.key());
-                return "\u0001" + boundHtml(q, index) + "\u0002";
+                return "\u0001" + boundHtml(q, cx) + "\u0002";
             });
-            substituted = unwrapMarked(substituted);
+            substituted = unwrapMarked(substituted, cx);
             String result = "= " + valueHtml(f.value(), f.unit());
-            return view(number, "formula", f.title(), f.form(), symbolic, substituted, result, f.reference(), "", "", "", true);
+            return view(cx, number, "formula", f.title(), f.form(), symbolic, substituted, result, f.reference(), "", "", "", true);
         }
         if (step instanceof Step.Input in) {
             String origin = switch (in.origin()) {
@@ -312,52 +330,52 @@ public final class NoteBuilder {
                 case DEFAULT -> "default (" + in.keyPath() + " not given): " + in.reference();
                 case DERIVED -> in.reference();
             };
-            return view(number, "input", in.title(), "", Html.math(in.symbol()) + " = " + Html.math(NumberFormatPolicy.given(in.value(), in.unit())),
+            return view(cx, number, "input", in.title(), "", cx.math(in.symbol()) + " = " + cx.math(NumberFormatPolicy.given(in.value(), in.unit())),
                     "", "", origin, "", "", "", true);
         }
         if (step instanceof Step.Lookup l) {
             String source = l.table().citation() + " — " + l.row() + ", " + l.column() + (l.table().fromMemory() ? " (from memory)" : "");
-            return view(number, "lookup", l.title(), "", Html.math(l.symbol()) + " = " + Html.math(NumberFormatPolicy.given(l.value(), l.unit())),
+            return view(cx, number, "lookup", l.title(), "", cx.math(l.symbol()) + " = " + cx.math(NumberFormatPolicy.given(l.value(), l.unit())),
                     "", "", source, "", "", "", true);
         }
         if (step instanceof Step.Factor fa) {
-            return view(number, "factor", fa.title(), "", Html.math(fa.symbol()) + " = " + valueHtml(fa.value(), ""),
+            return view(cx, number, "factor", fa.title(), "", cx.math(fa.symbol()) + " = " + valueHtml(fa.value(), ""),
                     "", "", fa.reference(), fa.reason(), "", "", true);
         }
         if (step instanceof Step.Check c) {
-            String line = Html.math(c.value().symbol()) + " = " + valueHtml(c.value().value(), c.value().unit()) + " " + Html.escape(c.comparison())
-                    + " " + valueHtml(c.limit().value(), c.limit().unit()) + " = " + Html.math(c.limit().symbol());
-            return view(number, "check", c.title(), "limit " + NumberFormatPolicy.quantity(c.limit().value(), c.limit().unit()),
+            String line = cx.math(c.value().symbol()) + " = " + valueHtml(c.value().value(), c.value().unit()) + " " + Html.escape(c.comparison())
+                    + " " + valueHtml(c.limit().value(), c.limit().unit()) + " = " + cx.math(c.limit().symbol());
+            return view(cx, number, "check", c.title(), "limit " + NumberFormatPolicy.quantity(c.limit().value(), c.limit().unit()),
                     line, "", "", c.reference(), "", "", "", c.pass());
         }
         if (step instanceof Step.Decision d) {
-            return view(number, "decision", d.title(), "", "", "", "", d.reference(), d.because(), d.outcome(), "", true);
+            return view(cx, number, "decision", d.title(), "", "", "", "", d.reference(), d.because(), d.outcome(), "", true);
         }
         Step.Note note = (Step.Note) step;
-        return view(number, "note", note.title(), "", "", "", "", note.reference(), "", "", note.text(), true);
+        return view(cx, number, "note", note.title(), "", "", "", "", note.reference(), "", "", note.text(), true);
     }
 
     /** Every text field of a step view is escaped, with symbol subscripts marked up. */
-    private static StepView view(String number, String kind, String title, String form, String symbolic, String substituted,
+    private static StepView view(Context cx, String number, String kind, String title, String form, String symbolic, String substituted,
                                  String result, String source, String because, String outcome, String text, boolean pass) {
-        return new StepView(number, kind, Html.math(title), Html.math(form), symbolic, substituted, result, Html.math(source),
-                Html.math(because), Html.math(outcome), Html.math(text), pass);
+        return new StepView(number, kind, cx.math(title), cx.math(form), symbolic, substituted, result, cx.math(source),
+                cx.math(because), cx.math(outcome), cx.math(text), pass);
     }
 
     /**
      * The printer works on plain text; values were inserted as pre-escaped markup between marker
      * characters. Escape everything outside the markers, keep what is inside.
      */
-    static String unwrapMarked(String text) {
+    static String unwrapMarked(String text, Context cx) {
         StringBuilder out = new StringBuilder();
         int i = 0;
         while (i < text.length()) {
             int start = text.indexOf('\u0001', i);
             if (start < 0) {
-                out.append(Html.math(text.substring(i)));
+                out.append(cx.math(text.substring(i)));
                 break;
             }
-            out.append(Html.math(text.substring(i, start)));
+            out.append(cx.math(text.substring(i, start)));
             int end = text.indexOf('\u0002', start);
             out.append(text, start + 1, end);
             i = end + 1;

@@ -92,6 +92,19 @@ class NoteStructureTest {
     }
 
     @Test
+    void idsWithAnUnderscoreArePrintedAsWrittenWhileSymbolsGetTheirSubscripts() throws Exception {
+        String yaml = Fixtures.oneBoard("", Fixtures.circuit("L_1", "{kind: other, current_a: 5, power_factor: 0.9, phases: 1}", 10,
+                "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 2.5, cpc_mm2: 1.5}"))
+                .replace("id: B0", "id: DB_1").replace("from: B0", "from: DB_1");
+        NoteFixture n = NoteFixture.of(Fixtures.parse(yaml));
+        String xhtml = new NoteRenderer(null).xhtml(n.view());
+        assertTrue(xhtml.contains("Circuit L_1"), "the circuit's id as written in its section title");
+        assertTrue(xhtml.contains("from DB_1"), "the board's id as written in the subtitle");
+        assertFalse(xhtml.contains("L<sub>1</sub>") || xhtml.contains("DB<sub>1</sub>"), "no id printed with a subscript");
+        assertTrue(xhtml.contains("U<sub>0</sub>"), "symbols keep their subscripts");
+    }
+
+    @Test
     void userTextCannotInjectMarkup() throws Exception {
         String yaml = Fixtures.oneBoard("", Fixtures.circuit("C1", "{kind: other, current_a: 5, power_factor: 0.9, phases: 1}", 10,
                 "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 2.5, cpc_mm2: 1.5}"))
