@@ -209,7 +209,7 @@ public final class Typesetter {
         spaceBefore(t.before());
         PdfContentByte cb = writer.getDirectContent();
         float x0 = document.left() + t.left();
-        List<float[]> underlines = new ArrayList<>();
+        List<Underline> underlines = new ArrayList<>();
         boolean open = false;
         for (LineBreaker.Line line : t.lines()) {
             if (y - t.leading() < document.bottom() - 0.01f && !pageEmpty) {
@@ -233,7 +233,7 @@ public final class Typesetter {
         spaceAfter(t.after());
     }
 
-    private void writeLine(PdfContentByte cb, LineBreaker.Line line, float x0, float baseline, List<float[]> underlines) {
+    private void writeLine(PdfContentByte cb, LineBreaker.Line line, float x0, float baseline, List<Underline> underlines) {
         BaseFont face = null;
         float size = 0;
         java.awt.Color color = java.awt.Color.BLACK;
@@ -257,24 +257,26 @@ public final class Typesetter {
             cb.setTextMatrix(x0 + f.x(), baseline);
             cb.showText(f.text());
             if (s.underline) {
-                underlines.add(new float[] {x0 + f.x(), baseline + s.rise - s.fontSize / 3, f.width(), s.fontSize / 15,
-                        s.color.getRGB()});
+                underlines.add(new Underline(x0 + f.x(), baseline + s.rise - s.fontSize / 3, f.width(), s.fontSize / 15, s.color));
             }
         }
         if (rise != 0) cb.setTextRise(0);
         if (!color.equals(java.awt.Color.BLACK)) cb.setColorFill(java.awt.Color.BLACK);
     }
 
+    /** A line under a fragment: from (x, y), {@code length} long, {@code thickness} thick. */
+    private record Underline(float x, float y, float length, float thickness, java.awt.Color color) {}
+
     /** Ends a text object and strokes the underlines of its lines (as OpenPDF's underlined fonts draw them). */
-    private static void endText(PdfContentByte cb, List<float[]> underlines) {
+    private static void endText(PdfContentByte cb, List<Underline> underlines) {
         cb.endText();
         if (underlines.isEmpty()) return;
         cb.saveState();
-        for (float[] u : underlines) {
-            cb.setLineWidth(u[3]);
-            cb.setColorStroke(new java.awt.Color((int) u[4]));
-            cb.moveTo(u[0], u[1]);
-            cb.lineTo(u[0] + u[2], u[1]);
+        for (Underline u : underlines) {
+            cb.setLineWidth(u.thickness());
+            cb.setColorStroke(u.color());
+            cb.moveTo(u.x(), u.y());
+            cb.lineTo(u.x() + u.length(), u.y());
             cb.stroke();
         }
         cb.restoreState();
