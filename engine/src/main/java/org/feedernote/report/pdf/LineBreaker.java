@@ -127,8 +127,9 @@ final class LineBreaker {
         }
         if (x + wordWidth > width && wordWidth > width) {
             for (Run r : word) {
-                for (int i = 0; i < r.text().length(); i++) {
-                    String ch = r.text().substring(i, i + 1);
+                String text = r.text();
+                for (int i = 0; i < text.length(); i = text.offsetByCodePoints(i, 1)) {
+                    String ch = text.substring(i, text.offsetByCodePoints(i, 1));
                     float w = fonts.width(r.style(), ch);
                     if (lineHasContent() && x + w > width) endLine(false);
                     append(ch, r.style(), w);
