@@ -107,8 +107,16 @@ final class NoteCommand implements Callable<Integer> {
                 return ExitStatus.BAD_INPUT;
             }
         }
-        NoteMaker.write(inst, result, data, templates, since, changes, pdf, traceFile,
+        List<String> unprintable = NoteMaker.write(inst, result, data, templates, since, changes, pdf, traceFile,
                 Progress.onTerminal(err, System.console() != null, inst.circuits().size()));
+        if (!unprintable.isEmpty()) {
+            StringBuilder chars = new StringBuilder();
+            for (String u : unprintable) chars.append(chars.length() == 0 ? "" : ", ").append(u).append(' ')
+                    .appendCodePoint(Integer.parseInt(u.substring(2), 16));
+            err.println("feedernote: warning: the note's fonts have no glyph for " + unprintable.size() + " character(s) of the input ("
+                    + chars + "); each is printed as " + org.feedernote.report.pdf.Fonts.PLACEHOLDER
+                    + " in the note (Appendix B says so) and the embedded input keeps it as written");
+        }
         out.println("wrote " + pdf);
         out.println("wrote " + traceFile);
         out.println(result.pass()

@@ -29,10 +29,11 @@ final class NoteMaker {
 
     /**
      * Writes the trace and then the note into their files, streaming both: the trace is attached
-     * to the PDF from its file, so neither is ever held whole in memory.
+     * to the PDF from its file, so neither is ever held whole in memory. Returns the characters of
+     * the input the note's fonts cannot show (as "U+6CF5"; printed as a placeholder).
      */
-    static void write(Installation inst, Result result, ReferenceData data, Path templates, String changesSince,
-                      List<String> changes, Path pdf, Path traceFile, NoteRenderer.Progress progress) throws IOException {
+    static List<String> write(Installation inst, Result result, ReferenceData data, Path templates, String changesSince,
+                              List<String> changes, Path pdf, Path traceFile, NoteRenderer.Progress progress) throws IOException {
         String fingerprint = fingerprint(inst, data);
         NoteRenderer renderer = new NoteRenderer(templates);
         NoteView view = NoteBuilder.build(result, data, fingerprint, Version.engine(), changesSince, changes);
@@ -41,8 +42,10 @@ final class NoteMaker {
             TraceJson.write(result.trace(), Version.engine(), data.version(), fingerprint, w);
             w.flush();
         });
-        Files.writeFileAtomically(pdf, tmp -> renderer.write(view, inst.project().date(), tmp, progress, attachments(inst,
-                NoteRenderer.Attachment.file(org.feedernote.archive.NoteArchive.TRACE_NAME, "Calculation trace", traceFile))));
+        List<List<String>> unprintable = new java.util.ArrayList<>(1);
+        Files.writeFileAtomically(pdf, tmp -> unprintable.add(renderer.write(view, inst.project().date(), tmp, progress, attachments(inst,
+                NoteRenderer.Attachment.file(org.feedernote.archive.NoteArchive.TRACE_NAME, "Calculation trace", traceFile)))));
+        return unprintable.isEmpty() ? List.of() : unprintable.get(0);
     }
 
     private static NoteRenderer.Attachment[] attachments(Installation inst, NoteRenderer.Attachment trace) {

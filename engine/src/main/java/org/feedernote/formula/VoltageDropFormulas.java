@@ -10,7 +10,7 @@ import org.feedernote.expr.Var;
 public final class VoltageDropFormulas {
     private VoltageDropFormulas() {}
 
-    private static final String APPROX = "IEC 60364-5-52:2009, Annex G (u = b(ρ₁L/S · cos φ + λL · sin φ) I_B); BS 7671:2018 Appendix 4, 6.4";
+    private static final String APPROX = "IEC 60364-5-52:2009, Annex G (u = b(ρ_1 L/S · cos φ + λ L · sin φ) I_B); BS 7671:2018 Appendix 4, 6.4";
 
     public static final Var R = var("r", "r", MV_PER_AM);
     public static final Var X = var("x", "x", MV_PER_AM);

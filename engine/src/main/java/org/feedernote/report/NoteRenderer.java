@@ -118,8 +118,23 @@ public final class NoteRenderer {
     public String xhtml(NoteView note) throws IOException {
         StringBuilder b = new StringBuilder(part("front.ftlh", Map.of("note", note)));
         for (SectionView s : note.sections()) b.append(part("section.ftlh", Map.of("note", note, "section", s)));
-        b.append(part("appendix.ftlh", Map.of("note", note)));
+        b.append(part("appendix.ftlh", appendixModel(note, unprintable(note, new Fonts()))));
         return b.toString();
+    }
+
+    /**
+     * The characters of the input (as written, so every text a user gave) that the note's fonts
+     * have no glyph for, as "U+6CF5": they are printed as {@link Fonts#PLACEHOLDER}.
+     */
+    private static List<String> unprintable(NoteView note, Fonts fonts) {
+        StringBuilder text = new StringBuilder();
+        for (org.feedernote.report.view.ListingLine line : note.listing()) text.append(line.text()).append('\n');
+        return fonts.unprintable(text.toString());
+    }
+
+    /** The appendix's template model: the note, and the characters printed as a placeholder. */
+    private static Map<String, Object> appendixModel(NoteView note, List<String> unprintable) {
+        return Map.of("note", note, "unprintable", unprintable, "placeholder", Fonts.PLACEHOLDER);
     }
 
     private String css() throws IOException {
@@ -137,26 +152,35 @@ public final class NoteRenderer {
 
     public byte[] pdf(NoteView note, String noteDate, Attachment... attachments) throws IOException {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
-        long tail = render(note, noteDate, out, Progress.NONE, attachments);
-        return Determinism.pin(out.toByteArray(), Math.toIntExact(tail), note.fingerprint(), noteDate);
+        Rendered r = render(note, noteDate, out, Progress.NONE, attachments);
+        return Determinism.pin(out.toByteArray(), Math.toIntExact(r.tail()), note.fingerprint(), noteDate);
     }
 
-    /** Writes the note to a file, streaming; the caller moves it into place. */
-    public void write(NoteView note, String noteDate, Path file, Progress progress, Attachment... attachments) throws IOException {
-        long tail;
+    /**
+     * Writes the note to a file, streaming; the caller moves it into place. Returns the characters
+     * of the input the note's fonts cannot show (as "U+6CF5"), printed as a placeholder; the note's
+     * appendix lists them too.
+     */
+    public List<String> write(NoteView note, String noteDate, Path file, Progress progress, Attachment... attachments) throws IOException {
+        Rendered r;
         try (OutputStream out = new java.io.BufferedOutputStream(java.nio.file.Files.newOutputStream(file), 1 << 16)) {
-            tail = render(note, noteDate, out, progress, attachments);
+            r = render(note, noteDate, out, progress, attachments);
         }
-        Determinism.pin(file, tail, note.fingerprint(), noteDate);
+        Determinism.pin(file, r.tail(), note.fingerprint(), noteDate);
+        return r.unprintable();
     }
 
-    /** Lays the note out into {@code out}; returns the offset from which the bytes written on closing begin. */
-    private long render(NoteView note, String noteDate, OutputStream out, Progress progress, Attachment... attachments)
+    /** The offset from which the bytes written on closing begin, and the characters printed as a placeholder. */
+    private record Rendered(long tail, List<String> unprintable) {}
+
+    /** Lays the note out into {@code out}. */
+    private Rendered render(NoteView note, String noteDate, OutputStream out, Progress progress, Attachment... attachments)
             throws IOException {
         StyleSheet sheet = StyleSheet.parse(DEFAULTS + css());
         float[] margins = pageMargins(sheet);
         Document document = new Document(PageSize.A4, margins[3], margins[1], margins[0], margins[2]);
         Fonts fonts = new Fonts();
+        List<String> unprintable = unprintable(note, fonts);
         CountingStream counted = new CountingStream(out);
         PdfWriter writer = PdfWriter.getInstance(document, counted);
         writer.setCompressionLevel(6);
@@ -169,7 +193,7 @@ public final class NoteRenderer {
         Style header = typesetter.styleOf("div", "running-header");
         Style footer = typesetter.styleOf("div", "running-footer");
         Style mark = typesetter.styleOf("div", "watermark");
-        writer.setPageEvent(new PageFurniture(new PageFurniture.Texts(note.runningTitle(), "Calculation note",
+        writer.setPageEvent(new PageFurniture(new PageFurniture.Texts(fonts.printable(note.runningTitle()), "Calculation note",
                 "Fingerprint " + note.fingerprintShort() + " · " + note.cover().status(), note.draft() ? "DRAFT" : null,
                 header.fontSize(), footer.fontSize(), mark.fontSize(), mark.color()), fonts));
         document.open();
@@ -190,12 +214,12 @@ public final class NoteRenderer {
                     : PdfFileSpecification.fileEmbedded(writer, null, a.name(), a.content(), ATTACHMENT_COMPRESSION);
             writer.addFileAttachment(a.description(), spec);
         }
-        placeParts(note, typesetter, progress);
+        placeParts(note, typesetter, progress, appendixModel(note, unprintable));
         // Bytes written so far; OpenPDF's getCurrentDocumentSize() adds an estimate of the
         // cross-reference table and so lies past the font objects of a long note.
         long tail = counted.count;
         document.close();
-        return tail;
+        return new Rendered(tail, unprintable);
     }
 
     /** Counts the bytes OpenPDF has written (it writes straight through, without a buffer of its own). */
@@ -229,7 +253,7 @@ public final class NoteRenderer {
      * (preparing costs more than placing). Each part's blocks depend on that part alone, so the
      * pages, and the bytes, come out the same as if one thread did everything.
      */
-    private void placeParts(NoteView note, Typesetter typesetter, Progress progress) throws IOException {
+    private void placeParts(NoteView note, Typesetter typesetter, Progress progress, Map<String, Object> appendix) throws IOException {
         int sections = note.sections().size();
         int parts = sections + 2;
         java.util.concurrent.ExecutorService preparing = java.util.concurrent.Executors.newSingleThreadExecutor(r -> {
@@ -240,12 +264,12 @@ public final class NoteRenderer {
         try {
             java.util.ArrayDeque<java.util.concurrent.FutureTask<Typesetter.Prepared>> ahead = new java.util.ArrayDeque<>();
             int next = 0;
-            while (next < parts && ahead.size() < PREPARED_AHEAD) ahead.add(schedule(preparing, prepareTask(note, typesetter, next++, sections)));
+            while (next < parts && ahead.size() < PREPARED_AHEAD) ahead.add(schedule(preparing, prepareTask(note, typesetter, next++, sections, appendix)));
             for (int i = 0; i < parts; i++) {
                 java.util.concurrent.FutureTask<Typesetter.Prepared> first = ahead.removeFirst();
                 helpWhileWaiting(first, ahead);
                 Typesetter.Prepared part = await(first);
-                if (next < parts) ahead.add(schedule(preparing, prepareTask(note, typesetter, next++, sections)));
+                if (next < parts) ahead.add(schedule(preparing, prepareTask(note, typesetter, next++, sections, appendix)));
                 typesetter.place(part);
                 if (i >= 1 && i <= sections) progress.sectionDone(i, sections);
             }
@@ -255,10 +279,10 @@ public final class NoteRenderer {
     }
 
     private java.util.concurrent.Callable<Typesetter.Prepared> prepareTask(NoteView note, Typesetter typesetter, int index,
-                                                                            int sections) {
+                                                                            int sections, Map<String, Object> appendix) {
         return () -> {
             if (index == 0) return typesetter.prepare(Markup.parse(part("front.ftlh", Map.of("note", note)), "front.ftlh"));
-            if (index > sections) return typesetter.prepare(Markup.parse(part("appendix.ftlh", Map.of("note", note)), "appendix.ftlh"));
+            if (index > sections) return typesetter.prepare(Markup.parse(part("appendix.ftlh", appendix), "appendix.ftlh"));
             SectionView s = note.sections().get(index - 1);
             return typesetter.prepare(Markup.parse(part("section.ftlh", Map.of("note", note, "section", s)), "section.ftlh"));
         };

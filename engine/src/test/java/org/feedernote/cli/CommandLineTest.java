@@ -52,6 +52,17 @@ class CommandLineTest {
     }
 
     @Test
+    void theNoteCommandWarnsOfCharactersItsFontsCannotShow(@TempDir Path dir) throws Exception {
+        String text = Files.readString(Fixtures.inputs().resolve("bakery-small.yaml"))
+                .replace("description: Shop lighting", "description: 泵房 shop lighting");
+        Path input = dir.resolve("cjk.yaml");
+        Files.writeString(input, text);
+        Run r = run("note", input.toString(), "-o", dir.toString());
+        assertEquals(0, r.status(), r.err());
+        assertTrue(r.err().contains("warning") && r.err().contains("U+6CF5 泵") && r.err().contains("U+623F 房"), r.err());
+    }
+
+    @Test
     void aFailingCheckExitsOne(@TempDir Path dir) throws Exception {
         String text = Files.readString(Fixtures.inputs().resolve("bakery-small.yaml")).replace("length_m: 24", "length_m: 240");
         Path input = dir.resolve("long.yaml");

@@ -28,6 +28,10 @@ class GoldenNoteTest {
         Path golden = Fixtures.root().resolve("golden-reports");
         compare(golden.resolve(name + ".trace.json"), note.trace());
         compare(golden.resolve(name + ".note.txt"), note.text());
+        // The examples' own texts are plain: a placeholder could only come from the program's or the
+        // reference data's texts, which must all be printable in the note's fonts.
+        assertFalse(note.text().contains(org.feedernote.report.pdf.Fonts.PLACEHOLDER),
+                name + ": a text of the program or its data has a character the note's fonts cannot show");
     }
 
     static void compare(Path file, String actual) throws IOException {

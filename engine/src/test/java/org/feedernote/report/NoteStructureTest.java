@@ -105,6 +105,18 @@ class NoteStructureTest {
     }
 
     @Test
+    void textTheFontsCannotShowIsMarkedAndNamedNeverDroppedSilently() throws Exception {
+        String yaml = Fixtures.oneBoard("", Fixtures.circuit("C1", "{kind: other, current_a: 5, power_factor: 0.9, phases: 1}", 10,
+                "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 2.5, cpc_mm2: 1.5}")
+                .replace("  from: B0", "  description: 泵房 pump room\n  from: B0"));
+        NoteFixture n = NoteFixture.of(Fixtures.parse(yaml));
+        String text = n.text();
+        assertTrue(text.contains("□□ pump room"), "each character without a glyph is printed as a placeholder");
+        assertTrue(text.contains("Characters not shown") && text.contains("U+623F") && text.contains("U+6CF5"),
+                "Appendix B names the characters");
+    }
+
+    @Test
     void userTextCannotInjectMarkup() throws Exception {
         String yaml = Fixtures.oneBoard("", Fixtures.circuit("C1", "{kind: other, current_a: 5, power_factor: 0.9, phases: 1}", 10,
                 "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 2.5, cpc_mm2: 1.5}"))

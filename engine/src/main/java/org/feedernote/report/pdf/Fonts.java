@@ -71,6 +71,56 @@ public final class Fonts {
         return width(face(s), text, s.fontSize);
     }
 
+    /**
+     * Printed in place of a character a face has no glyph for (a Chinese description, say), so the
+     * note never drops text silently; the embedded input keeps it as written.
+     */
+    public static final String PLACEHOLDER = "\u25a1";
+
+    /** Per face and character: 0 not yet asked, 1 has a glyph, 2 has none. */
+    private final byte[][] glyphs = new byte[5][65536];
+
+    private boolean shows(BaseFont face, int codePoint) {
+        if (Character.isWhitespace(codePoint) || Character.isISOControl(codePoint) || codePoint == 0xa0) return true;
+        if (codePoint > 0xffff) return face.charExists(codePoint);
+        byte[] known = glyphs[face == regular ? 0 : face == bold ? 1 : face == italic ? 2 : face == boldItalic ? 3 : 4];
+        byte k = known[codePoint];
+        if (k == 0) {
+            k = face.charExists(codePoint) ? (byte) 1 : (byte) 2;
+            known[codePoint] = k;
+        }
+        return k == 1;
+    }
+
+    /** The text with each character {@code face} cannot show replaced by {@link #PLACEHOLDER}. */
+    String printable(BaseFont face, String text) {
+        int i = 0;
+        while (i < text.length() && text.charAt(i) < 0x250 && shows(face, text.charAt(i))) i++;
+        if (i == text.length()) return text;
+        StringBuilder b = new StringBuilder(text.length());
+        b.append(text, 0, i);
+        while (i < text.length()) {
+            int cp = text.codePointAt(i);
+            if (shows(face, cp)) b.appendCodePoint(cp);
+            else b.append(PLACEHOLDER);
+            i += Character.charCount(cp);
+        }
+        return b.toString();
+    }
+
+    public String printable(String text) {
+        return printable(regular, text);
+    }
+
+    /** The characters of {@code text} that the sans or the mono face cannot show, as "U+6CF5", in code point order. */
+    public java.util.List<String> unprintable(String text) {
+        java.util.TreeSet<Integer> missing = new java.util.TreeSet<>();
+        text.codePoints().forEach(cp -> {
+            if (!shows(regular, cp) || !shows(mono, cp)) missing.add(cp);
+        });
+        return missing.stream().map(cp -> String.format(java.util.Locale.ROOT, "U+%04X", cp)).toList();
+    }
+
     public BaseFont regular() {
         return regular;
     }

@@ -586,7 +586,7 @@ public final class Typesetter {
     private void inline(List<Object> nodes, Style s, List<String[]> ancestors, List<Run> runs, List<Run> right, List<Float> tabs) {
         for (Object n : nodes) {
             if (n instanceof String text) {
-                String t = s.pre ? text : collapse(text);
+                String t = fonts.printable(fonts.face(s), s.pre ? text : collapse(text));
                 if (t.isEmpty()) continue;
                 Run last = runs.isEmpty() ? null : runs.get(runs.size() - 1);
                 // One chunk per stretch of text in one style: OpenPDF's cost is per chunk.
