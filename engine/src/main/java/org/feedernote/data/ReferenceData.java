@@ -111,12 +111,16 @@ public final class ReferenceData {
                 sizeKey(sizeMm2) + " mm²", insulation == Insulation.PVC ? "PVC/A" : "XLPE");
     }
 
-    /** SHA-256 over the table texts: changes whenever any reference value changes. */
+    /**
+     * SHA-256 over the tables: their provenance (source, edition, table, title, notes, the "from
+     * memory" flag) and every value. Changes whenever any of them changes, so a note's fingerprint
+     * names the reference data it was calculated and cited with.
+     */
     public String version() {
         try {
             MessageDigest md = MessageDigest.getInstance("SHA-256");
             for (ReferenceTable t : all) {
-                md.update(t.ref().id().getBytes(StandardCharsets.UTF_8));
+                md.update(t.ref().toString().getBytes(StandardCharsets.UTF_8));
                 for (String row : t.rowKeys()) {
                     for (String col : t.columns()) {
                         String cell = t.text(row, col);
