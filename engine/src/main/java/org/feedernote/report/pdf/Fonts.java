@@ -28,6 +28,12 @@ public final class Fonts {
             widths[k] = new float[65536];
             java.util.Arrays.fill(widths[k], -1);
         }
+        BaseFont[] faces = {regular, bold, italic, boldItalic, mono};
+        for (int k = 0; k < faces.length; k++) {
+            boolean all = true;
+            for (int c = 0x20; c < 0x250 && all; c++) all = Character.isISOControl(c) || shows(faces[k], c);
+            latin[k] = all;
+        }
     }
 
     private static BaseFont load(String resource) throws IOException {
@@ -48,7 +54,7 @@ public final class Fonts {
     private final float[][] widths = new float[5][];
 
     private float[] widths(BaseFont face) {
-        return widths[face == regular ? 0 : face == bold ? 1 : face == italic ? 2 : face == boldItalic ? 3 : 4];
+        return widths[index(face)];
     }
 
     /** The advance width of a text in points, without kerning (as OpenPDF lays it out). */
@@ -83,7 +89,7 @@ public final class Fonts {
     private boolean shows(BaseFont face, int codePoint) {
         if (Character.isWhitespace(codePoint) || Character.isISOControl(codePoint) || codePoint == 0xa0) return true;
         if (codePoint > 0xffff) return face.charExists(codePoint);
-        byte[] known = glyphs[face == regular ? 0 : face == bold ? 1 : face == italic ? 2 : face == boldItalic ? 3 : 4];
+        byte[] known = glyphs[index(face)];
         byte k = known[codePoint];
         if (k == 0) {
             k = face.charExists(codePoint) ? (byte) 1 : (byte) 2;
@@ -92,10 +98,21 @@ public final class Fonts {
         return k == 1;
     }
 
+    /** Per face: whether it has a glyph for every character below U+0250 (Latin) that is not a control. */
+    private final boolean[] latin = new boolean[5];
+
+    private int index(BaseFont face) {
+        return face == regular ? 0 : face == bold ? 1 : face == italic ? 2 : face == boldItalic ? 3 : 4;
+    }
+
     /** The text with each character {@code face} cannot show replaced by {@link #PLACEHOLDER}. */
     String printable(BaseFont face, String text) {
         int i = 0;
-        while (i < text.length() && text.charAt(i) < 0x250 && shows(face, text.charAt(i))) i++;
+        if (latin[index(face)]) {
+            while (i < text.length() && text.charAt(i) < 0x250) i++;
+        } else {
+            while (i < text.length() && text.charAt(i) < 0x250 && shows(face, text.charAt(i))) i++;
+        }
         if (i == text.length()) return text;
         StringBuilder b = new StringBuilder(text.length());
         b.append(text, 0, i);
