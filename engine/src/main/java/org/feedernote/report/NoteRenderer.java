@@ -244,7 +244,6 @@ public final class NoteRenderer {
     /** How many parts the preparing thread may run ahead of the pages (bounds the memory held). */
     private static final int PREPARED_AHEAD = 16;
 
-
     /**
      * The front matter, every worked section and the appendices, in order. Building a part's view,
      * running its template, parsing the markup and turning it into blocks happens on a preparing

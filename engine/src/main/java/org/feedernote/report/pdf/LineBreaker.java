@@ -35,7 +35,7 @@ final class LineBreaker {
     private final StringBuilder pendingSpace = new StringBuilder();
     private Style pendingSpaceStyle;
     private float pendingSpaceWidth;
-    private final List<Run> word = new ArrayList<>();
+    private final List<Piece> word = new ArrayList<>();
     private float wordWidth;
     private final boolean justify;
     private final int align;
@@ -89,21 +89,24 @@ final class LineBreaker {
                 dropSpace();
                 endLine(true);
             } else {
+                // Runs of spaces count once, except in pre-formatted text.
+                float space = fonts.width(s, " ");
+                if (!s.pre) dropSpace();
                 pendingSpace.append(' ');
                 pendingSpaceStyle = s;
-                pendingSpaceWidth += fonts.width(s, " ");
-                if (!s.pre) {
-                    pendingSpace.setLength(1);
-                    pendingSpaceWidth = fonts.width(s, " ");
-                }
+                pendingSpaceWidth += space;
             }
         }
         if (from < text.length()) piece(from == 0 ? text : text.substring(from), s);
     }
 
+    /** Part of a word in one style, with its width. */
+    private record Piece(String text, Style style, float width) {}
+
     private void piece(String text, Style s) {
-        word.add(new Run(text, s));
-        wordWidth += fonts.width(s, text);
+        Piece p = new Piece(text, s, fonts.width(s, text));
+        word.add(p);
+        wordWidth += p.width();
     }
 
     private boolean lineHasContent() {
@@ -126,7 +129,7 @@ final class LineBreaker {
             dropSpace();
         }
         if (x + wordWidth > width && wordWidth > width) {
-            for (Run r : word) {
+            for (Piece r : word) {
                 String text = r.text();
                 for (int i = 0; i < text.length(); i = text.offsetByCodePoints(i, 1)) {
                     String ch = text.substring(i, text.offsetByCodePoints(i, 1));
@@ -137,10 +140,9 @@ final class LineBreaker {
             }
         } else {
             boolean first = true;
-            for (Run r : word) {
-                float w = fonts.width(r.style(), r.text());
-                if (first && justify && gap) startFragment(r.text(), r.style(), w, true);
-                else append(r.text(), r.style(), w);
+            for (Piece r : word) {
+                if (first && justify && gap) startFragment(r.text(), r.style(), r.width(), true);
+                else append(r.text(), r.style(), r.width());
                 first = false;
             }
         }
