@@ -312,14 +312,14 @@ public final class Typesetter {
             if (total > remaining() && total <= bodyHeight) newPage();
         }
         float x = document.left();
+        float repeatedHeight = 0;
+        for (int r = 0; r < headers; r++) repeatedHeight += table.getRowHeight(r);
         int next = 0;
         while (next < table.size()) {
             int from = next;
             float h = 0;
-            if (from > 0 && from < headers) from = headers;
             boolean continued = next > 0;
-            float headerHeight = 0;
-            if (continued) for (int r = 0; r < headers; r++) headerHeight += table.getRowHeight(r);
+            float headerHeight = continued ? repeatedHeight : 0;
             int to = from;
             while (to < table.size() && headerHeight + h + table.getRowHeight(to) <= remaining() + 0.01f) h += table.getRowHeight(to++);
             boolean onlyHeaders = !continued && to <= headers && to < table.size();
