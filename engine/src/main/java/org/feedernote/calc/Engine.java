@@ -570,7 +570,9 @@ public final class Engine {
          * the evaluations of protective conductors of another size, which reuse them.
          */
         OwnFigures ownFigures(Circuit c) {
-            return ownFigures(c, (Capacity) null);
+            // The sizing asks again for circuits it has evaluated (the chosen size, a size tried before).
+            OwnFigures known = Evaluated.ownFigures(evaluated.get(c.id()), c);
+            return known != null ? known : ownFigures(c, (Capacity) null);
         }
 
         /** As {@link #ownFigures(Circuit)}, with the capacity a {@link #probe} has made. */

@@ -1,6 +1,5 @@
 package org.feedernote.data;
 
-import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
@@ -31,6 +30,28 @@ public final class CapacityData {
     /** The column of the capacity tables for a cable and method, or a data gap. */
     public Step.Lookup tabulated(String id, Insulation insulation, Conductor conductor, Method method, int loaded,
                                  CableType type, Formation formation, double size) {
+        Column c = column(insulation, conductor, method, loaded, formation);
+        String row = ReferenceData.sizeKey(size);
+        return c.table().lookup(id, "Tabulated current-carrying capacity", "I_t", "A", row, c.column(), row + " mm²", c.label());
+    }
+
+    /** The table and column of a cable and method, and the column in words. */
+    private record Column(ReferenceTable table, String column, String label) {}
+
+    /** Columns by cable and method: every sizing candidate looks one up. */
+    private final java.util.Map<Long, Column> columns = new java.util.concurrent.ConcurrentHashMap<>();
+
+    private Column column(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation) {
+        long key = ((((long) insulation.ordinal() * 64 + conductor.ordinal()) * 64 + method.ordinal()) * 8 + loaded) * 64
+                + (formation == null ? 0 : formation.ordinal() + 1);
+        Column known = columns.get(key);
+        if (known != null) return known;
+        Column made = columnOf(insulation, conductor, method, loaded, formation);
+        columns.putIfAbsent(key, made);
+        return made;
+    }
+
+    private Column columnOf(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation) {
         String ins = insulation.token();
         ReferenceTable table;
         String column;
@@ -68,8 +89,7 @@ public final class CapacityData {
             throw new DataGapException(table.ref().citation() + " has no column for " + label
                     + " in the packaged data; give a copper cable or another method");
         }
-        return table.lookup(id, "Tabulated current-carrying capacity", "I_t", "A", ReferenceData.sizeKey(size), column,
-                ReferenceData.sizeKey(size) + " mm²", label);
+        return new Column(table, column, label);
     }
 
     private record Coverage(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation, double size) {}
@@ -222,20 +242,18 @@ public final class CapacityData {
                 kind.token(), "I_2 / I_n", "exact", List.of());
     }
 
-    private final java.util.Map<DeviceKind, List<Double>> ratings = new java.util.EnumMap<>(DeviceKind.class);
+    private final java.util.Map<DeviceKind, List<Double>> ratings = new java.util.concurrent.ConcurrentHashMap<>();
 
     public List<Double> ratings(DeviceKind kind) {
-        synchronized (ratings) {
-            return ratings.computeIfAbsent(kind, k -> {
-                String text = data.table("devices.csv").text(k.token(), "ratings");
-                return Arrays.stream(text.trim().split("\\s+")).map(Double::parseDouble).toList();
-            });
-        }
+        // Read for every sizing candidate, from the threads that size side by side: no lock once made.
+        return ratings.computeIfAbsent(kind, k -> {
+            String text = data.table("devices.csv").text(k.token(), "ratings");
+            return Arrays.stream(text.trim().split("\\s+")).map(Double::parseDouble).toList();
+        });
     }
 
-    /** The smallest standard rating at least the current, as a lookup step; a gap above the largest. */
     public Step.Lookup ratingAtLeast(String id, DeviceKind kind, double current) {
-        List<Double> r = new ArrayList<>(ratings(kind));
+        List<Double> r = ratings(kind);
         for (double v : r) {
             if (v >= current - 1e-9) {
                 return new Step.Lookup(id, "Rated current of the device (smallest standard rating ≥ I_b)", "I_n", v, "A",

@@ -38,7 +38,10 @@ public final class Evaluator {
      * given: references become array indices, so an evaluation allocates nothing.
      */
     public static Compiled compile(Expr expr, java.util.List<Var> vars) {
-        return new Compiled(node(expr, vars));
+        // Slots by variable, found once: a sum over the circuits of a large board has hundreds of terms.
+        Map<Var, Integer> slots = new java.util.HashMap<>();
+        for (int i = 0; i < vars.size(); i++) slots.putIfAbsent(vars.get(i), i);
+        return new Compiled(node(expr, slots));
     }
 
     public static final class Compiled {
@@ -65,10 +68,10 @@ public final class Evaluator {
         abstract double value(double[] values, String owner, String step);
     }
 
-    private static Node node(Expr e, java.util.List<Var> vars) {
+    private static Node node(Expr e, Map<Var, Integer> slots) {
         if (e instanceof Expr.Bin bin) {
-            Node left = node(bin.left(), vars);
-            Node right = node(bin.right(), vars);
+            Node left = node(bin.left(), slots);
+            Node right = node(bin.right(), slots);
             Op op = bin.op();
             return new Node() {
                 @Override double value(double[] values, String owner, String step) {
@@ -80,9 +83,8 @@ public final class Evaluator {
             };
         }
         if (e instanceof Expr.Ref ref) {
-            int slot = -1;
-            for (int i = 0; i < vars.size() && slot < 0; i++) if (vars.get(i).equals(ref.var())) slot = i;
-            if (slot < 0) throw new IllegalArgumentException(ref.var().symbol() + " is not among the variables given");
+            Integer slot = slots.get(ref.var());
+            if (slot == null) throw new IllegalArgumentException(ref.var().symbol() + " is not among the variables given");
             int index = slot;
             return new Node() {
                 @Override double value(double[] values, String owner, String step) { return values[index]; }
@@ -95,7 +97,7 @@ public final class Evaluator {
             };
         }
         if (!(e instanceof Expr.Call call)) throw new IllegalStateException("no evaluation for " + e);
-        Node arg = node(call.arg(), vars);
+        Node arg = node(call.arg(), slots);
         Fn fn = call.fn();
         return new Node() {
             @Override double value(double[] values, String owner, String step) {

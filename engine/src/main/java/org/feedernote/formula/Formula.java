@@ -127,7 +127,9 @@ public final class Formula {
         }
         double[] values = new double[vars.size()];
         for (int i = 0; i < values.length; i++) {
-            Step.Binding b = find(bindings, vars.get(i));
+            Var v = vars.get(i);
+            // Bindings are mostly given in the order of the variables: a sum over many terms stays linear.
+            Step.Binding b = i < bindings.length && bindings[i].var() == v ? bindings[i] : find(bindings, v);
             if (b == null) throw new IllegalStateException(owner + step + ": formula " + id + " needs " + vars.get(i).symbol() + " bound");
             values[i] = b.q().value();
         }
@@ -135,7 +137,8 @@ public final class Formula {
         Q q = new Q(owner, step, symbol, value, unit);
         if (trace.recording()) {
             List<Step.Binding> used = new ArrayList<>();
-            for (Step.Binding b : bindings) if (vars.contains(b.var())) used.add(b);
+            Set<Var> known = vars.size() > 8 ? new java.util.HashSet<>(vars) : null;
+            for (Step.Binding b : bindings) if (known != null ? known.contains(b.var()) : vars.contains(b.var())) used.add(b);
             trace.add(new Step.Formula(q.id(), title, symbol, unit, id, expr, List.copyOf(used), value, form, reference));
         }
         return q;

@@ -26,7 +26,7 @@ public final class TraceRecorder implements Trace {
         this.id = id;
         this.title = title;
         this.subtitle = subtitle;
-        this.index = index == null ? new java.util.HashMap<>() : index;
+        this.index = index == null ? new java.util.HashMap<>(256) : index;
     }
 
     @Override public void add(Step step) {
