@@ -6,6 +6,7 @@ import static org.feedernote.formula.FaultFormulas.*;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 
 import org.feedernote.data.FaultData;
 import org.feedernote.formula.TermFormulas;
@@ -364,7 +365,25 @@ final class FaultPath {
         return new CheckResult(name, title, pass, installed.value(), smin.value(), Units.MM2, true, id + "/check");
     }
 
+    /** What the k factor depends on: the conductor and insulation materials and the initial temperature. */
+    private record KInputs(Conductor conductor, Insulation insulation, boolean separate, double thetaMax) {}
+
+    /** k by its inputs, for the sizing's candidates (the no-op trace): few combinations serve thousands of circuits. */
+    private final Map<KInputs, Double> kValues = new java.util.concurrent.ConcurrentHashMap<>();
+
     private Q kFactor(Trace t, String id, Cable cable, Q thetaMax, boolean protective) {
+        if (t.recording()) return kFactorSteps(t, id, cable, thetaMax, protective);
+        KInputs key = new KInputs(cable.conductor(), cable.insulation(), protective && cable.type() == CableType.SINGLE_CORE,
+                thetaMax.value());
+        Double known = kValues.get(key);
+        if (known == null) {
+            known = kFactorSteps(t, id, cable, thetaMax, protective).value();
+            kValues.putIfAbsent(key, known);
+        }
+        return new Q(id, "/k", K_FACTOR.symbol(), known, K_FACTOR.unit());
+    }
+
+    private Q kFactorSteps(Trace t, String id, Cable cable, Q thetaMax, boolean protective) {
         Q kc = Given.lookup(t, faults.materialConstant(id + "/K", cable.conductor()));
         Q beta = Given.lookup(t, faults.beta(id + "/beta", cable.conductor()));
         Q thetaF = Given.lookup(t, faults.finalTemperature(id + "/theta_f", cable.insulation()));

@@ -643,7 +643,7 @@ final class Sizing {
     void record(Trace ct, Circuit original, Circuit sized) {
         boolean autoSize = original.cable().size().auto();
         boolean autoCpc = original.cable().cpc().auto();
-        if (!autoSize && !autoCpc) return;
+        if (!autoSize && !autoCpc || !ct.recording()) return;
         Trace t = ct.section(original.id() + "/size", "Size selection", "size_mm2: " + (autoSize ? "auto" : "given")
                 + ", cpc_mm2: " + (autoCpc ? "auto" : "given"));
         int i = 0;
