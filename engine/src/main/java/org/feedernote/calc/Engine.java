@@ -587,10 +587,11 @@ public final class Engine {
 
         /** Calculates c, which differs from the circuit of own at most in its protective conductor, from own. */
         CircuitResult evaluate(Circuit c, OwnFigures own, Map<String, CircuitResult> done) {
-            Circuit same = c.withCable(c.cable().withCpc(own.circuit().cable().cpc().mm2()));
-            if (!same.equals(own.circuit().withCable(own.circuit().cable().withCpc(own.circuit().cable().cpc().mm2())))) {
-                throw new IllegalArgumentException(c.id() + ": own figures of another circuit");
-            }
+            // A guard against a mistake in this class, asked of every protective-conductor candidate: the
+            // tests run with assertions on.
+            assert c.withCable(c.cable().withCpc(own.circuit().cable().cpc().mm2()))
+                    .equals(own.circuit().withCable(own.circuit().cable().withCpc(own.circuit().cable().cpc().mm2())))
+                    : c.id() + ": own figures of another circuit";
             return evaluate(c, Trace.noop(), done, false, own);
         }
 
