@@ -375,12 +375,8 @@ final class FaultPath {
         if (t.recording()) return kFactorSteps(t, id, cable, thetaMax, protective);
         KInputs key = new KInputs(cable.conductor(), cable.insulation(), protective && cable.type() == CableType.SINGLE_CORE,
                 thetaMax.value());
-        Double known = kValues.get(key);
-        if (known == null) {
-            known = kFactorSteps(t, id, cable, thetaMax, protective).value();
-            kValues.putIfAbsent(key, known);
-        }
-        return new Q(id, "/k", K_FACTOR.symbol(), known, K_FACTOR.unit());
+        double k = kValues.computeIfAbsent(key, x -> kFactorSteps(t, id, cable, thetaMax, protective).value());
+        return new Q(id, "/k", K_FACTOR.symbol(), k, K_FACTOR.unit());
     }
 
     private Q kFactorSteps(Trace t, String id, Cable cable, Q thetaMax, boolean protective) {

@@ -38,17 +38,14 @@ public final class CapacityData {
     /** The table and column of a cable and method, and the column in words. */
     private record Column(ReferenceTable table, String column, String label) {}
 
+    private record ColumnKey(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation) {}
+
     /** Columns by cable and method: every sizing candidate looks one up. */
-    private final java.util.Map<Long, Column> columns = new java.util.concurrent.ConcurrentHashMap<>();
+    private final java.util.Map<ColumnKey, Column> columns = new java.util.concurrent.ConcurrentHashMap<>();
 
     private Column column(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation) {
-        long key = ((((long) insulation.ordinal() * 64 + conductor.ordinal()) * 64 + method.ordinal()) * 8 + loaded) * 64
-                + (formation == null ? 0 : formation.ordinal() + 1);
-        Column known = columns.get(key);
-        if (known != null) return known;
-        Column made = columnOf(insulation, conductor, method, loaded, formation);
-        columns.putIfAbsent(key, made);
-        return made;
+        return columns.computeIfAbsent(new ColumnKey(insulation, conductor, method, loaded, formation),
+                k -> columnOf(insulation, conductor, method, loaded, formation));
     }
 
     private Column columnOf(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation) {
@@ -252,6 +249,7 @@ public final class CapacityData {
         });
     }
 
+    /** The smallest standard rating at least the current, as a lookup step; a gap above the largest. */
     public Step.Lookup ratingAtLeast(String id, DeviceKind kind, double current) {
         List<Double> r = ratings(kind);
         for (double v : r) {

@@ -38,7 +38,7 @@ public final class Evaluator {
      * given: references become array indices, so an evaluation allocates nothing.
      */
     public static Compiled compile(Expr expr, java.util.List<Var> vars) {
-        // Slots by variable, found once: a sum over the circuits of a large board has hundreds of terms.
+        // Slots by variable, found once: a board's phase sum has a term per circuit of the board.
         Map<Var, Integer> slots = new java.util.HashMap<>();
         for (int i = 0; i < vars.size(); i++) slots.putIfAbsent(vars.get(i), i);
         return new Compiled(node(expr, slots));
