@@ -920,8 +920,11 @@ public final class Engine {
                 String kind = c.load().kind().token();
                 boolean own = basis.voltageDropLimitsByKind().containsKey(kind);
                 String key = own ? kind : LoadKind.OTHER.token();
-                return Given.input(t, id, "Voltage-drop limit for " + kind + " loads", "ΔU_max",
-                        basis.voltageDropLimitsByKind().get(key), Units.PERCENT, basis.voltageDropLimitsPath() + "." + key);
+                double limit = basis.voltageDropLimitsByKind().get(key);
+                // The texts of the step are written only where it is recorded (not for sizing candidates).
+                if (!t.recording()) return new Q(id, "ΔU_max", limit, Units.PERCENT);
+                return Given.input(t, id, "Voltage-drop limit for " + kind + " loads", "ΔU_max", limit, Units.PERCENT,
+                        basis.voltageDropLimitsPath() + "." + key);
             }
             return Given.setting(t, id, "Voltage-drop limit, origin to terminals", "ΔU_max", basis.voltageDropLimitPercent(),
                     Units.PERCENT, "default of this program: 4 % (IEC 60364-5-52:2009, Annex G, Table G.52.1, other uses, public supply)");

@@ -303,9 +303,9 @@ final class FaultPath {
             case MCB:
             case RCBO: {
                 double m = dev.curve() == Curve.B ? 5 : dev.curve() == Curve.C ? 10 : 20;
-                Q mq = Given.derived(t, id, "/m", "Instantaneous tripping multiple, type " + dev.curve().token(), "m", m, Units.NONE,
-                        "IEC 60898-1:2015, Table 7 (upper limit: B 5 I_n, C 10 I_n, D 20 I_n), from memory");
-                return TRIP_MULTIPLE.eval(t, id, "/Ia", "type " + dev.curve().token(), bind(MULT, mq), bind(IN, in));
+                Q mq = Given.derived(t, id, "/m", t.recording() ? "Instantaneous tripping multiple, type " + dev.curve().token() : "", "m", m,
+                        Units.NONE, "IEC 60898-1:2015, Table 7 (upper limit: B 5 I_n, C 10 I_n, D 20 I_n), from memory");
+                return TRIP_MULTIPLE.eval(t, id, "/Ia", t.recording() ? "type " + dev.curve().token() : "", bind(MULT, mq), bind(IN, in));
             }
             case MCCB: {
                 if (dev.instantaneousA() == null) return null;
@@ -358,7 +358,7 @@ final class FaultPath {
         Q smin = MIN_SIZE.as(protective ? "S_PE,min" : "S_min").eval(t, id, "/Smin", "", bind(I2T, rel(i2t, "I²t")), bind(KF, k));
         Q installed = Given.derived(t, id, "/S", protective ? "Protective conductor installed" : "Line conductor installed",
                 protective ? "S_PE" : "S", size * cable.parallel(), Units.MM2,
-                "design input" + (cable.parallel() > 1 ? " (" + cable.parallel() + " conductors in parallel share the fault current)" : ""));
+                cable.parallel() > 1 ? "design input (" + cable.parallel() + " conductors in parallel share the fault current)" : "design input");
         boolean pass = installed.value() >= smin.value() - 1e-12;
         if (t.recording()) t.add(new Step.Check(id + "/check", title, name, installed, "≥", smin, pass,
                 "IEC 60364-4-43:2008, 434.5.2" + (protective ? "; IEC 60364-5-54:2011, 543.1.2" : ""), List.of(installed.id(), smin.id())));

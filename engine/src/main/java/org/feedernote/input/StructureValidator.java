@@ -147,20 +147,19 @@ final class StructureValidator {
             return;
         }
         double v = s.number();
-        String shown = s.describe();
         if (spec.integer() && v != Math.rint(v)) {
-            error(node.pos(), path, "expected a whole number, found " + shown);
+            error(node.pos(), path, "expected a whole number, found " + s.describe());
             return;
         }
         if (!spec.allowed().isEmpty()) {
             if (spec.allowed().stream().noneMatch(a -> a == v)) {
-                error(node.pos(), path, "expected " + expected(spec) + ", found " + shown + nearestAllowed(spec.allowed(), v));
+                error(node.pos(), path, "expected " + expected(spec) + ", found " + s.describe() + nearestAllowed(spec.allowed(), v));
             }
             return;
         }
         if (spec.min() != null && (v < spec.min() || (spec.minExclusive() && v == spec.min()))
                 || spec.max() != null && (v > spec.max() || (spec.maxExclusive() && v == spec.max()))) {
-            error(node.pos(), path, "expected " + expected(spec) + ", found " + shown);
+            error(node.pos(), path, "expected " + expected(spec) + ", found " + s.describe());
         }
     }
 
