@@ -181,11 +181,10 @@ public final class Engine {
             boardDrop.put(boardOrder.get(0), zero);
             Sizing sizing = new Sizing(this);
             Map<String, Circuit> sized = sizing.run();
-            // Top-down with the recording trace. The final circuits of a board depend only on the
+            // Top-down with the recording trace. The final circuits of a level depend only on the
             // feeders above them and write only into their own sections: they are calculated side
-            // by side, and their results merged in input order.
-            for (String board : boardOrder) {
-                List<Circuit> out = outgoing.getOrDefault(board, List.of());
+            // by side, and their results merged in calculation order.
+            for (List<Circuit> out : levels()) {
                 List<Circuit> finals = out.stream().filter(c -> !c.isFeeder()).toList();
                 List<SideBySide.Outcome<Recorded>> recorded = SideBySide.map(finals,
                         original -> record(sizing, original, sized.get(original.id())));
@@ -525,6 +524,25 @@ public final class Engine {
             List<Circuit> out = new ArrayList<>();
             for (String b : boardOrder) out.addAll(outgoing.getOrDefault(b, List.of()));
             return out;
+        }
+
+        /**
+         * The circuits of {@link #order()} by the distance of their board from the origin: a circuit
+         * depends only on the feeders above it, all of them in earlier levels, so a level's circuits
+         * can be calculated side by side. Read level after level, the circuits are in {@link #order()}
+         * (the boards are in breadth-first order).
+         */
+        List<List<Circuit>> levels() {
+            Map<String, Integer> depth = new HashMap<>();
+            List<List<Circuit>> levels = new ArrayList<>();
+            for (String b : boardOrder) {
+                Circuit feeder = feederOf.get(b);
+                int d = feeder == null ? 0 : depth.get(feeder.from()) + 1;
+                depth.put(b, d);
+                if (d == levels.size()) levels.add(new ArrayList<>());
+                levels.get(d).addAll(outgoing.getOrDefault(b, List.of()));
+            }
+            return levels;
         }
 
         /** The feeders from the origin down to the board a circuit starts at, origin first. */

@@ -74,14 +74,13 @@ final class Sizing {
     }
 
     /**
-     * The smallest size passing each circuit's own checks, board by board from the origin. A
-     * circuit depends only on the feeders above it, never on another circuit of its own board, so
-     * the circuits of a board are sized in parallel. The outcome is merged in input order, so it is
-     * the same as one circuit after another.
+     * The smallest size passing each circuit's own checks, level by level from the origin. A
+     * circuit depends only on the feeders above it, never on another circuit of its own board or
+     * level, so the circuits of a level are sized in parallel. The outcome is merged in calculation
+     * order, so it is the same as one circuit after another.
      */
     private void firstPass() {
-        for (String board : run.boardOrder) {
-            List<Circuit> outgoing = run.outgoing.getOrDefault(board, List.of());
+        for (List<Circuit> outgoing : run.levels()) {
             List<SideBySide.Outcome<FirstChoice>> choices = SideBySide.map(outgoing, c -> firstChoice(c, results));
             for (int i = 0; i < outgoing.size(); i++) {
                 Circuit c = outgoing.get(i);
