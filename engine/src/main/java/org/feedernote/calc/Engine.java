@@ -105,6 +105,13 @@ public final class Engine {
             return true;
         }
 
+        /** The evaluations of circuits equal to c among this and the older ones, or null. */
+        Evaluated of(Circuit c) {
+            Evaluated rest = older == null ? null : older.of(c);
+            if (!same(circuit, c)) return rest;
+            return rest == older ? this : new Evaluated(circuit, upstream, result, own, rest);
+        }
+
         /** This and at most n - 1 older evaluations. */
         Evaluated keep(int n) {
             if (older == null) return this;
@@ -558,6 +565,14 @@ public final class Engine {
 
         /** The evaluations of each circuit with the no-op trace kept for reuse, the latest first. */
         private final Map<String, Evaluated> evaluated = new java.util.concurrent.ConcurrentHashMap<>();
+
+        /**
+         * Drops the kept evaluations of the circuit's other sizes, which the sizing will not ask
+         * for again. Only the memory changes: a kept evaluation saves work, never alters a result.
+         */
+        void forgetEvaluationsOtherThan(Circuit c) {
+            evaluated.computeIfPresent(c.id(), (id, e) -> e.of(c));
+        }
 
         /** The feeders from the origin down to each board, origin first. */
         private final Map<String, Circuit[]> feederPaths = new java.util.concurrent.ConcurrentHashMap<>();

@@ -134,6 +134,8 @@ final class Sizing {
             if (!ok) break;
             best = candidate;
         }
+        // Only the chosen protective conductor is calculated again (in the final pass).
+        if (best != chosen) run.forgetEvaluationsOtherThan(best);
         return best;
     }
 
@@ -353,7 +355,11 @@ final class Sizing {
             Circuit chosen = withCpc(c, c.cable().size().mm2());
             return new FirstChoice(chosen, run.evaluate(chosen, Trace.noop(), working), List.of(), null, null);
         }
-        return smallestPassingOwnChecks(c, working);
+        FirstChoice f = smallestPassingOwnChecks(c, working);
+        // The sizing never returns below its first choice: the smaller sizes' evaluations would
+        // only be carried through every collection of the run.
+        run.forgetEvaluationsOtherThan(f.chosen());
+        return f;
     }
 
     private FirstChoice smallestPassingOwnChecks(Circuit c, Map<String, CircuitResult> working) {
