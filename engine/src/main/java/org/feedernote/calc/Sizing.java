@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 
 import org.feedernote.data.ReferenceData;
@@ -424,27 +423,24 @@ final class Sizing {
     private static Failure ownFailure(CircuitResult r) {
         CheckResult cap = r.check("capacity");
         if (cap != null && !cap.pass()) {
-            return new Failure(String.format(Locale.ROOT, "I_z %s A < I_n %s A", Engine.trim(r.capacity().value()), Engine.trim(r.rating().value()))
+            return new Failure("I_z " + Engine.trim(r.capacity().value()) + " A < I_n " + Engine.trim(r.rating().value()) + " A"
                     + (r.rating().value() < r.designCurrent().value() ? " (and I_n < I_b)" : ""), "capacity");
         }
         CheckResult ol = r.check("overload");
         if (ol != null && !ol.pass()) {
-            return new Failure(String.format(Locale.ROOT, "I_2 %s A > 1.45 · I_z = %s A", Engine.trim(ol.value()), Engine.trim(ol.limit())),
-                    "overload");
+            return new Failure("I_2 " + Engine.trim(ol.value()) + " A > 1.45 · I_z = " + Engine.trim(ol.limit()) + " A", "overload");
         }
         CheckResult dc = r.check("disconnection");
         if (dc != null && !dc.pass() && dc.determined()) {
-            return new Failure(String.format(Locale.ROOT, "Z_s %s Ω > Z_s,max %s Ω", Engine.trim(dc.value()), Engine.trim(dc.limit())),
-                    "disconnection");
+            return new Failure("Z_s " + Engine.trim(dc.value()) + " Ω > Z_s,max " + Engine.trim(dc.limit()) + " Ω", "disconnection");
         }
         CheckResult sc = r.check("short-circuit");
         if (sc != null && !sc.pass() && sc.determined()) {
-            return new Failure(String.format(Locale.ROOT, "S below the adiabatic minimum %s mm²", Engine.trim(sc.limit())), "short-circuit");
+            return new Failure("S below the adiabatic minimum " + Engine.trim(sc.limit()) + " mm²", "short-circuit");
         }
         CheckResult pc = r.check("protective-conductor");
         if (pc != null && !pc.pass() && pc.determined() && r.circuit().cable().cpc().mm2() < r.circuit().cable().size().mm2()) {
-            return new Failure(String.format(Locale.ROOT, "protective conductor below the adiabatic minimum %s mm²", Engine.trim(pc.limit())),
-                    "protective-conductor");
+            return new Failure("protective conductor below the adiabatic minimum " + Engine.trim(pc.limit()) + " mm²", "protective-conductor");
         }
         return null;
     }
@@ -545,14 +541,15 @@ final class Sizing {
         StringBuilder others = new StringBuilder();
         for (Candidate c : top) {
             if (others.length() > 0) others.append("; ");
-            others.append(String.format(Locale.ROOT, "%s %s → %s: %.3f %%·load per %.3f dm³", c.id(), mm2(c.from()), mm2(c.to()), c.gain(), c.cost()));
+            others.append(c.id()).append(' ').append(mm2(c.from())).append(" → ").append(mm2(c.to())).append(": ")
+                    .append(Engine.fixed3(c.gain())).append(" %·load per ").append(Engine.fixed3(c.cost())).append(" dm³");
         }
         int failing = failingDrop.size();
         String failingList = failingDrop.stream().limit(5).reduce((x, y) -> x + ", " + y).orElse("")
                 + (failing > 5 ? " and " + (failing - 5) + " more" : "");
         note(best.id(), "Enlarged for the cumulative voltage drop", "the drop limit fails at " + failingList + "; best candidates: " + others,
-                String.format(Locale.ROOT, "%s → %s, the most drop per added conductor volume (%.3f %% per %.3f dm³)",
-                        mm2(best.from()), mm2(best.to()), best.gain(), best.cost()));
+                mm2(best.from()) + " → " + mm2(best.to()) + ", the most drop per added conductor volume (" + Engine.fixed3(best.gain())
+                        + " % per " + Engine.fixed3(best.cost()) + " dm³)");
         // Circuits of their own (no circuit below them) whose step buys at least as much as the best
         // feeder step would be chosen next anyway, one after another: a final circuit's gain does
         // not change when another final circuit grows, and a feeder's only falls. Take them now
@@ -571,7 +568,7 @@ final class Sizing {
         apply(best.slot(), best.to());
         for (Candidate c : batch) {
             note(c.id(), "Enlarged for the cumulative voltage drop", "its own drop limit fails; no feeder step buys more drop per volume",
-                    String.format(Locale.ROOT, "%s → %s (%.3f %% per %.3f dm³)", mm2(c.from()), mm2(c.to()), c.gain(), c.cost()));
+                    mm2(c.from()) + " → " + mm2(c.to()) + " (" + Engine.fixed3(c.gain()) + " % per " + Engine.fixed3(c.cost()) + " dm³)");
             apply(c.slot(), c.to());
         }
         return true;

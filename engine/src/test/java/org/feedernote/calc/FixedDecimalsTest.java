@@ -1,0 +1,49 @@
+package org.feedernote.calc;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
+import java.util.Locale;
+import java.util.SplittableRandom;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+
+/**
+ * The sizing's notes write gains and volumes with three decimals without the JDK's formatter:
+ * the text must be exactly what String.format(Locale.ROOT, "%.3f", v) writes, or the trace of a
+ * note written by an earlier version would no longer recompute byte for byte.
+ */
+class FixedDecimalsTest {
+    private static String formatter(double v) {
+        return String.format(Locale.ROOT, "%.3f", v);
+    }
+
+    @ParameterizedTest
+    @ValueSource(doubles = {0, -0.0, 0.0005, -0.0005, 0.0004999, 1.0005, 2.0005, 1.2345, -1.2345, 0.1 + 0.2, 999.9995,
+            1e7, 1.23456789e9, 5e-324, -5e-324, 0.125, 0.0625, 4.35, 1.005, 123456.0004999})
+    void writesWhatTheFormatterWritesForEdgeValues(double v) {
+        assertEquals(formatter(v), Engine.fixed3(v));
+    }
+
+    @Test
+    void writesWhatTheFormatterWritesForManyValues() {
+        SplittableRandom random = new SplittableRandom(20261202);
+        for (int i = 0; i < 100_000; i++) {
+            double v = switch (i % 4) {
+                case 0 -> random.nextDouble() * 10;
+                case 1 -> Math.round(random.nextDouble() * 1e6) / 1e4 + 0.0005;
+                case 2 -> -random.nextDouble() * 1000;
+                default -> Math.scalb(random.nextDouble(), random.nextInt(-30, 30));
+            };
+            assertEquals(formatter(v), Engine.fixed3(v), () -> "for " + v);
+        }
+    }
+
+    @Test
+    void writesWhatTheFormatterWritesForNonFiniteValues() {
+        assertEquals(formatter(Double.NaN), Engine.fixed3(Double.NaN));
+        assertEquals(formatter(Double.POSITIVE_INFINITY), Engine.fixed3(Double.POSITIVE_INFINITY));
+        assertEquals(formatter(Double.NEGATIVE_INFINITY), Engine.fixed3(Double.NEGATIVE_INFINITY));
+    }
+}
