@@ -366,7 +366,17 @@ final class FaultPath {
     }
 
     /** What the k factor depends on: the conductor and insulation materials and the initial temperature. */
-    private record KInputs(Conductor conductor, Insulation insulation, boolean separate, double thetaMax) {}
+    private record KInputs(Conductor conductor, Insulation insulation, boolean separate, double thetaMax) {
+        // Written out, as the sizing's other lookup keys (see TermFormulas.Key).
+        @Override public boolean equals(Object o) {
+            return o instanceof KInputs k && conductor == k.conductor && insulation == k.insulation && separate == k.separate
+                    && Double.compare(thetaMax, k.thetaMax) == 0;
+        }
+
+        @Override public int hashCode() {
+            return ((conductor.ordinal() * 31 + insulation.ordinal()) * 31 + (separate ? 1 : 0)) * 31 + Double.hashCode(thetaMax);
+        }
+    }
 
     /** k by its inputs, for the sizing's candidates (the no-op trace): few combinations serve thousands of circuits. */
     private final Map<KInputs, Double> kValues = new java.util.concurrent.ConcurrentHashMap<>();

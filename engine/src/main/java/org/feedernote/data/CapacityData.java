@@ -38,7 +38,18 @@ public final class CapacityData {
     /** The table and column of a cable and method, and the column in words. */
     private record Column(ReferenceTable table, String column, String label) {}
 
-    private record ColumnKey(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation) {}
+    /** equals and hashCode written out, as the sizing's other lookup keys (see TermFormulas). */
+    private record ColumnKey(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation) {
+        @Override public boolean equals(Object o) {
+            return o instanceof ColumnKey k && insulation == k.insulation && conductor == k.conductor && method == k.method
+                    && loaded == k.loaded && formation == k.formation;
+        }
+
+        @Override public int hashCode() {
+            return (((insulation.ordinal() * 31 + conductor.ordinal()) * 31 + method.ordinal()) * 31 + loaded) * 31
+                    + (formation == null ? -1 : formation.ordinal());
+        }
+    }
 
     /** Columns by cable and method: every sizing candidate looks one up. */
     private final java.util.Map<ColumnKey, Column> columns = new java.util.concurrent.ConcurrentHashMap<>();
@@ -89,7 +100,18 @@ public final class CapacityData {
         return new Column(table, column, label);
     }
 
-    private record Coverage(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation, double size) {}
+    private record Coverage(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation, double size) {
+        // Written out, as ColumnKey's.
+        @Override public boolean equals(Object o) {
+            return o instanceof Coverage k && insulation == k.insulation && conductor == k.conductor && method == k.method
+                    && loaded == k.loaded && formation == k.formation && Double.compare(size, k.size) == 0;
+        }
+
+        @Override public int hashCode() {
+            return ((((insulation.ordinal() * 31 + conductor.ordinal()) * 31 + method.ordinal()) * 31 + loaded) * 31
+                    + (formation == null ? -1 : formation.ordinal())) * 31 + Double.hashCode(size);
+        }
+    }
 
     /** Whether the capacity table has a value for the cable, method and size; asked once per combination. */
     private final java.util.concurrent.ConcurrentHashMap<Coverage, Boolean> covered = new java.util.concurrent.ConcurrentHashMap<>();

@@ -20,7 +20,20 @@ import org.feedernote.trace.Trace;
  * building a formula for every sizing candidate. One per engine; safe to share between threads.
  */
 public final class TermFormulas {
-    private record Key(String kind, String symbol, int terms) {}
+    /**
+     * equals and hashCode are written out: a record's own are linked through method handles,
+     * which the first JIT tier (the command line's) runs several times slower, and every sizing
+     * candidate looks keys up.
+     */
+    private record Key(String kind, String symbol, int terms) {
+        @Override public boolean equals(Object o) {
+            return o instanceof Key k && terms == k.terms && kind.equals(k.kind) && symbol.equals(k.symbol);
+        }
+
+        @Override public int hashCode() {
+            return (kind.hashCode() * 31 + symbol.hashCode()) * 31 + terms;
+        }
+    }
 
     private record Made(Formula formula, List<Var> vars) {}
 

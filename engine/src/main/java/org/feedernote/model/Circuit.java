@@ -5,4 +5,20 @@ public record Circuit(String id, String description, String from, String to, Loa
                       Cable cable, Conditions conditions, Device device, Double designCurrentA, Where where) {
     public boolean isFeeder() { return to != null; }
     public Circuit withCable(Cable c) { return new Circuit(id, description, from, to, load, phase, lengthM, c, conditions, device, designCurrentA, where); }
+
+    /**
+     * The record's equality, written out: the generated one is linked through method handles,
+     * which the first JIT tier (the command line's) runs several times slower, and the sizing
+     * compares candidates with the circuits it has evaluated. The cable, where candidates differ,
+     * first; the other parts are mostly the same objects. (hashCode stays the record's, which
+     * agrees with this.)
+     */
+    @Override public boolean equals(Object o) {
+        if (o == this) return true;
+        return o instanceof Circuit c && java.util.Objects.equals(cable, c.cable) && Double.compare(lengthM, c.lengthM) == 0 && java.util.Objects.equals(id, c.id)
+                && java.util.Objects.equals(description, c.description) && java.util.Objects.equals(from, c.from)
+                && java.util.Objects.equals(to, c.to) && java.util.Objects.equals(load, c.load) && phase == c.phase
+                && java.util.Objects.equals(conditions, c.conditions) && java.util.Objects.equals(device, c.device)
+                && java.util.Objects.equals(designCurrentA, c.designCurrentA) && java.util.Objects.equals(where, c.where);
+    }
 }
