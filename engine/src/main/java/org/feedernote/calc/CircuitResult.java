@@ -15,16 +15,22 @@ public record CircuitResult(String id, Circuit circuit, int phases, String conne
                             Q dropExactPercent, Q cumulativePercent, Q limitPercent, Q startingDipPercent,
                             Q faultAtOrigin, Q loopImpedance, Q maxLoopImpedance, Q minEarthFault, BoardFault downstream,
                             List<CheckResult> checks, String governingCheck) {
+    // Plain loops: the sizing asks these of every candidate, and streams cost far more than the
+    // work itself under the first JIT tier, which the command line runs.
     public boolean pass() {
-        return checks.stream().allMatch(CheckResult::pass);
+        for (CheckResult c : checks) if (!c.pass()) return false;
+        return true;
     }
 
     public List<CheckResult> failing() {
-        return checks.stream().filter(c -> !c.pass()).toList();
+        List<CheckResult> failing = new java.util.ArrayList<>();
+        for (CheckResult c : checks) if (!c.pass()) failing.add(c);
+        return List.copyOf(failing);
     }
 
     public CheckResult check(String name) {
-        return checks.stream().filter(c -> c.name().equals(name)).findFirst().orElse(null);
+        for (CheckResult c : checks) if (c.name().equals(name)) return c;
+        return null;
     }
 
     CircuitResult withGoverning(String governing) {

@@ -9,7 +9,9 @@ public interface Token {
     String token();
 
     static <E extends Enum<E> & Token> Optional<E> parse(Class<E> type, String text) {
-        return Arrays.stream(type.getEnumConstants()).filter(e -> e.token().equals(text)).findFirst();
+        // A loop, not a stream: the binding parses several tokens for every circuit of the input.
+        for (E e : type.getEnumConstants()) if (e.token().equals(text)) return Optional.of(e);
+        return Optional.empty();
     }
 
     static <E extends Enum<E> & Token> List<String> tokens(Class<E> type) {
