@@ -120,7 +120,11 @@ public final class Formula {
      */
     public Q eval(Trace trace, String owner, String step, String form, Step.Binding... bindings) {
         for (Step.Binding b : bindings) {
-            if (!b.var().unit().equals(b.q().unit())) {
+            String expected = b.var().unit();
+            String given = b.q().unit();
+            // Units are mostly the same constant: compared by identity first (a call to equals per
+            // binding of every candidate's formulas was a visible share under the first JIT tier).
+            if (expected != given && !expected.equals(given)) {
                 throw new IllegalStateException(owner + step + ": " + b.var().symbol() + " must be in '" + b.var().unit()
                         + "' but " + b.q().id() + " is in '" + b.q().unit() + "'");
             }

@@ -86,7 +86,8 @@ final class StructureValidator {
             }
         }
         for (List<String> group : spec.exactlyOne()) {
-            List<String> present = group.stream().filter(obj.entries()::containsKey).toList();
+            List<String> present = new ArrayList<>(2);
+            for (String key : group) if (obj.entries().containsKey(key)) present.add(key);
             if (present.size() != 1) {
                 error(obj.pos(), path, present.isEmpty()
                         ? "give exactly one of " + String.join(", ", group) + "; none is given"
