@@ -153,6 +153,8 @@ final class Sizing {
         final Circuit original;
         final boolean autoSized;
         final boolean feeder;
+        /** A motor whose starting dip is checked (the only circuits with a motor-starting check). */
+        final boolean startingChecked;
         /** Sizes the tables cover for this cable and method, ascending. */
         final double[] covered;
         /** The feeders from the origin to the board the circuit starts at. */
@@ -184,6 +186,8 @@ final class Sizing {
             this.original = original;
             this.autoSized = original.cable().size().auto();
             this.feeder = original.isFeeder();
+            this.startingChecked = !feeder && original.load().kind() == org.feedernote.model.LoadKind.MOTOR
+                    && original.load().startingCurrentMultiple() != null;
             this.covered = covered.stream().mapToDouble(Double::doubleValue).toArray();
             this.current = current;
         }
@@ -271,7 +275,7 @@ final class Sizing {
     private void track(Slot slot) {
         if (slot.feeder) return;
         CircuitResult r = results.get(slot.id);
-        boolean fails = cumulative(slot) > r.limitPercent().value() + 1e-9 || motorStartingFails(slot.id);
+        boolean fails = cumulative(slot) > r.limitPercent().value() + 1e-9 || slot.startingChecked && motorStartingFails(slot.id);
         if (fails && slot.seq < 0) {
             failingDrop.add(slot.id);
             slot.seq = nextSeq++;
