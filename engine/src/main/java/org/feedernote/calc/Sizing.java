@@ -134,7 +134,7 @@ final class Sizing {
             best = candidate;
         }
         // Only the chosen protective conductor is calculated again (in the final pass).
-        if (best != chosen) run.forgetEvaluationsOtherThan(best);
+        run.forgetEvaluationsOtherThan(best);
         return best;
     }
 
