@@ -1070,7 +1070,7 @@ public final class Engine {
      */
     static String trim(double v) {
         if (!Double.isFinite(v)) return Double.toString(v);
-        java.math.BigDecimal d = new java.math.BigDecimal(Double.toString(v)).setScale(3, java.math.RoundingMode.HALF_UP);
+        java.math.BigDecimal d = threeDecimals(v);
         if (d.signum() == 0) return v < 0 || (v == 0 && 1 / v < 0) ? "-0" : "0";
         return d.stripTrailingZeros().toPlainString();
     }
@@ -1083,8 +1083,13 @@ public final class Engine {
      */
     static String fixed3(double v) {
         if (!Double.isFinite(v)) return Double.isNaN(v) ? "NaN" : v > 0 ? "Infinity" : "-Infinity";
-        java.math.BigDecimal d = new java.math.BigDecimal(Double.toString(v)).setScale(3, java.math.RoundingMode.HALF_UP);
+        java.math.BigDecimal d = threeDecimals(v);
         String plain = d.toPlainString();
         return d.signum() == 0 && (v < 0 || 1 / v < 0) ? "-" + plain : plain;
+    }
+
+    /** The shortest decimal form of a finite value (Double.toString's) rounded half up to three decimals. */
+    private static java.math.BigDecimal threeDecimals(double v) {
+        return new java.math.BigDecimal(Double.toString(v)).setScale(3, java.math.RoundingMode.HALF_UP);
     }
 }

@@ -100,16 +100,14 @@ public final class CapacityData {
         return new Column(table, column, label);
     }
 
-    private record Coverage(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation, double size) {
-        // Written out, as ColumnKey's.
+    /** A column and a size (equals and hashCode written out, as ColumnKey's). */
+    private record Coverage(ColumnKey column, double size) {
         @Override public boolean equals(Object o) {
-            return o instanceof Coverage k && insulation == k.insulation && conductor == k.conductor && method == k.method
-                    && loaded == k.loaded && formation == k.formation && Double.compare(size, k.size) == 0;
+            return o instanceof Coverage k && column.equals(k.column) && Double.compare(size, k.size) == 0;
         }
 
         @Override public int hashCode() {
-            return ((((insulation.ordinal() * 31 + conductor.ordinal()) * 31 + method.ordinal()) * 31 + loaded) * 31
-                    + (formation == null ? -1 : formation.ordinal())) * 31 + Double.hashCode(size);
+            return column.hashCode() * 31 + Double.hashCode(size);
         }
     }
 
@@ -117,7 +115,7 @@ public final class CapacityData {
     private final java.util.concurrent.ConcurrentHashMap<Coverage, Boolean> covered = new java.util.concurrent.ConcurrentHashMap<>();
 
     public boolean covers(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation, double size) {
-        return covered.computeIfAbsent(new Coverage(insulation, conductor, method, loaded, formation, size),
+        return covered.computeIfAbsent(new Coverage(new ColumnKey(insulation, conductor, method, loaded, formation), size),
                 k -> probe(insulation, conductor, method, loaded, formation, size));
     }
 
