@@ -23,21 +23,28 @@ import org.feedernote.model.Installation;
 import org.feedernote.synthetic.SyntheticInstallation;
 
 /**
- * The engine on a generated installation, one thread: the whole calculation with auto-sizing,
- * figures only (what check does) and with every step recorded (what note and --trace do). One
- * operation is one installation: circuits per second = operations per second × circuits.
+ * The engine on a generated installation: the whole calculation with auto-sizing, figures only
+ * (what check does) and with every step recorded (what note and --trace do); and the traced check
+ * of the same installation with the sizes and ratings the sizing chose given (a designed
+ * installation checked, no sizing search). One operation is one installation: circuits per second
+ * = operations per second × circuits. Figures per core: the engine, which otherwise runs circuits
+ * side by side on every core, is kept to the benchmark's thread (a common fork-join pool of no
+ * workers) and the collector to one thread (the wrapper's parallel collector); the JIT compiles
+ * on the other core while it warms up.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.Throughput)
 @OutputTimeUnit(TimeUnit.SECONDS)
 @Warmup(iterations = 3, time = 2)
 @Measurement(iterations = 5, time = 2)
-@Fork(value = 1, jvmArgsAppend = {"-Xmx4g"})
+@Fork(value = 1, jvmArgsAppend = {"-Xmx4g", "-XX:+UseParallelGC", "-XX:ParallelGCThreads=1",
+        "-Djava.util.concurrent.ForkJoinPool.common.parallelism=0"})
 public class EngineBenchmark {
     @Param({"1000"})
     public int circuits;
 
     private Installation installation;
+    private Installation sized;
     private Engine engine;
 
     @Setup(Level.Trial)
@@ -46,6 +53,7 @@ public class EngineBenchmark {
         engine = new Engine(data);
         installation = InputReader.parse("synthetic.json",
                 SyntheticInstallation.toJson(SyntheticInstallation.generate(circuits, 1)), true);
+        sized = SyntheticInstallation.asSized(installation, engine.run(installation, false));
     }
 
     @Benchmark
@@ -56,5 +64,10 @@ public class EngineBenchmark {
     @Benchmark
     public Result traced() {
         return engine.run(installation, true);
+    }
+
+    @Benchmark
+    public Result tracedGivenSizes() {
+        return engine.run(sized, true);
     }
 }

@@ -113,6 +113,28 @@ public final class SyntheticInstallation {
                 + ", installation: {method: C" + grouping + "}, device: {kind: mcb, curve: C, rating_a: auto, breaking_capacity_ka: 50, let_through_a2s: 80000}}";
     }
 
+    /**
+     * The installation with every size and rating given as 'auto' fixed to what the calculation
+     * chose: checking it is the check of a designed installation, with no sizing search (the
+     * benchmark's traced check of given sizes).
+     */
+    public static org.feedernote.model.Installation asSized(org.feedernote.model.Installation input,
+                                                            org.feedernote.calc.Result calculated) {
+        List<org.feedernote.model.Circuit> fixed = new ArrayList<>();
+        for (org.feedernote.calc.CircuitResult r : calculated.circuits()) {
+            org.feedernote.model.Circuit c = r.circuit();
+            org.feedernote.model.Device d = c.device();
+            if (d.ratingA() == null) {
+                d = new org.feedernote.model.Device(d.kind(), r.rating().value(), d.curve(), d.instantaneousA(),
+                        d.breakingCapacityKa(), d.disconnectionCurrentA(), d.rcdResidualA(), d.letThroughA2s());
+            }
+            fixed.add(new org.feedernote.model.Circuit(c.id(), c.description(), c.from(), c.to(), c.load(), c.phase(),
+                    c.lengthM(), c.cable(), c.conditions(), d, c.designCurrentA(), c.where()));
+        }
+        return new org.feedernote.model.Installation(input.sourceName(), input.project(), input.basis(), input.supply(),
+                input.boards(), List.copyOf(fixed), input.canonical(), input.sourceText());
+    }
+
     private static double round(double v) {
         return Math.round(v * 100) / 100.0;
     }

@@ -32,4 +32,28 @@ class SyntheticInstallationTest {
         var result = new org.feedernote.calc.Engine(org.feedernote.data.ReferenceData.standard()).run(fromJson, false);
         assertTrue(result.pass(), () -> result.circuits().stream().filter(c -> !c.pass()).map(c -> c.id() + " " + c.failing()).toList().toString());
     }
+
+    /**
+     * The benchmark's traced check of given sizes checks the design the sizing chose: with those
+     * sizes and ratings given, every circuit has the same figures and outcome (common practice,
+     * no source: a chosen design, checked again, is the same design).
+     */
+    @Test
+    void theSizedInstallationIsTheDesignTheSizingChose() throws Exception {
+        var engine = new org.feedernote.calc.Engine(org.feedernote.data.ReferenceData.standard());
+        var input = InputReader.parse("g.json", SyntheticInstallation.toJson(SyntheticInstallation.generate(300, 5)), true);
+        var chosen = engine.run(input, false);
+        var sized = SyntheticInstallation.asSized(input, chosen);
+        assertTrue(sized.circuits().stream().noneMatch(c -> c.cable().size().auto() || c.cable().cpc().auto() || c.device().ratingA() == null));
+        var checked = engine.run(sized, false);
+        for (int i = 0; i < chosen.circuits().size(); i++) {
+            var a = chosen.circuits().get(i);
+            var b = checked.circuits().get(i);
+            assertEquals(a.circuit().cable(), b.circuit().cable(), a.id());
+            assertEquals(a.rating().value(), b.rating().value(), a.id());
+            assertEquals(a.cumulativePercent().value(), b.cumulativePercent().value(), a.id());
+            assertEquals(a.loopImpedance().value(), b.loopImpedance().value(), a.id());
+            assertEquals(a.pass(), b.pass(), a.id());
+        }
+    }
 }
