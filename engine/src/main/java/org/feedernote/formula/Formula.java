@@ -140,10 +140,23 @@ public final class Formula {
         double value = compiled.evaluate(values, owner, step);
         Q q = new Q(owner, step, symbol, value, unit);
         if (trace.recording()) {
-            List<Step.Binding> used = new ArrayList<>();
-            Set<Var> known = vars.size() > 8 ? new java.util.HashSet<>(vars) : null;
-            for (Step.Binding b : bindings) if (known != null ? known.contains(b.var()) : vars.contains(b.var())) used.add(b);
-            trace.add(new Step.Formula(q.id(), title, symbol, unit, id, expr, List.copyOf(used), value, form, reference));
+            // The bindings of variables of this formula, in the order given (mostly the variables' own).
+            Step.Binding[] used = new Step.Binding[bindings.length];
+            int n = 0;
+            Set<Var> known = null;
+            for (int i = 0; i < bindings.length; i++) {
+                Var v = bindings[i].var();
+                boolean ofThis;
+                if (i < vars.size() && vars.get(i) == v) {
+                    ofThis = true;
+                } else {
+                    if (known == null && vars.size() > 8) known = new java.util.HashSet<>(vars);
+                    ofThis = known != null ? known.contains(v) : vars.contains(v);
+                }
+                if (ofThis) used[n++] = bindings[i];
+            }
+            trace.add(new Step.Formula(q.id(), title, symbol, unit, id, expr,
+                    List.of(n == used.length ? used : java.util.Arrays.copyOf(used, n)), value, form, reference));
         }
         return q;
     }

@@ -2,7 +2,6 @@ package org.feedernote.trace;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 
 /**
  * A trace that keeps every step, in sections, and refuses a step id used twice within a top-level
@@ -16,21 +15,21 @@ public final class TraceRecorder implements Trace {
     private final String subtitle;
     private final List<Step> steps = new ArrayList<>();
     private final List<TraceRecorder> children = new ArrayList<>();
-    private final Map<String, Step> index;
+    private final IdSet index;
 
     public TraceRecorder() {
         this("", "", "", null);
     }
 
-    private TraceRecorder(String id, String title, String subtitle, Map<String, Step> index) {
+    private TraceRecorder(String id, String title, String subtitle, IdSet index) {
         this.id = id;
         this.title = title;
         this.subtitle = subtitle;
-        this.index = index == null ? new java.util.HashMap<>(256) : index;
+        this.index = index == null ? new IdSet() : index;
     }
 
     @Override public void add(Step step) {
-        if (index.putIfAbsent(step.id(), step) != null) {
+        if (!index.add(step.id())) {
             throw new IllegalStateException("step id recorded twice: " + step.id());
         }
         steps.add(step);
@@ -43,6 +42,45 @@ public final class TraceRecorder implements Trace {
         TraceRecorder child = new TraceRecorder(sectionId, sectionTitle, sectionSubtitle, id.isEmpty() ? null : index);
         children.add(child);
         return child;
+    }
+
+    /**
+     * The step ids of a top-level section: a set in one array (open addressing), without the entry
+     * object a hash set keeps per id, since the index lives as long as the trace and every young
+     * collection of a large traced run copies it.
+     */
+    private static final class IdSet {
+        private String[] slots = new String[256];
+        private int size;
+
+        boolean add(String stepId) {
+            if (2 * (size + 1) > slots.length) grow();
+            if (!insert(slots, stepId)) return false;
+            size++;
+            return true;
+        }
+
+        private static boolean insert(String[] table, String stepId) {
+            int mask = table.length - 1;
+            for (int i = spread(stepId.hashCode()) & mask; ; i = (i + 1) & mask) {
+                String there = table[i];
+                if (there == null) {
+                    table[i] = stepId;
+                    return true;
+                }
+                if (there.equals(stepId)) return false;
+            }
+        }
+
+        private static int spread(int h) {
+            return h ^ (h >>> 16);
+        }
+
+        private void grow() {
+            String[] larger = new String[slots.length * 2];
+            for (String s : slots) if (s != null) insert(larger, s);
+            slots = larger;
+        }
     }
 
     /** The recorded steps, frozen. */
