@@ -15,6 +15,8 @@ public final class TraceRecorder implements Trace {
     private final String subtitle;
     private final List<Step> steps = new ArrayList<>();
     private final List<TraceRecorder> children = new ArrayList<>();
+    /** Set when the section is made: the steps are the section's from then on. */
+    private boolean frozen;
     private final IdSet index;
 
     public TraceRecorder() {
@@ -29,6 +31,7 @@ public final class TraceRecorder implements Trace {
     }
 
     @Override public void add(Step step) {
+        refuseIfFrozen();
         if (!index.add(step.id())) {
             throw new IllegalStateException("step id recorded twice: " + step.id());
         }
@@ -38,6 +41,7 @@ public final class TraceRecorder implements Trace {
     @Override public boolean recording() { return true; }
 
     @Override public Trace section(String sectionId, String sectionTitle, String sectionSubtitle) {
+        refuseIfFrozen();
         // A top-level section keeps its own index; its sub-sections share it.
         TraceRecorder child = new TraceRecorder(sectionId, sectionTitle, sectionSubtitle, id.isEmpty() ? null : index);
         children.add(child);
@@ -85,7 +89,16 @@ public final class TraceRecorder implements Trace {
 
     /** The recorded steps, frozen. */
     public Section toSection() {
-        return new Section(id, title, subtitle, List.copyOf(steps),
-                children.stream().map(TraceRecorder::toSection).toList());
+        // The section takes the recorder's own lists, read-only, rather than copies of them: after
+        // this the recorder refuses more steps and sections, so the section cannot change.
+        frozen = true;
+        List<Section> sections = new ArrayList<>(children.size());
+        for (TraceRecorder c : children) sections.add(c.toSection());
+        return new Section(id, title, subtitle, java.util.Collections.unmodifiableList(steps),
+                java.util.Collections.unmodifiableList(sections));
+    }
+
+    private void refuseIfFrozen() {
+        if (frozen) throw new IllegalStateException("the trace of " + (id.isEmpty() ? "the run" : id) + " is already frozen");
     }
 }

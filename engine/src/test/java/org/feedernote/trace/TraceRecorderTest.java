@@ -38,4 +38,16 @@ class TraceRecorderTest {
         assertEquals(5000, steps.size());
         for (int i = 0; i < 5000; i++) assertEquals("B/" + i, steps.get(i).id());
     }
+
+    @Test
+    void aFrozenTraceTakesNoMoreSteps() {
+        TraceRecorder root = new TraceRecorder();
+        Trace circuit = root.section("C-1", "Circuit C-1", "");
+        circuit.add(note("C-1/a"));
+        Section frozen = root.toSection();
+        assertThrows(IllegalStateException.class, () -> circuit.add(note("C-1/b")));
+        assertThrows(IllegalStateException.class, () -> root.section("C-2", "Circuit C-2", ""));
+        assertThrows(UnsupportedOperationException.class, () -> frozen.sections().get(0).steps().add(note("C-1/c")));
+        assertEquals(1, frozen.sections().get(0).steps().size());
+    }
 }
