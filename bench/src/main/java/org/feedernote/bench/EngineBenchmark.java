@@ -35,8 +35,8 @@ import org.feedernote.synthetic.SyntheticInstallation;
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.Throughput)
 @OutputTimeUnit(TimeUnit.SECONDS)
-@Warmup(iterations = 3, time = 2)
-@Measurement(iterations = 5, time = 2)
+@Warmup(iterations = 10, time = 2)
+@Measurement(iterations = 5, time = 3)
 @Fork(value = 1, jvmArgsAppend = {"-Xmx4g", "-XX:+UseParallelGC", "-XX:ParallelGCThreads=1",
         "-Djava.util.concurrent.ForkJoinPool.common.parallelism=0"})
 public class EngineBenchmark {

@@ -4,6 +4,12 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.SplittableRandom;
 
+import org.feedernote.calc.CircuitResult;
+import org.feedernote.calc.Result;
+import org.feedernote.model.Circuit;
+import org.feedernote.model.Device;
+import org.feedernote.model.Installation;
+
 /**
  * Writes a realistic synthetic installation as a design input (YAML, one circuit per line in
  * flow style): a tree of boards under a transformer, each board with a mix of lighting, socket,
@@ -118,21 +124,20 @@ public final class SyntheticInstallation {
      * chose: checking it is the check of a designed installation, with no sizing search (the
      * benchmark's traced check of given sizes).
      */
-    public static org.feedernote.model.Installation asSized(org.feedernote.model.Installation input,
-                                                            org.feedernote.calc.Result calculated) {
-        List<org.feedernote.model.Circuit> fixed = new ArrayList<>();
-        for (org.feedernote.calc.CircuitResult r : calculated.circuits()) {
-            org.feedernote.model.Circuit c = r.circuit();
-            org.feedernote.model.Device d = c.device();
+    public static Installation asSized(Installation input, Result calculated) {
+        List<Circuit> fixed = new ArrayList<>();
+        for (CircuitResult r : calculated.circuits()) {
+            Circuit c = r.circuit();
+            Device d = c.device();
             if (d.ratingA() == null) {
-                d = new org.feedernote.model.Device(d.kind(), r.rating().value(), d.curve(), d.instantaneousA(),
-                        d.breakingCapacityKa(), d.disconnectionCurrentA(), d.rcdResidualA(), d.letThroughA2s());
+                d = new Device(d.kind(), r.rating().value(), d.curve(), d.instantaneousA(), d.breakingCapacityKa(),
+                        d.disconnectionCurrentA(), d.rcdResidualA(), d.letThroughA2s());
             }
-            fixed.add(new org.feedernote.model.Circuit(c.id(), c.description(), c.from(), c.to(), c.load(), c.phase(),
-                    c.lengthM(), c.cable(), c.conditions(), d, c.designCurrentA(), c.where()));
+            fixed.add(new Circuit(c.id(), c.description(), c.from(), c.to(), c.load(), c.phase(), c.lengthM(), c.cable(),
+                    c.conditions(), d, c.designCurrentA(), c.where()));
         }
-        return new org.feedernote.model.Installation(input.sourceName(), input.project(), input.basis(), input.supply(),
-                input.boards(), List.copyOf(fixed), input.canonical(), input.sourceText());
+        return new Installation(input.sourceName(), input.project(), input.basis(), input.supply(), input.boards(),
+                List.copyOf(fixed), input.canonical(), input.sourceText());
     }
 
     private static double round(double v) {
