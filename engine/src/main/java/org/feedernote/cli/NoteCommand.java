@@ -53,10 +53,20 @@ final class NoteCommand implements Callable<Integer> {
     }
 
     @Override public Integer call() throws IOException {
+        long started = System.nanoTime();
         PrintWriter out = spec.commandLine().getOut();
-        PrintWriter err = spec.commandLine().getErr();
-        Installation inst = Loading.load(input, err);
+        PrintWriter terminal = spec.commandLine().getErr();
+        Installation inst = Loading.load(input, terminal);
         if (inst == null) return ExitStatus.BAD_INPUT;
+        Progress progress = Progress.onTerminal(terminal, System.console() != null, inst.circuits().size(), started);
+        try {
+            return write(inst, progress.messages(out), progress.messages(terminal), progress);
+        } finally {
+            progress.endLine();
+        }
+    }
+
+    private Integer write(Installation inst, PrintWriter out, PrintWriter err, Progress progress) throws IOException {
         if (templates != null) {
             List<String> missing = NoteRenderer.TEMPLATE_FILES.stream()
                     .filter(f -> !java.nio.file.Files.isRegularFile(templates.resolve(f))).toList();
@@ -67,6 +77,7 @@ final class NoteCommand implements Callable<Integer> {
             }
         }
         ReferenceData data = ReferenceData.standard();
+        progress.stage("calculating " + inst.circuits().size() + " circuits");
         Result result = Loading.calculate(inst, data, err);
         if (result == null) return ExitStatus.BAD_INPUT;
         if (inst.project().status() == Status.ISSUED && (!result.pass() || !result.notPerformed().isEmpty())) {
@@ -88,6 +99,7 @@ final class NoteCommand implements Callable<Integer> {
         String since = null;
         java.util.List<String> changes = java.util.List.of();
         if (previous != null) {
+            progress.stage("calculating the previous revision");
             Installation old = Loading.loadAny(previous, err);
             if (old == null) return ExitStatus.BAD_INPUT;
             Result oldResult = Loading.calculate(old, data, err);
@@ -97,6 +109,7 @@ final class NoteCommand implements Callable<Integer> {
             since = old.project().revision();
             changes = report.all().stream().map(Revisions.Change::text).toList();
         }
+        progress.stage("fingerprinting the input");
         String fingerprint = NoteMaker.fingerprint(inst, data);
         if (java.nio.file.Files.exists(pdf) && !force) {
             String existing = existingFingerprint(pdf);
@@ -107,8 +120,7 @@ final class NoteCommand implements Callable<Integer> {
                 return ExitStatus.BAD_INPUT;
             }
         }
-        List<String> unprintable = NoteMaker.write(inst, result, data, templates, since, changes, pdf, traceFile,
-                Progress.onTerminal(err, System.console() != null, inst.circuits().size()));
+        List<String> unprintable = NoteMaker.write(inst, result, data, templates, since, changes, pdf, traceFile, progress);
         if (!unprintable.isEmpty()) {
             StringBuilder chars = new StringBuilder();
             for (String u : unprintable) chars.append(chars.length() == 0 ? "" : ", ").append(u).append(' ')

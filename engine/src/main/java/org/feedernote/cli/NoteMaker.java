@@ -33,13 +33,16 @@ final class NoteMaker {
      * the input the note's fonts cannot show (as "U+6CF5"; printed as a placeholder).
      */
     static List<String> write(Installation inst, Result result, ReferenceData data, Path templates, String changesSince,
-                              List<String> changes, Path pdf, Path traceFile, NoteRenderer.Progress progress) throws IOException {
+                              List<String> changes, Path pdf, Path traceFile, Progress progress) throws IOException {
         String fingerprint = fingerprint(inst, data);
         NoteRenderer renderer = new NoteRenderer(templates);
+        progress.stage("preparing the note");
         NoteView view = NoteBuilder.build(result, data, fingerprint, Version.engine(), changesSince, changes);
+        int sections = result.trace().sections().size();
         Files.writeAtomically(traceFile, out -> {
             java.io.Writer w = new java.io.OutputStreamWriter(out, StandardCharsets.UTF_8);
-            TraceJson.write(result.trace(), Version.engine(), data.version(), fingerprint, w);
+            TraceJson.write(result.trace(), Version.engine(), data.version(), fingerprint, w,
+                    done -> progress.counted("writing the trace: section", done, sections));
             w.flush();
         });
         List<List<String>> unprintable = new java.util.ArrayList<>(1);

@@ -1,13 +1,17 @@
 package org.feedernote.cli;
 
 import java.io.PrintWriter;
-import java.util.Locale;
+import java.io.Writer;
 
 import org.feedernote.report.NoteRenderer;
 
 /**
- * "note: section 1 234 of 10 006" on one terminal line, rewritten at most a few times a second,
- * for notes long enough to take a while; nothing at all when standard error is not a terminal.
+ * How far a long note has come, on one terminal line rewritten as it goes: each stage named as
+ * it begins ("calculating 10000 circuits"), the counted ones with their count ("writing the trace:
+ * section 1234 of 10002"), at most a few times a second, with the seconds since the command
+ * began. Nothing at all when standard error is not a terminal or the installation is small.
+ * Messages printed meanwhile go through {@link #messages}, which ends the line first; the command
+ * ends the line when it is done ({@link #endLine()}).
  */
 final class Progress implements NoteRenderer.Progress {
     /** Below this many circuits a note takes about a second: no progress line. */
@@ -15,24 +19,87 @@ final class Progress implements NoteRenderer.Progress {
     private static final long INTERVAL_NANOS = 250_000_000L;
 
     private final PrintWriter err;
-    private final long started = System.nanoTime();
+    private final long started;
     private long last;
+    /** The counted stage last shown. */
+    private String counting;
+    /** Characters of the line on the terminal now (0: none); a shorter line blanks the rest. */
+    private int shown;
 
-    private Progress(PrintWriter err) {
+    private Progress(PrintWriter err, long started) {
         this.err = err;
+        this.started = started;
     }
 
-    static NoteRenderer.Progress onTerminal(PrintWriter err, boolean terminal, int circuits) {
-        return terminal && circuits >= SHOWN_FROM_CIRCUITS ? new Progress(err) : NoteRenderer.Progress.NONE;
+    /**
+     * @param started System.nanoTime() when the command began: the seconds shown count from it
+     */
+    static Progress onTerminal(PrintWriter err, boolean terminal, int circuits, long started) {
+        return new Progress(terminal && circuits >= SHOWN_FROM_CIRCUITS ? err : null, started);
     }
 
-    @Override public void sectionDone(int done, int total) {
+    /** Progress that shows nothing (verify's second rendering, tests). */
+    static Progress silent() {
+        return new Progress(null, System.nanoTime());
+    }
+
+    /**
+     * Where to print while the progress line may be showing (standard output or error): a writer
+     * that ends the line before the first character of a message, or the target itself when no
+     * progress is shown.
+     */
+    PrintWriter messages(PrintWriter target) {
+        if (err == null) return target;
+        return new PrintWriter(new Writer() {
+            @Override public void write(char[] text, int off, int len) {
+                endLine();
+                target.write(text, off, len);
+            }
+
+            @Override public void flush() {
+                target.flush();
+            }
+
+            @Override public void close() {
+                target.flush();
+            }
+        }, true);
+    }
+
+    /** A stage whose steps are not counted, named as it begins. */
+    @Override public synchronized void stage(String what) {
+        if (err == null) return;
+        show(what, System.nanoTime());
+    }
+
+    /** A counted stage: shown as it begins, then at most a few times a second, and when it completes. */
+    synchronized void counted(String what, int done, int total) {
+        if (err == null) return;
         long now = System.nanoTime();
-        if (done < total && now - last < INTERVAL_NANOS) return;
-        last = now;
-        err.print(String.format(Locale.ROOT, "\rfeedernote: laying out the note: section %d of %d (%.0f s)", done, total,
-                (now - started) / 1e9));
-        if (done == total) err.println();
+        if (done < total && now - last < INTERVAL_NANOS && what.equals(counting)) return;
+        counting = what;
+        show(what + " " + done + " of " + total, now);
+    }
+
+    @Override public synchronized void sectionDone(int done, int total) {
+        counted("laying out the note: section", done, total);
+    }
+
+    /** Ends the progress line, if one is showing. */
+    synchronized void endLine() {
+        if (err == null || shown == 0) return;
+        err.println();
         err.flush();
+        shown = 0;
+    }
+
+    private void show(String what, long now) {
+        last = now;
+        String line = "feedernote: " + what + " (" + Math.round((now - started) / 1e9) + " s)";
+        StringBuilder b = new StringBuilder("\r").append(line);
+        for (int i = line.length(); i < shown; i++) b.append(' ');
+        err.print(b);
+        err.flush();
+        shown = line.length();
     }
 }

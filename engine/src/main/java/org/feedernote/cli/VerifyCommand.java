@@ -75,7 +75,7 @@ final class VerifyCommand implements Callable<Integer> {
             try {
                 Path again = scratch.resolve("note.pdf");
                 NoteMaker.write(inst, result, data, null, null, List.of(), again, scratch.resolve("trace.json"),
-                        org.feedernote.report.NoteRenderer.Progress.NONE);
+                        Progress.silent());
                 if (java.nio.file.Files.mismatch(again, note) >= 0) {
                     problems.add("the PDF's bytes differ from the note this engine writes for the embedded input"
                             + " (the document was edited after it was written, or written with --templates or --previous)");

@@ -100,6 +100,9 @@ public final class NoteRenderer {
     public interface Progress {
         void sectionDone(int done, int total);
 
+        /** A stage of the rendering that is not counted by sections begins. */
+        default void stage(String what) {}
+
         Progress NONE = (done, total) -> {};
     }
 
@@ -206,6 +209,7 @@ public final class NoteRenderer {
         PdfDate date = new PdfDate(calendar(noteDate));
         info.put(PdfName.CREATIONDATE, date);
         info.put(PdfName.MODDATE, date);
+        progress.stage("attaching the input and the trace");
         for (Attachment a : attachments) {
             // zlib's default level: OpenPDF's "compress" means level 9, three times slower on a
             // long trace for a file a few per cent smaller.
@@ -218,6 +222,7 @@ public final class NoteRenderer {
         // Bytes written so far; OpenPDF's getCurrentDocumentSize() adds an estimate of the
         // cross-reference table and so lies past the font objects of a long note.
         long tail = counted.count;
+        progress.stage("finishing the PDF");
         document.close();
         return new Rendered(tail, unprintable);
     }
@@ -265,6 +270,8 @@ public final class NoteRenderer {
             int next = 0;
             while (next < parts && ahead.size() < PREPARED_AHEAD) ahead.add(schedule(preparing, prepareTask(note, typesetter, next++, sections, appendix)));
             for (int i = 0; i < parts; i++) {
+                if (i == 0) progress.stage("laying out the front matter and the summary schedule");
+                if (i == sections + 1) progress.stage("laying out the appendices");
                 java.util.concurrent.FutureTask<Typesetter.Prepared> first = ahead.removeFirst();
                 helpWhileWaiting(first, ahead);
                 Typesetter.Prepared part = await(first);

@@ -30,6 +30,12 @@ public final class TraceJson {
      */
     public static void write(Section root, String engineVersion, String dataVersion, String fingerprint, java.io.Writer out)
             throws java.io.IOException {
+        write(root, engineVersion, dataVersion, fingerprint, out, done -> {});
+    }
+
+    /** As above; sectionsWritten hears the number of top-level sections written so far, after each. */
+    public static void write(Section root, String engineVersion, String dataVersion, String fingerprint, java.io.Writer out,
+                             java.util.function.IntConsumer sectionsWritten) throws java.io.IOException {
         try (com.fasterxml.jackson.core.JsonGenerator g = MAPPER.getFactory().createGenerator(out)) {
             g.disable(com.fasterxml.jackson.core.JsonGenerator.Feature.AUTO_CLOSE_TARGET);
             g.useDefaultPrettyPrinter();
@@ -40,7 +46,11 @@ public final class TraceJson {
             g.writeStringField("reference_data", dataVersion);
             g.writeStringField("fingerprint", fingerprint);
             g.writeArrayFieldStart("sections");
-            for (Section s : root.sections()) MAPPER.writeTree(g, section(s));
+            int done = 0;
+            for (Section s : root.sections()) {
+                MAPPER.writeTree(g, section(s));
+                sectionsWritten.accept(++done);
+            }
             g.writeEndArray();
             g.writeEndObject();
         }

@@ -7,29 +7,73 @@ import java.io.StringWriter;
 
 import org.junit.jupiter.api.Test;
 
-import org.feedernote.report.NoteRenderer;
-
-/** Progress of a long note: on a terminal a single rewritten line; elsewhere nothing. */
+/** Progress of a long note: on a terminal a single rewritten line naming each stage; elsewhere nothing. */
 class ProgressTest {
+    private static void runAllStages(Progress p, int sections) {
+        p.stage("calculating 500 circuits");
+        p.stage("preparing the note");
+        for (int i = 1; i <= sections; i++) p.counted("writing the trace: section", i, sections);
+        p.stage("laying out the front matter and the summary schedule");
+        for (int i = 1; i <= sections; i++) p.sectionDone(i, sections);
+        p.stage("finishing the PDF");
+        p.endLine();
+    }
+
     @Test
     void nothingIsWrittenWhenStandardErrorIsNotATerminal() {
-        assertSame(NoteRenderer.Progress.NONE, Progress.onTerminal(new PrintWriter(new StringWriter()), false, 10_000));
+        StringWriter text = new StringWriter();
+        PrintWriter err = new PrintWriter(text);
+        Progress p = Progress.onTerminal(err, false, 10_000, System.nanoTime());
+        runAllStages(p, 500);
+        assertEquals("", text.toString());
+        assertSame(err, p.messages(err), "messages go straight to standard error");
     }
 
     @Test
     void aSmallNoteShowsNoProgress() {
-        assertSame(NoteRenderer.Progress.NONE, Progress.onTerminal(new PrintWriter(new StringWriter()), true, 7));
+        StringWriter text = new StringWriter();
+        Progress p = Progress.onTerminal(new PrintWriter(text), true, 7, System.nanoTime());
+        runAllStages(p, 7);
+        assertEquals("", text.toString());
     }
 
     @Test
-    void onATerminalTheLineIsRewrittenAndEndsWithTheTotal() {
+    void onATerminalEachStageIsNamedOnTheSameLineWhichIsEndedAtTheEnd() {
         StringWriter text = new StringWriter();
-        NoteRenderer.Progress p = Progress.onTerminal(new PrintWriter(text), true, 500);
-        for (int i = 1; i <= 500; i++) p.sectionDone(i, 500);
+        Progress p = Progress.onTerminal(new PrintWriter(text), true, 500, System.nanoTime());
+        runAllStages(p, 500);
         String out = text.toString();
-        assertTrue(out.startsWith("\rfeedernote: laying out the note: section 1 of 500"), out);
+        assertTrue(out.startsWith("\rfeedernote: calculating 500 circuits (0 s)"), out);
+        assertTrue(out.contains("\rfeedernote: preparing the note (0 s)"), out);
+        assertTrue(out.contains("\rfeedernote: writing the trace: section 500 of 500"), out);
+        assertTrue(out.contains("\rfeedernote: laying out the note: section 1 of 500"), out);
         assertTrue(out.contains("\rfeedernote: laying out the note: section 500 of 500"), out);
+        assertTrue(out.contains("\rfeedernote: finishing the PDF (0 s)"), out);
         assertTrue(out.endsWith(System.lineSeparator()), "the finished line is ended");
-        assertTrue(out.split("\r").length < 50, "rewritten a few times a second, not once per section");
+        assertEquals(1, out.split(System.lineSeparator(), -1).length - 1, "one line, rewritten");
+        assertTrue(out.split("\r").length < 50, "counts rewritten a few times a second, not once per section");
+    }
+
+    @Test
+    void aShorterStageBlanksWhatTheLongerOneLeft() {
+        StringWriter text = new StringWriter();
+        Progress p = Progress.onTerminal(new PrintWriter(text), true, 500, System.nanoTime());
+        p.stage("fingerprinting the input");
+        p.stage("preparing");
+        String second = text.toString().substring(text.toString().lastIndexOf('\r'));
+        assertEquals("\rfeedernote: fingerprinting the input (0 s)".length(), second.length());
+        assertTrue(second.startsWith("\rfeedernote: preparing (0 s)   "), second);
+    }
+
+    @Test
+    void aMessageDuringProgressStartsOnALineOfItsOwn() {
+        StringWriter text = new StringWriter();
+        PrintWriter err = new PrintWriter(text);
+        Progress p = Progress.onTerminal(err, true, 500, System.nanoTime());
+        p.stage("calculating 500 circuits");
+        p.messages(err).println("feedernote: refused");
+        p.endLine();
+        assertEquals("\rfeedernote: calculating 500 circuits (0 s)" + System.lineSeparator() + "feedernote: refused"
+                + System.lineSeparator(), text.toString());
     }
 }
