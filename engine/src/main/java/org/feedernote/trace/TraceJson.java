@@ -1,16 +1,16 @@
 package org.feedernote.trace;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
-import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonGenerator;
 
 import org.feedernote.expr.Printer;
 
 /** The versioned JSON form of a trace. Field order is fixed, so the same trace gives the same bytes. */
 public final class TraceJson {
     public static final int FORMAT_VERSION = 1;
-    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+    private static final JsonFactory FACTORY = new JsonFactory();
 
     private TraceJson() {}
 
@@ -36,8 +36,8 @@ public final class TraceJson {
     /** As above; sectionsWritten hears the number of top-level sections written so far, after each. */
     public static void write(Section root, String engineVersion, String dataVersion, String fingerprint, java.io.Writer out,
                              java.util.function.IntConsumer sectionsWritten) throws java.io.IOException {
-        try (com.fasterxml.jackson.core.JsonGenerator g = MAPPER.getFactory().createGenerator(out)) {
-            g.disable(com.fasterxml.jackson.core.JsonGenerator.Feature.AUTO_CLOSE_TARGET);
+        try (JsonGenerator g = FACTORY.createGenerator(out)) {
+            g.disable(JsonGenerator.Feature.AUTO_CLOSE_TARGET);
             g.useDefaultPrettyPrinter();
             g.writeStartObject();
             g.writeStringField("format", "feedernote-trace");
@@ -48,7 +48,7 @@ public final class TraceJson {
             g.writeArrayFieldStart("sections");
             int done = 0;
             for (Section s : root.sections()) {
-                MAPPER.writeTree(g, section(s));
+                section(g, s);
                 sectionsWritten.accept(++done);
             }
             g.writeEndArray();
@@ -57,71 +57,83 @@ public final class TraceJson {
         out.write("\n");
     }
 
-    private static ObjectNode section(Section s) {
-        ObjectNode n = MAPPER.createObjectNode();
-        n.put("id", s.id());
-        n.put("title", s.title());
-        if (!s.subtitle().isEmpty()) n.put("subtitle", s.subtitle());
-        ArrayNode steps = n.putArray("steps");
-        for (Step step : s.steps()) steps.add(step(step));
+    // Written field by field onto the generator (no tree per section), in the order a reader of the
+    // format expects; the golden traces (golden-reports/*.trace.json) hold the bytes.
+
+    private static void section(JsonGenerator g, Section s) throws IOException {
+        g.writeStartObject();
+        g.writeStringField("id", s.id());
+        g.writeStringField("title", s.title());
+        if (!s.subtitle().isEmpty()) g.writeStringField("subtitle", s.subtitle());
+        g.writeArrayFieldStart("steps");
+        for (Step step : s.steps()) step(g, step);
+        g.writeEndArray();
         if (!s.sections().isEmpty()) {
-            ArrayNode subs = n.putArray("sections");
-            for (Section c : s.sections()) subs.add(section(c));
+            g.writeArrayFieldStart("sections");
+            for (Section c : s.sections()) section(g, c);
+            g.writeEndArray();
         }
-        return n;
+        g.writeEndObject();
     }
 
-    private static ObjectNode q(Q q) {
-        ObjectNode n = MAPPER.createObjectNode();
-        n.put("from", q.id());
-        n.put("symbol", q.symbol());
-        n.put("value", q.value());
-        n.put("unit", q.unit());
-        return n;
+    /** A quantity a step used; shownAs is the symbol it is shown by there (a binding's variable's). */
+    private static void q(JsonGenerator g, Q q, String shownAs) throws IOException {
+        g.writeStringField("from", q.id());
+        g.writeStringField("symbol", shownAs);
+        g.writeNumberField("value", q.value());
+        g.writeStringField("unit", q.unit());
     }
 
-    static ObjectNode step(Step step) {
-        ObjectNode n = MAPPER.createObjectNode();
-        n.put("kind", step.kind());
-        n.put("id", step.id());
-        n.put("title", step.title());
+    private static void step(JsonGenerator g, Step step) throws IOException {
+        g.writeStartObject();
+        g.writeStringField("kind", step.kind());
+        g.writeStringField("id", step.id());
+        g.writeStringField("title", step.title());
         if (step instanceof Step.Input s) {
-            n.put("symbol", s.symbol()); n.put("value", s.value()); n.put("unit", s.unit());
-            n.put("key_path", s.keyPath()); n.put("origin", s.origin().name().toLowerCase(java.util.Locale.ROOT));
+            g.writeStringField("symbol", s.symbol()); g.writeNumberField("value", s.value()); g.writeStringField("unit", s.unit());
+            g.writeStringField("key_path", s.keyPath()); g.writeStringField("origin", s.origin().name().toLowerCase(java.util.Locale.ROOT));
         } else if (step instanceof Step.Lookup s) {
-            n.put("symbol", s.symbol()); n.put("value", s.value()); n.put("unit", s.unit());
-            ObjectNode table = n.putObject("table");
-            table.put("id", s.table().id()); table.put("source", s.table().source()); table.put("edition", s.table().edition());
-            table.put("table", s.table().table()); table.put("from_memory", s.table().fromMemory());
-            n.put("row", s.row()); n.put("column", s.column()); n.put("method", s.method());
+            g.writeStringField("symbol", s.symbol()); g.writeNumberField("value", s.value()); g.writeStringField("unit", s.unit());
+            g.writeObjectFieldStart("table");
+            g.writeStringField("id", s.table().id()); g.writeStringField("source", s.table().source());
+            g.writeStringField("edition", s.table().edition()); g.writeStringField("table", s.table().table());
+            g.writeBooleanField("from_memory", s.table().fromMemory());
+            g.writeEndObject();
+            g.writeStringField("row", s.row()); g.writeStringField("column", s.column()); g.writeStringField("method", s.method());
         } else if (step instanceof Step.Factor s) {
-            n.put("symbol", s.symbol()); n.put("value", s.value()); n.put("reason", s.reason());
+            g.writeStringField("symbol", s.symbol()); g.writeNumberField("value", s.value()); g.writeStringField("reason", s.reason());
         } else if (step instanceof Step.Formula s) {
-            n.put("symbol", s.symbol()); n.put("formula", s.formulaId());
-            n.put("expression", s.symbol() + " = " + Printer.symbolic(s.expr()));
-            if (!s.form().isEmpty()) n.put("form", s.form());
-            ArrayNode b = n.putArray("bindings");
+            g.writeStringField("symbol", s.symbol()); g.writeStringField("formula", s.formulaId());
+            g.writeStringField("expression", s.symbol() + " = " + Printer.symbolic(s.expr()));
+            if (!s.form().isEmpty()) g.writeStringField("form", s.form());
+            g.writeArrayFieldStart("bindings");
             for (Step.Binding binding : s.bindings()) {
-                ObjectNode bn = q(binding.q());
-                bn.put("symbol", binding.var().symbol());
-                bn.put("variable", binding.var().key());
-                b.add(bn);
+                g.writeStartObject();
+                q(g, binding.q(), binding.var().symbol());
+                g.writeStringField("variable", binding.var().key());
+                g.writeEndObject();
             }
-            n.put("value", s.value()); n.put("unit", s.unit());
+            g.writeEndArray();
+            g.writeNumberField("value", s.value()); g.writeStringField("unit", s.unit());
         } else if (step instanceof Step.Check s) {
-            n.put("check", s.name());
-            n.set("value", q(s.value()));
-            n.put("comparison", s.comparison());
-            n.set("limit", q(s.limit()));
-            n.put("outcome", s.pass() ? "PASS" : "FAIL");
+            g.writeStringField("check", s.name());
+            g.writeObjectFieldStart("value");
+            q(g, s.value(), s.value().symbol());
+            g.writeEndObject();
+            g.writeStringField("comparison", s.comparison());
+            g.writeObjectFieldStart("limit");
+            q(g, s.limit(), s.limit().symbol());
+            g.writeEndObject();
+            g.writeStringField("outcome", s.pass() ? "PASS" : "FAIL");
         } else if (step instanceof Step.Decision s) {
-            n.put("because", s.because()); n.put("outcome", s.outcome());
+            g.writeStringField("because", s.because()); g.writeStringField("outcome", s.outcome());
         } else if (step instanceof Step.Note s) {
-            n.put("text", s.text());
+            g.writeStringField("text", s.text());
         }
-        n.put("reference", step.reference() == null ? "" : step.reference());
-        ArrayNode uses = n.putArray("uses");
-        step.uses().forEach(uses::add);
-        return n;
+        g.writeStringField("reference", step.reference() == null ? "" : step.reference());
+        g.writeArrayFieldStart("uses");
+        for (String used : step.uses()) g.writeString(used);
+        g.writeEndArray();
+        g.writeEndObject();
     }
 }
