@@ -38,11 +38,6 @@ final class Progress implements NoteRenderer.Progress {
         return new Progress(terminal && circuits >= SHOWN_FROM_CIRCUITS ? err : null, started);
     }
 
-    /** Progress that shows nothing (verify's second rendering, tests). */
-    static Progress silent() {
-        return new Progress(null, System.nanoTime());
-    }
-
     /**
      * Where to print while the progress line may be showing (standard output or error): a writer
      * that ends the line before the first character of a message, or the target itself when no

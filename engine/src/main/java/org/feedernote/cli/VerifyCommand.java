@@ -33,6 +33,7 @@ final class VerifyCommand implements Callable<Integer> {
     Path note;
 
     @Override public Integer call() throws IOException {
+        long started = System.nanoTime();
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         NoteArchive archive;
@@ -52,9 +53,21 @@ final class VerifyCommand implements Callable<Integer> {
             for (InputError error : e.errors()) err.println("  " + error.text());
             return ExitStatus.BAD_INPUT;
         }
+        Progress progress = Progress.onTerminal(err, System.console() != null, inst.circuits().size(), started);
+        try {
+            return verify(archive, inst, progress.messages(out), progress.messages(err), progress);
+        } finally {
+            progress.endLine();
+        }
+    }
+
+    private Integer verify(NoteArchive archive, Installation inst, PrintWriter out, PrintWriter err, Progress progress)
+            throws IOException {
         ReferenceData data = ReferenceData.standard();
+        progress.stage("calculating " + inst.circuits().size() + " circuits");
         Result result = Loading.calculate(inst, data, err);
         if (result == null) return ExitStatus.BAD_INPUT;
+        progress.stage("comparing the results with the note's trace");
         boolean sameEngine = Version.engine().equals(archive.engineVersion());
         String fingerprint = NoteMaker.fingerprint(inst, data);
         String trace = NoteMaker.trace(inst, result, data);
@@ -74,8 +87,9 @@ final class VerifyCommand implements Callable<Integer> {
             Path scratch = java.nio.file.Files.createTempDirectory("feedernote-verify");
             try {
                 Path again = scratch.resolve("note.pdf");
-                NoteMaker.write(inst, result, data, null, null, List.of(), again, scratch.resolve("trace.json"),
-                        Progress.silent());
+                progress.stage("writing the note again to compare its bytes");
+                NoteMaker.write(inst, result, data, null, null, List.of(), again, scratch.resolve("trace.json"), progress);
+                progress.stage("comparing the bytes");
                 if (java.nio.file.Files.mismatch(again, note) >= 0) {
                     problems.add("the PDF's bytes differ from the note this engine writes for the embedded input"
                             + " (the document was edited after it was written, or written with --templates or --previous)");
