@@ -21,13 +21,20 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
  * YAML, does not change it.
  */
 public final class Canonical {
-    private static final ObjectMapper MAPPER = new ObjectMapper();
+    /**
+     * Made when a canonical form is first written: reading an input names its canonical form
+     * without making it, and check never makes it (an ObjectMapper costs tens of milliseconds to
+     * make in a fresh JVM).
+     */
+    private static final class Mapper {
+        static final ObjectMapper INSTANCE = new ObjectMapper();
+    }
 
     private Canonical() {}
 
     public static String json(Node root) {
         try {
-            return MAPPER.writeValueAsString(tree(root));
+            return Mapper.INSTANCE.writeValueAsString(tree(root));
         } catch (JsonProcessingException e) {
             throw new IllegalStateException(e);
         }

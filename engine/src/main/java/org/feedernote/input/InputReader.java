@@ -440,30 +440,30 @@ public final class InputReader {
         boards.forEach(b -> byId.put(b.id(), b));
         List<String> boardIds = boards.stream().map(Board::id).toList();
         Map<String, String> fedBy = new HashMap<>();
-        Map<String, String> circuitIds = new HashMap<>();
-        for (int i = 0; i < circuitNodes.size(); i++) {
-            String cid = str(at(circuitNodes.get(i), "id"));
-            if (cid != null) circuitIds.put(cid, "circuits[" + i + "]");
+        java.util.Set<String> circuitIds = new java.util.HashSet<>();
+        for (Node c : circuitNodes) {
+            String cid = str(at(c, "id"));
+            if (cid != null) circuitIds.add(cid);
         }
         for (int i = 0; i < circuitNodes.size(); i++) {
             Node c = circuitNodes.get(i);
-            String path = "circuits[" + i + "]";
+            // The key path is written only for a message: most inputs need none.
             String id = str(at(c, "id"));
             String from = str(at(c, "from"));
             String to = str(at(c, "to"));
             if (from != null && !byId.containsKey(from)) {
-                String what = circuitIds.containsKey(from) ? "'" + from + "' is a circuit, not a board" : "no board has the id '" + from + "'";
-                error(at(c, "from"), path + ".from", what + Suggest.hint(from, boardIds) + "; boards: " + String.join(", ", boardIds));
+                String what = circuitIds.contains(from) ? "'" + from + "' is a circuit, not a board" : "no board has the id '" + from + "'";
+                error(at(c, "from"), "circuits[" + i + "].from", what + Suggest.hint(from, boardIds) + "; boards: " + String.join(", ", boardIds));
             }
             if (to != null) {
                 if (!byId.containsKey(to)) {
-                    error(at(c, "to"), path + ".to", "no board has the id '" + to + "'" + Suggest.hint(to, boardIds)
+                    error(at(c, "to"), "circuits[" + i + "].to", "no board has the id '" + to + "'" + Suggest.hint(to, boardIds)
                             + "; boards: " + String.join(", ", boardIds));
                 } else if (fedBy.containsKey(to)) {
-                    error(at(c, "to"), path + ".to", "board '" + to + "' is fed twice: by '" + fedBy.get(to) + "' and by '" + id
+                    error(at(c, "to"), "circuits[" + i + "].to", "board '" + to + "' is fed twice: by '" + fedBy.get(to) + "' and by '" + id
                             + "'; a board has one feeding circuit");
                 } else if (to.equals(from)) {
-                    error(at(c, "to"), path + ".to", "circuit '" + id + "' starts and ends at board '" + to + "'");
+                    error(at(c, "to"), "circuits[" + i + "].to", "circuit '" + id + "' starts and ends at board '" + to + "'");
                 } else {
                     fedBy.put(to, id);
                 }
