@@ -11,12 +11,33 @@ public final class Main {
     private Main() {}
 
     public static void main(String[] args) {
+        if (args.length > 0 && CALCULATING.contains(args[0])) loadReferenceDataAlongside();
         PrintWriter out = new PrintWriter(new OutputStreamWriter(System.out, StandardCharsets.UTF_8), true);
         PrintWriter err = new PrintWriter(new OutputStreamWriter(System.err, StandardCharsets.UTF_8), true);
         int status = run(args, out, err);
         out.flush();
         err.flush();
         System.exit(status);
+    }
+
+    /** The commands that calculate, and so read the reference tables. */
+    private static final java.util.Set<String> CALCULATING = java.util.Set.of("check", "note", "verify", "diff");
+
+    /**
+     * The reference tables are read on the second core while the command line is built (picocli
+     * takes most of the first tenth of a second of every command); the command that needs them
+     * waits for that reading, or does it itself if it has not begun.
+     */
+    private static void loadReferenceDataAlongside() {
+        Thread reading = new Thread(() -> {
+            try {
+                org.feedernote.data.ReferenceData.standard();
+            } catch (RuntimeException | LinkageError e) {
+                // The command reads them again and reports what went wrong.
+            }
+        }, "feedernote-reference-data");
+        reading.setDaemon(true);
+        reading.start();
     }
 
     /** Runs a command with the given streams and returns the exit status (for in-process tests). */
