@@ -1,6 +1,7 @@
 package org.feedernote.cli;
 
 import java.io.IOException;
+import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
@@ -12,6 +13,7 @@ import org.feedernote.input.Canonical;
 import org.feedernote.model.Installation;
 import org.feedernote.report.NoteBuilder;
 import org.feedernote.report.NoteRenderer;
+import org.feedernote.report.pdf.DeflatingFile;
 import org.feedernote.report.view.NoteView;
 import org.feedernote.trace.TraceJson;
 
@@ -28,27 +30,77 @@ final class NoteMaker {
     }
 
     /**
-     * Writes the trace and then the note into their files, streaming both: the trace is attached
-     * to the PDF from its file, so neither is ever held whole in memory. Returns the characters of
-     * the input the note's fonts cannot show (as "U+6CF5"; printed as a placeholder).
+     * Writes the trace and then the note into their files, streaming both, so neither is ever held
+     * whole in memory: while the trace is written, a second thread deflates it for the PDF (on a
+     * long trace that costs more than writing it) and a third builds the note's view; the note
+     * embeds the deflated bytes. Returns the characters of the input the note's fonts cannot show
+     * (as "U+6CF5"; printed as a placeholder).
      */
     static List<String> write(Installation inst, Result result, ReferenceData data, Path templates, String changesSince,
                               List<String> changes, Path pdf, Path traceFile, Progress progress) throws IOException {
         String fingerprint = fingerprint(inst, data);
         NoteRenderer renderer = new NoteRenderer(templates);
-        progress.stage("preparing the note");
-        NoteView view = NoteBuilder.build(result, data, fingerprint, Version.engine(), changesSince, changes);
         int sections = result.trace().sections().size();
-        Files.writeAtomically(traceFile, out -> {
-            java.io.Writer w = new java.io.OutputStreamWriter(out, StandardCharsets.UTF_8);
-            TraceJson.write(result.trace(), Version.engine(), data.version(), fingerprint, w,
-                    done -> progress.counted("writing the trace: section", done, sections));
-            w.flush();
-        });
-        List<List<String>> unprintable = new java.util.ArrayList<>(1);
-        Files.writeFileAtomically(pdf, tmp -> unprintable.add(renderer.write(view, inst.project().date(), tmp, progress, attachments(inst,
-                NoteRenderer.Attachment.file(org.feedernote.archive.NoteArchive.TRACE_NAME, "Calculation trace", traceFile)))));
-        return unprintable.isEmpty() ? List.of() : unprintable.get(0);
+        Path folder = pdf.toAbsolutePath().getParent();
+        java.nio.file.Files.createDirectories(folder);
+        Path scratch = java.nio.file.Files.createTempFile(folder, "." + traceFile.getFileName(), ".deflated.part");
+        // The view is built on a third thread: the trace's writing waits on its compression, and
+        // the view needs neither.
+        java.util.concurrent.FutureTask<NoteView> building = new java.util.concurrent.FutureTask<>(
+                () -> NoteBuilder.build(result, data, fingerprint, Version.engine(), changesSince, changes));
+        Thread builder = new Thread(building, "feedernote-view");
+        builder.setDaemon(true);
+        builder.start();
+        try (DeflatingFile deflated = new DeflatingFile(scratch, NoteRenderer.ATTACHMENT_COMPRESSION)) {
+            Files.writeAtomically(traceFile, out -> {
+                java.io.Writer w = new java.io.OutputStreamWriter(new Both(out, deflated), StandardCharsets.UTF_8);
+                TraceJson.write(result.trace(), Version.engine(), data.version(), fingerprint, w,
+                        done -> progress.counted("writing the trace: section", done, sections));
+                w.flush();
+            });
+            progress.stage("preparing the note");
+            NoteView view = built(building);
+            progress.stage("compressing the trace");
+            deflated.finish();
+            List<List<String>> unprintable = new java.util.ArrayList<>(1);
+            Files.writeFileAtomically(pdf, tmp -> unprintable.add(renderer.write(view, inst.project().date(), tmp, progress,
+                    attachments(inst, NoteRenderer.Attachment.deflated(org.feedernote.archive.NoteArchive.TRACE_NAME,
+                            "Calculation trace", deflated)))));
+            return unprintable.isEmpty() ? List.of() : unprintable.get(0);
+        }
+    }
+
+    private static NoteView built(java.util.concurrent.FutureTask<NoteView> building) throws IOException {
+        try {
+            return building.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new java.io.InterruptedIOException("interrupted while the note was prepared");
+        } catch (java.util.concurrent.ExecutionException e) {
+            if (e.getCause() instanceof RuntimeException r) throw r;
+            if (e.getCause() instanceof Error err) throw err;
+            throw new IOException(e.getCause());
+        }
+    }
+
+    /** Writes to two streams (the trace's file and its compression); flushes and closes only the first. */
+    private static final class Both extends java.io.FilterOutputStream {
+        private final OutputStream second;
+
+        Both(OutputStream first, OutputStream second) {
+            super(first);
+            this.second = second;
+        }
+
+        @Override public void write(int b) throws IOException {
+            out.write(b);
+            second.write(b);
+        }
+
+        @Override public void write(byte[] b, int off, int len) throws IOException {
+            out.write(b, off, len);
+            second.write(b, off, len);
+        }
     }
 
     private static NoteRenderer.Attachment[] attachments(Installation inst, NoteRenderer.Attachment trace) {

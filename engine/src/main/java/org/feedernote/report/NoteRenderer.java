@@ -31,6 +31,8 @@ import freemarker.template.Template;
 import freemarker.template.TemplateException;
 import freemarker.template.TemplateExceptionHandler;
 
+import org.feedernote.report.pdf.DeflatedAttachment;
+import org.feedernote.report.pdf.DeflatingFile;
 import org.feedernote.report.pdf.Fonts;
 import org.feedernote.report.pdf.Markup;
 import org.feedernote.report.pdf.PageFurniture;
@@ -60,7 +62,7 @@ public final class NoteRenderer {
     private final Configuration freemarker;
 
     /** Deflate level of the attached input and trace. */
-    private static final int ATTACHMENT_COMPRESSION = 6;
+    public static final int ATTACHMENT_COMPRESSION = 6;
 
     /** @param templates a folder holding a copy of the templates, or null for the packaged ones */
     public NoteRenderer(Path templates) throws IOException {
@@ -85,14 +87,23 @@ public final class NoteRenderer {
         this.freemarker = cfg;
     }
 
-    /** Attachments carried inside the PDF: bytes, or a file streamed from disk (large traces). */
-    public record Attachment(String name, String description, byte[] content, Path file) {
+    /**
+     * Attachments carried inside the PDF: bytes, or a file streamed from disk (large traces), or a
+     * file already deflated at {@link #ATTACHMENT_COMPRESSION} while it was written (then
+     * deflatedFrom is its length before compression; otherwise -1).
+     */
+    public record Attachment(String name, String description, byte[] content, Path file, long deflatedFrom) {
         public Attachment(String name, String description, byte[] content) {
-            this(name, description, content, null);
+            this(name, description, content, null, -1);
         }
 
         public static Attachment file(String name, String description, Path file) {
-            return new Attachment(name, description, null, file);
+            return new Attachment(name, description, null, file, -1);
+        }
+
+        /** A file compressed while it was written; the PDF's bytes are those of {@link #file} of the same content. */
+        public static Attachment deflated(String name, String description, DeflatingFile file) {
+            return new Attachment(name, description, null, file.file(), file.length());
         }
     }
 
@@ -213,8 +224,8 @@ public final class NoteRenderer {
         for (Attachment a : attachments) {
             // zlib's default level: OpenPDF's "compress" means level 9, three times slower on a
             // long trace for a file a few per cent smaller.
-            PdfFileSpecification spec = a.file() != null
-                    ? PdfFileSpecification.fileEmbedded(writer, a.file().toString(), a.name(), null, ATTACHMENT_COMPRESSION)
+            PdfFileSpecification spec = a.deflatedFrom() >= 0 ? DeflatedAttachment.embed(writer, a.file(), a.name(), a.deflatedFrom())
+                    : a.file() != null ? PdfFileSpecification.fileEmbedded(writer, a.file().toString(), a.name(), null, ATTACHMENT_COMPRESSION)
                     : PdfFileSpecification.fileEmbedded(writer, null, a.name(), a.content(), ATTACHMENT_COMPRESSION);
             writer.addFileAttachment(a.description(), spec);
         }
