@@ -76,6 +76,7 @@ final class NoteCommand implements Callable<Integer> {
                 return ExitStatus.BAD_INPUT;
             }
         }
+        NoteMaker.canonicalAhead(inst);
         ReferenceData data = ReferenceData.standard();
         progress.stage("calculating " + inst.circuits().size() + " circuits");
         Result result = Loading.calculate(inst, data, err);

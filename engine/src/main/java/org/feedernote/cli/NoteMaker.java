@@ -21,6 +21,23 @@ import org.feedernote.trace.TraceJson;
 final class NoteMaker {
     private NoteMaker() {}
 
+    /**
+     * Starts making the input's canonical form (for the fingerprint and the attachment) on a thread
+     * of its own, beside the calculation, which leaves a core idle for much of its time; whoever
+     * asks for it first waits for it (the form is made once).
+     */
+    static void canonicalAhead(Installation inst) {
+        Thread t = new Thread(() -> {
+            try {
+                inst.canonicalJson();
+            } catch (RuntimeException e) {
+                // Made again, and the failure reported, where the form is needed.
+            }
+        }, "feedernote-canonical");
+        t.setDaemon(true);
+        t.start();
+    }
+
     static String fingerprint(Installation inst, ReferenceData data) {
         return Canonical.fingerprint(inst.canonicalJson(), Version.engine(), data.version());
     }
