@@ -60,7 +60,6 @@ final class NoteMaker {
         int sections = result.trace().sections().size();
         Path folder = pdf.toAbsolutePath().getParent();
         java.nio.file.Files.createDirectories(folder);
-        Path scratch = java.nio.file.Files.createTempFile(folder, "." + traceFile.getFileName(), ".deflated.part");
         // The view is built on a third thread: the trace's writing waits on its compression, and
         // the view needs neither.
         java.util.concurrent.FutureTask<NoteView> building = new java.util.concurrent.FutureTask<>(
@@ -68,7 +67,7 @@ final class NoteMaker {
         Thread builder = new Thread(building, "feedernote-view");
         builder.setDaemon(true);
         builder.start();
-        try (DeflatingFile deflated = new DeflatingFile(scratch, NoteRenderer.ATTACHMENT_COMPRESSION)) {
+        try (DeflatingFile deflated = DeflatingFile.scratch(folder, "." + traceFile.getFileName(), NoteRenderer.ATTACHMENT_COMPRESSION)) {
             Files.writeAtomically(traceFile, out -> {
                 java.io.Writer w = new java.io.OutputStreamWriter(new Both(out, deflated), StandardCharsets.UTF_8);
                 TraceJson.write(result.trace(), Version.engine(), data.version(), fingerprint, w,

@@ -63,6 +63,7 @@ final class VerifyCommand implements Callable<Integer> {
 
     private Integer verify(NoteArchive archive, Installation inst, PrintWriter out, PrintWriter err, Progress progress)
             throws IOException {
+        NoteMaker.canonicalAhead(inst);
         ReferenceData data = ReferenceData.standard();
         progress.stage("calculating " + inst.circuits().size() + " circuits");
         Result result = Loading.calculate(inst, data, err);

@@ -80,6 +80,19 @@ class DeflatedAttachmentTest {
     }
 
     @Test
+    void aScratchFileLivesInTheNotesFolderUntilClosed(@TempDir Path dir) throws IOException {
+        Path file;
+        try (DeflatingFile out = DeflatingFile.scratch(dir, ".note.trace.json", NoteRenderer.ATTACHMENT_COMPRESSION)) {
+            file = out.file();
+            assertEquals(dir, file.getParent());
+            assertTrue(file.getFileName().toString().startsWith(".note.trace.json"), "hidden, and named after the trace");
+            out.finish();
+            assertTrue(Files.exists(file));
+        }
+        assertFalse(Files.exists(file));
+    }
+
+    @Test
     void nothingIsWrittenAfterFinishing(@TempDir Path dir) throws IOException {
         try (DeflatingFile out = new DeflatingFile(dir.resolve("t"), 6)) {
             out.write(1);

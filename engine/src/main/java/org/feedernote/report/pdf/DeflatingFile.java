@@ -39,6 +39,20 @@ public final class DeflatingFile extends OutputStream {
     private long length;
     private boolean ended;
 
+    /**
+     * A new scratch file in the folder (named prefix + random + ".deflated.part"), removed again
+     * when the stream is closed or cannot be made.
+     */
+    public static DeflatingFile scratch(Path folder, String prefix, int level) throws IOException {
+        Path file = Files.createTempFile(folder, prefix, ".deflated.part");
+        try {
+            return new DeflatingFile(file, level);
+        } catch (IOException | RuntimeException | Error e) {
+            Files.deleteIfExists(file);
+            throw e;
+        }
+    }
+
     /** Starts the compressing thread; the file is created (or replaced) at once. */
     public DeflatingFile(Path file, int level) throws IOException {
         this.file = file;
@@ -56,8 +70,8 @@ public final class DeflatingFile extends OutputStream {
                 spare.offer(c.bytes());
             }
             out.finish();
-        } catch (IOException e) {
-            failure = e;
+        } catch (IOException | RuntimeException | Error e) {
+            failure = e instanceof IOException io ? io : new IOException(e);
             // Take what is still sent, so that the writing side never waits on a full queue.
             while (take() != END) {
                 // discarded
