@@ -39,6 +39,14 @@ final class LineBreaker {
     private float wordWidth;
     private final boolean justify;
     private final int align;
+    /**
+     * Text joined onto the line's last fragment and not yet written into it, with the fragment's
+     * width so far (summed in the same order as one fragment after another would be): a line's
+     * words are joined once, when the fragment is next read, not word by word.
+     */
+    private final StringBuilder joined = new StringBuilder();
+    private boolean joining;
+    private float joinedWidth;
 
     private LineBreaker(Fonts fonts, float width, int align) {
         this.fonts = fonts;
@@ -160,8 +168,11 @@ final class LineBreaker {
     private void append(String text, Style s, float w) {
         if (!line.isEmpty()) {
             Fragment last = line.get(line.size() - 1);
-            if (last.style() == s && Math.abs(last.x() + last.width() - x) < 0.001f) {
-                line.set(line.size() - 1, new Fragment(last.x(), last.text() + text, s, last.width() + w));
+            float lastWidth = joining ? joinedWidth : last.width();
+            if (last.style() == s && Math.abs(last.x() + lastWidth - x) < 0.001f) {
+                joined.append(text);
+                joinedWidth = lastWidth + w;
+                joining = true;
                 x += w;
                 return;
             }
@@ -169,7 +180,18 @@ final class LineBreaker {
         startFragment(text, s, w, false);
     }
 
+    /** Writes the joined text into the line's last fragment. */
+    private void closeFragment() {
+        if (!joining) return;
+        int i = line.size() - 1;
+        Fragment last = line.get(i);
+        line.set(i, new Fragment(last.x(), last.text() + joined, last.style(), joinedWidth));
+        joined.setLength(0);
+        joining = false;
+    }
+
     private void startFragment(String text, Style s, float w, boolean gap) {
+        closeFragment();
         line.add(new Fragment(x, text, s, w));
         gapBefore.add(gap);
         x += w;
@@ -179,6 +201,7 @@ final class LineBreaker {
         float w = 0;
         for (Run r : right) if (r.text() != null) w += fonts.width(r.style(), r.text());
         if (w == 0) return;
+        closeFragment();
         if (lineHasContent() && x + w + FLOAT_GAP > width) endLine(false);
         float end = width == Float.MAX_VALUE ? x + FLOAT_GAP + w : width;
         alignLine(false);
@@ -201,6 +224,7 @@ final class LineBreaker {
     private boolean aligned;
 
     private void endLine(boolean last) {
+        closeFragment();
         if (aligned) {
             aligned = false;
             return;
