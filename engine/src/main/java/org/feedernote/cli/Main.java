@@ -40,12 +40,33 @@ public final class Main {
         reading.start();
     }
 
+    /** A file-system failure in words: the file and the reason where the JDK names them. */
+    static String describe(java.io.IOException e) {
+        if (e instanceof java.nio.file.FileSystemException f) {
+            String reason = f.getReason() != null ? f.getReason()
+                    : f instanceof java.nio.file.AccessDeniedException ? "permission denied"
+                    : f instanceof java.nio.file.NoSuchFileException ? "no such file or folder"
+                    : f instanceof java.nio.file.FileAlreadyExistsException ? "already exists" : f.getClass().getSimpleName();
+            return f.getFile() + ": " + reason;
+        }
+        return e.getMessage() != null ? e.getMessage() : e.getClass().getSimpleName();
+    }
+
     /** Runs a command with the given streams and returns the exit status (for in-process tests). */
     public static int run(String[] args, PrintWriter out, PrintWriter err) {
         CommandLine cl = new CommandLine(new Feedernote());
         cl.setOut(out);
         cl.setErr(err);
         cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {
+            java.io.IOException io = ex instanceof java.io.IOException e ? e
+                    : ex instanceof java.io.UncheckedIOException u ? u.getCause() : null;
+            if (io != null) {
+                // The file system refused (a folder that cannot be made, a full disk): not a bug.
+                // Reading the input reports its own errors; what reaches here is writing.
+                err.println("feedernote: cannot write the output: " + describe(io));
+                err.println("Files being written were removed; correct the output path or make room, and run again.");
+                return ExitStatus.BAD_INPUT;
+            }
             err.println("feedernote: internal error: " + ex);
             for (StackTraceElement e : ex.getStackTrace()) {
                 if (e.getClassName().startsWith("org.feedernote")) {

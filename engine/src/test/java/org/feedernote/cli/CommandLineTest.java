@@ -92,6 +92,16 @@ class CommandLineTest {
     }
 
     @Test
+    void anOutputFolderThatCannotBeMadeIsReportedNotTakenForABug(@TempDir Path dir) throws Exception {
+        Path notAFolder = dir.resolve("plain-file");
+        Files.writeString(notAFolder, "");
+        Run r = run("note", Fixtures.inputs().resolve("bakery-small.yaml").toString(), "-o", notAFolder.resolve("notes").toString());
+        assertEquals(2, r.status(), r.err());
+        assertTrue(r.err().contains("cannot write the output: " + notAFolder), r.err());
+        assertFalse(r.err().contains("bug"), r.err());
+    }
+
+    @Test
     void traceIsWrittenAsVersionedJson(@TempDir Path dir) throws Exception {
         Path trace = dir.resolve("t.json");
         assertEquals(0, run("check", Fixtures.inputs().resolve("bakery-small.yaml").toString(), "--trace", trace.toString()).status());
