@@ -47,11 +47,12 @@ final class NoteMaker {
     }
 
     /**
-     * Writes the trace and then the note into their files, streaming both, so neither is ever held
-     * whole in memory: while the trace is written, a second thread deflates it for the PDF (on a
-     * long trace that costs more than writing it) and a third builds the note's view; the note
-     * embeds the deflated bytes. Returns the characters of the input the note's fonts cannot show
-     * (as "U+6CF5"; printed as a placeholder).
+     * Writes the trace and then the note, streaming both, so neither is ever held whole in memory:
+     * while the trace is written, a second thread deflates it for the PDF (on a long trace that
+     * costs more than writing it) and a third builds the note's view; the note embeds the deflated
+     * bytes. Both are written under temporary names and put in place together at the end. Returns
+     * the characters of the input the note's fonts cannot show (as "U+6CF5"; printed as a
+     * placeholder).
      */
     static List<String> write(Installation inst, Result result, ReferenceData data, Path templates, String changesSince,
                               List<String> changes, Path pdf, Path traceFile, Progress progress) throws IOException {
@@ -67,21 +68,26 @@ final class NoteMaker {
         Thread builder = new Thread(building, "feedernote-view");
         builder.setDaemon(true);
         builder.start();
-        try (DeflatingFile deflated = DeflatingFile.scratch(folder, "." + traceFile.getFileName(), NoteRenderer.ATTACHMENT_COMPRESSION)) {
-            Files.writeAtomically(traceFile, out -> {
-                java.io.Writer w = new java.io.OutputStreamWriter(new Both(out, deflated), StandardCharsets.UTF_8);
-                TraceJson.write(result.trace(), Version.engine(), data.version(), fingerprint, w,
-                        done -> progress.counted("writing the trace: section", done, sections));
-                w.flush();
-            });
+        try (DeflatingFile deflated = DeflatingFile.scratch(folder, "." + traceFile.getFileName(), NoteRenderer.ATTACHMENT_COMPRESSION);
+             Files.Staged trace = Files.stage(traceFile, out -> {
+                 java.io.Writer w = new java.io.OutputStreamWriter(new Both(out, deflated), StandardCharsets.UTF_8);
+                 TraceJson.write(result.trace(), Version.engine(), data.version(), fingerprint, w,
+                         done -> progress.counted("writing the trace: section", done, sections));
+                 w.flush();
+             })) {
             progress.stage("preparing the note");
             NoteView view = built(building);
             progress.stage("compressing the trace");
             deflated.finish();
             List<List<String>> unprintable = new java.util.ArrayList<>(1);
-            Files.writeFileAtomically(pdf, tmp -> unprintable.add(renderer.write(view, inst.project().date(), tmp, progress,
-                    attachments(inst, NoteRenderer.Attachment.deflated(org.feedernote.archive.NoteArchive.TRACE_NAME,
-                            "Calculation trace", deflated)))));
+            try (Files.Staged note = Files.stageFile(pdf, tmp -> unprintable.add(renderer.write(view, inst.project().date(), tmp,
+                    progress, attachments(inst, NoteRenderer.Attachment.deflated(org.feedernote.archive.NoteArchive.TRACE_NAME,
+                            "Calculation trace", deflated)))))) {
+                // The pair is replaced together: a run stopped before here leaves the previous note
+                // and trace (if any) as they were, never a new trace beside an old note.
+                trace.putInPlace();
+                note.putInPlace();
+            }
             return unprintable.isEmpty() ? List.of() : unprintable.get(0);
         }
     }

@@ -134,4 +134,23 @@ class ArchiveTest {
         assertFalse(java.nio.file.Files.exists(file));
         assertEquals(0, target.toFile().list().length, "no temporary file is left behind");
     }
+
+    @Test
+    void aPairOfFilesIsReplacedTogetherOrNotAtAll(@TempDir Path target) throws IOException {
+        Path trace = target.resolve("note.trace.json");
+        Path note = target.resolve("note.pdf");
+        java.nio.file.Files.writeString(trace, "old trace");
+        java.nio.file.Files.writeString(note, "old note");
+        assertThrows(IOException.class, () -> {
+            try (Files.Staged staged = Files.stage(trace, out -> out.write("new trace".getBytes()))) {
+                Files.writeAtomically(note, out -> {
+                    throw new IOException("the note failed");
+                });
+                staged.putInPlace();
+            }
+        });
+        assertEquals("old trace", java.nio.file.Files.readString(trace), "the trace is not replaced without its note");
+        assertEquals("old note", java.nio.file.Files.readString(note));
+        assertEquals(2, target.toFile().list().length, "no temporary file is left behind");
+    }
 }

@@ -41,10 +41,11 @@ public final class DeflatingFile extends OutputStream {
 
     /**
      * A new scratch file in the folder (named prefix + random + ".deflated.part"), removed again
-     * when the stream is closed or cannot be made.
+     * when the stream is closed or cannot be made, or the run is interrupted (Ctrl-C).
      */
     public static DeflatingFile scratch(Path folder, String prefix, int level) throws IOException {
         Path file = Files.createTempFile(folder, prefix, ".deflated.part");
+        file.toFile().deleteOnExit();
         try {
             return new DeflatingFile(file, level);
         } catch (IOException | RuntimeException | Error e) {
