@@ -1,12 +1,15 @@
 package org.feedernote.archive;
 
 import java.io.IOException;
+import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Map;
 
 import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.cos.COSName;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDDocumentInformation;
 import org.apache.pdfbox.pdmodel.PDDocumentNameDictionary;
@@ -15,10 +18,12 @@ import org.apache.pdfbox.pdmodel.common.filespecification.PDComplexFileSpecifica
 import org.apache.pdfbox.pdmodel.common.filespecification.PDEmbeddedFile;
 
 /**
- * What a feedernote note carries inside it: the canonical input and the trace as embedded files,
- * and the fingerprint in its metadata.
+ * What a feedernote note carries inside it: the canonical input, the input as written and the
+ * trace as embedded files, and the fingerprint in its metadata. The trace (hundreds of megabytes
+ * for a large installation) is not read with the rest: {@link #openTrace()} streams it from the
+ * note when it is wanted.
  */
-public record NoteArchive(String canonicalInput, String trace, String fingerprint, String engineVersion,
+public record NoteArchive(Path file, String canonicalInput, String fingerprint, String engineVersion,
                           String sourceText, String inputFile) {
 
     public static final String INPUT_NAME = "input.canonical.json";
@@ -40,36 +45,105 @@ public record NoteArchive(String canonicalInput, String trace, String fingerprin
     }
 
     public static NoteArchive read(Path file) throws NotANote {
-        byte[] bytes;
         try {
-            bytes = Files.readAllBytes(file);
+            if (!looksLikePdf(file)) throw new NotANote(file + ": not a PDF file");
         } catch (IOException e) {
             throw new NotANote(file + ": cannot read the file (" + e.getMessage() + ")");
         }
-        if (bytes.length < 5 || !new String(bytes, 0, 5, StandardCharsets.ISO_8859_1).equals("%PDF-")) {
-            throw new NotANote(file + ": not a PDF file");
-        }
-        try (PDDocument doc = Loader.loadPDF(bytes)) {
-            PDDocumentNameDictionary names = doc.getDocumentCatalog().getNames();
-            PDEmbeddedFilesNameTreeNode tree = names == null ? null : names.getEmbeddedFiles();
-            Map<String, PDComplexFileSpecification> files = new java.util.HashMap<>();
-            if (tree != null) collect(tree, files);
+        // Loaded from the file, not from its bytes: PDFBox then reads the objects it is asked for.
+        try (PDDocument doc = Loader.loadPDF(file.toFile())) {
+            Map<String, PDComplexFileSpecification> files = embeddedFiles(doc);
             if (!files.containsKey(INPUT_NAME) || !files.containsKey(TRACE_NAME)) {
                 throw new NotANote(file + ": a PDF, but not a feedernote note (it carries no embedded design input and trace)");
             }
             String input = text(files.get(INPUT_NAME), file);
-            String trace = text(files.get(TRACE_NAME), file);
+            embedded(files.get(TRACE_NAME), file);
             PDDocumentInformation info = doc.getDocumentInformation();
             String fingerprint = info.getCustomMetadataValue("Fingerprint");
             String engine = info.getCustomMetadataValue("EngineVersion");
             String inputFile = info.getCustomMetadataValue("InputFile");
             if (fingerprint == null) throw new NotANote(file + ": the note's metadata carries no fingerprint");
             String source = files.containsKey(SOURCE_NAME) ? text(files.get(SOURCE_NAME), file) : null;
-            return new NoteArchive(input, trace, fingerprint, engine == null ? "" : engine, source,
+            return new NoteArchive(file, input, fingerprint, engine == null ? "" : engine, source,
                     inputFile == null ? "input" : inputFile);
         } catch (IOException e) {
             throw new NotANote(file + ": damaged or truncated PDF (" + e.getMessage() + ")");
         }
+    }
+
+    /**
+     * The embedded trace, decoded as it is read; closing the stream closes the note again.
+     *
+     * @throws NotANote where the note no longer reads as it did (changed or removed since)
+     */
+    public InputStream openTrace() throws NotANote {
+        PDDocument doc;
+        try {
+            doc = Loader.loadPDF(file.toFile());
+        } catch (IOException e) {
+            throw new NotANote(file + ": damaged or truncated PDF (" + e.getMessage() + ")");
+        }
+        try {
+            PDComplexFileSpecification spec = embeddedFiles(doc).get(TRACE_NAME);
+            if (spec == null) throw new NotANote(file + ": the note carries no embedded trace");
+            InputStream trace = decoded(embedded(spec, file), file);
+            return new java.io.FilterInputStream(trace) {
+                @Override public void close() throws IOException {
+                    try {
+                        super.close();
+                    } finally {
+                        doc.close();
+                    }
+                }
+            };
+        } catch (IOException | NotANote | RuntimeException e) {
+            try {
+                doc.close();
+            } catch (IOException ignored) {
+                // the first failure is the one reported
+            }
+            if (e instanceof NotANote n) throw n;
+            if (e instanceof RuntimeException r) throw r;
+            throw new NotANote(file + ": damaged or truncated PDF (" + e.getMessage() + ")");
+        }
+    }
+
+    /** The embedded trace as text, whole (for small notes; a large one is read with {@link #openTrace()}). */
+    public String trace() throws NotANote, IOException {
+        try (InputStream in = openTrace()) {
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        }
+    }
+
+    /**
+     * The embedded file's content, inflated here as it is read from the note rather than by
+     * PDFBox, which decodes a whole stream into memory before the first byte is read.
+     */
+    private static InputStream decoded(PDEmbeddedFile ef, Path file) throws IOException, NotANote {
+        org.apache.pdfbox.cos.COSStream stream = ef.getCOSObject();
+        List<COSName> filters = ef.getFilters();
+        if (filters.isEmpty()) return stream.createRawInputStream();
+        if (filters.size() == 1 && COSName.FLATE_DECODE.equals(filters.get(0)) && stream.getDictionaryObject(COSName.DECODE_PARMS) == null) {
+            return new java.util.zip.InflaterInputStream(stream.createRawInputStream(), new java.util.zip.Inflater(), 1 << 16) {
+                @Override public void close() throws IOException {
+                    try {
+                        super.close();
+                    } finally {
+                        inf.end();
+                    }
+                }
+            };
+        }
+        // Not as feedernote writes it; PDFBox decodes whatever else a PDF may hold.
+        return stream.createInputStream();
+    }
+
+    private static Map<String, PDComplexFileSpecification> embeddedFiles(PDDocument doc) throws IOException {
+        PDDocumentNameDictionary names = doc.getDocumentCatalog().getNames();
+        PDEmbeddedFilesNameTreeNode tree = names == null ? null : names.getEmbeddedFiles();
+        Map<String, PDComplexFileSpecification> files = new java.util.HashMap<>();
+        if (tree != null) collect(tree, files);
+        return files;
     }
 
     /** File specifications by file name, from every leaf of the name tree. */
@@ -85,9 +159,13 @@ public record NoteArchive(String canonicalInput, String trace, String fingerprin
         if (node.getKids() != null) for (var kid : node.getKids()) collect(kid, out);
     }
 
-    private static String text(PDComplexFileSpecification spec, Path file) throws IOException, NotANote {
+    private static PDEmbeddedFile embedded(PDComplexFileSpecification spec, Path file) throws NotANote {
         PDEmbeddedFile ef = spec.getEmbeddedFile() != null ? spec.getEmbeddedFile() : spec.getEmbeddedFileUnicode();
         if (ef == null) throw new NotANote(file + ": embedded file " + spec.getFilename() + " is empty");
-        return new String(ef.toByteArray(), StandardCharsets.UTF_8);
+        return ef;
+    }
+
+    private static String text(PDComplexFileSpecification spec, Path file) throws IOException, NotANote {
+        return new String(embedded(spec, file).toByteArray(), StandardCharsets.UTF_8);
     }
 }

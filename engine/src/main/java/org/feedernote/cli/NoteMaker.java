@@ -42,10 +42,6 @@ final class NoteMaker {
         return Canonical.fingerprint(inst.canonicalJson(), Version.engine(), data.version());
     }
 
-    static String trace(Installation inst, Result result, ReferenceData data) {
-        return TraceJson.write(result.trace(), Version.engine(), data.version(), fingerprint(inst, data));
-    }
-
     /**
      * Writes the trace and then the note, streaming both, so neither is ever held whole in memory:
      * while the trace is written, a second thread deflates it for the PDF (on a long trace that

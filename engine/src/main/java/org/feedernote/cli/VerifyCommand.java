@@ -71,7 +71,6 @@ final class VerifyCommand implements Callable<Integer> {
         progress.stage("comparing the results with the note's trace");
         boolean sameEngine = Version.engine().equals(archive.engineVersion());
         String fingerprint = NoteMaker.fingerprint(inst, data);
-        String trace = NoteMaker.trace(inst, result, data);
         List<String> problems = new java.util.ArrayList<>();
         if (!inst.canonicalJson().equals(archive.canonicalInput())) {
             problems.add("the two embedded copies of the input disagree (as written, and canonical): one was altered");
@@ -83,7 +82,18 @@ final class VerifyCommand implements Callable<Integer> {
             problems.add("fingerprint: recorded " + archive.fingerprint() + ", recomputed from the embedded input " + fingerprint
                     + " (the embedded input or the reference data has changed)");
         }
-        for (TraceComparison.Difference d : TraceComparison.compare(archive.trace(), trace)) problems.add(d.text());
+        // Section by section, both streamed: a large note's trace is never held whole.
+        List<TraceComparison.Difference> differences;
+        try (java.io.InputStream recorded = archive.openTrace()) {
+            differences = TraceComparison.compare(TraceComparison.sections(recorded), TraceComparison.sections(result.trace()));
+        } catch (NoteArchive.NotANote e) {
+            err.println("feedernote: " + e.getMessage());
+            return ExitStatus.BAD_INPUT;
+        } catch (IllegalArgumentException | java.io.UncheckedIOException | IOException e) {
+            err.println("feedernote: " + note + ": the embedded trace cannot be read (" + e.getMessage() + ")");
+            return ExitStatus.BAD_INPUT;
+        }
+        for (TraceComparison.Difference d : differences) problems.add(d.text());
         if (sameEngine && problems.isEmpty()) {
             Path scratch = java.nio.file.Files.createTempDirectory("feedernote-verify");
             try {

@@ -57,6 +57,20 @@ public final class TraceJson {
         out.write("\n");
     }
 
+    /**
+     * One top-level section as JSON, alone (compact): the same fields and values as in the whole
+     * trace, for comparing a trace section by section without writing all of it.
+     */
+    public static String section(Section s) {
+        java.io.StringWriter out = new java.io.StringWriter();
+        try (JsonGenerator g = FACTORY.createGenerator(out)) {
+            section(g, s);
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+        return out.toString();
+    }
+
     // Written field by field onto the generator (no tree per section), in the order a reader of the
     // format expects; the golden traces (golden-reports/*.trace.json) hold the bytes.
 

@@ -69,6 +69,27 @@ class ArchiveTest {
     }
 
     @Test
+    void aNoteWhoseEmbeddedTraceWasAlteredFailsNamingTheStep() throws Exception {
+        Path altered = dir.resolve("altered-trace.pdf");
+        try (PDDocument doc = Loader.loadPDF(note.toFile())) {
+            PDEmbeddedFile ef = doc.getDocumentCatalog().getNames().getEmbeddedFiles().getNames().values().stream()
+                    .filter(spec -> org.feedernote.archive.NoteArchive.TRACE_NAME.equals(spec.getFilename()))
+                    .findFirst().orElseThrow().getEmbeddedFile();
+            String text = new String(ef.toByteArray(), StandardCharsets.UTF_8);
+            // The supply's nominal line voltage, the first step of the trace.
+            String changed = text.replaceFirst("\"value\" : 400.0,", "\"value\" : 401.0,");
+            assertNotEquals(text, changed);
+            try (var out = ef.getCOSObject().createOutputStream()) {
+                out.write(changed.getBytes(StandardCharsets.UTF_8));
+            }
+            doc.save(altered.toFile());
+        }
+        CommandLineTest.Run r = CommandLineTest.run("verify", altered.toString());
+        assertEquals(1, r.status(), r.out() + r.err());
+        assertTrue(r.out().contains("supply: Nominal line voltage U (supply/U): recorded 401.0 V, recomputed 400.0 V"), r.out());
+    }
+
+    @Test
     void aTruncatedOrNonPdfFileExitsTwo() throws IOException {
         Path truncated = dir.resolve("truncated.pdf");
         byte[] bytes = java.nio.file.Files.readAllBytes(note);
