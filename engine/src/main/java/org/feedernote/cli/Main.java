@@ -14,7 +14,18 @@ public final class Main {
         if (args.length > 0 && CALCULATING.contains(args[0])) loadReferenceDataAlongside();
         PrintWriter out = new PrintWriter(new OutputStreamWriter(System.out, StandardCharsets.UTF_8), true);
         PrintWriter err = new PrintWriter(new OutputStreamWriter(System.err, StandardCharsets.UTF_8), true);
-        int status = run(args, out, err);
+        int status;
+        try {
+            status = run(args, out, err);
+        } catch (OutOfMemoryError e) {
+            // What held the memory is unreachable by now, so the message can still be written; on a
+            // terminal it starts below the progress line.
+            if (System.console() != null) err.println();
+            err.println("feedernote: not enough memory for this installation: the Java heap is limited to "
+                    + Runtime.getRuntime().maxMemory() / (1024 * 1024) + " MB. Nothing was written (files being written were removed).");
+            err.println("Give the JVM more, for instance FEEDERNOTE_JAVA_OPTS=\"-XX:+UseParallelGC -XX:TieredStopAtLevel=1 -Xmx8g\".");
+            status = ExitStatus.BAD_INPUT;
+        }
         out.flush();
         err.flush();
         System.exit(status);

@@ -102,6 +102,22 @@ class CommandLineTest {
     }
 
     @Test
+    void aHeapTooSmallForTheInstallationIsReportedInWordsWithExitTwo(@TempDir Path dir) throws Exception {
+        Path input = dir.resolve("large.json");
+        Files.writeString(input, org.feedernote.synthetic.SyntheticInstallation.toJson(
+                org.feedernote.synthetic.SyntheticInstallation.generate(3000, 1)));
+        // A JVM of its own: the heap limit is the point, and the message is written by main.
+        Process p = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(), "-Xmx16m",
+                "-cp", System.getProperty("java.class.path"), Main.class.getName(), "check", input.toString())
+                .redirectOutput(ProcessBuilder.Redirect.DISCARD).start();
+        String err = new String(p.getErrorStream().readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
+        assertEquals(2, p.waitFor(), err);
+        assertTrue(err.startsWith("feedernote: not enough memory for this installation: the Java heap is limited to "), err);
+        assertTrue(err.contains("FEEDERNOTE_JAVA_OPTS"), err);
+        assertFalse(err.contains("at org."), "no stack trace: " + err);
+    }
+
+    @Test
     void traceIsWrittenAsVersionedJson(@TempDir Path dir) throws Exception {
         Path trace = dir.resolve("t.json");
         assertEquals(0, run("check", Fixtures.inputs().resolve("bakery-small.yaml").toString(), "--trace", trace.toString()).status());
