@@ -43,7 +43,7 @@ public final class Main {
         Thread reading = new Thread(() -> {
             try {
                 org.feedernote.data.ReferenceData.standard();
-            } catch (RuntimeException | LinkageError e) {
+            } catch (RuntimeException | Error e) {
                 // The command reads them again and reports what went wrong.
             }
         }, "feedernote-reference-data");

@@ -30,7 +30,7 @@ final class NoteMaker {
         Thread t = new Thread(() -> {
             try {
                 inst.canonicalJson();
-            } catch (RuntimeException e) {
+            } catch (RuntimeException | Error e) {
                 // Made again, and the failure reported, where the form is needed.
             }
         }, "feedernote-canonical");
