@@ -46,22 +46,37 @@ final class CheckCommand implements Callable<Integer> {
         Installation inst = Loading.load(input, err);
         if (inst == null) return ExitStatus.BAD_INPUT;
         long t1 = System.nanoTime();
-        ReferenceData data = ReferenceData.standard();
-        Result result = Loading.calculate(inst, data, err, trace != null);
-        if (result == null) return ExitStatus.BAD_INPUT;
-        long t2 = System.nanoTime();
-        if (trace != null) {
-            try {
-                Files.writeAtomically(trace, stream -> {
-                    java.io.Writer w = new java.io.OutputStreamWriter(stream, java.nio.charset.StandardCharsets.UTF_8);
-                    TraceJson.write(result.trace(), Version.engine(), data.version(), "", w);
-                    w.flush();
-                });
-            } catch (IOException e) {
-                err.println("feedernote: cannot write the trace to " + trace + ": " + e.getMessage());
-                return ExitStatus.BAD_INPUT;
+        Progress progress = Progress.onTerminal(err, Progress.standardErrorIsTerminal(), inst.circuits().size(),
+                Progress.CHECK_SHOWN_FROM_CIRCUITS, t0);
+        try {
+            progress.stage("calculating " + inst.circuits().size() + " circuits");
+            ReferenceData data = ReferenceData.standard();
+            Result result = Loading.calculate(inst, data, progress.messages(err), trace != null);
+            if (result == null) return ExitStatus.BAD_INPUT;
+            long t2 = System.nanoTime();
+            if (trace != null) {
+                int sections = result.trace().sections().size();
+                try {
+                    Files.writeAtomically(trace, stream -> {
+                        java.io.Writer w = new java.io.OutputStreamWriter(stream, java.nio.charset.StandardCharsets.UTF_8);
+                        TraceJson.write(result.trace(), Version.engine(), data.version(), "", w,
+                                done -> progress.counted("writing the trace: section", done, sections));
+                        w.flush();
+                    });
+                } catch (IOException e) {
+                    progress.endLine();
+                    err.println("feedernote: cannot write the trace to " + trace + ": " + e.getMessage());
+                    return ExitStatus.BAD_INPUT;
+                }
             }
+            progress.endLine();
+            return report(result, out, err, t0, t1, t2);
+        } finally {
+            progress.endLine();
         }
+    }
+
+    private int report(Result result, PrintWriter out, PrintWriter err, long t0, long t1, long t2) {
         if (json) {
             try {
                 ResultJson.write(result, out);

@@ -20,7 +20,7 @@ public final class Main {
         } catch (OutOfMemoryError e) {
             // What held the memory is unreachable by now, so the message can still be written; on a
             // terminal it starts below the progress line.
-            if (System.console() != null) err.println();
+            if (Progress.standardErrorIsTerminal()) err.println();
             err.println("feedernote: not enough memory for this installation: the Java heap is limited to "
                     + Runtime.getRuntime().maxMemory() / (1024 * 1024) + " MB. Nothing was written (files being written were removed).");
             err.println("Give the JVM more, for instance FEEDERNOTE_JAVA_OPTS=\"-XX:+UseParallelGC -XX:TieredStopAtLevel=1 -Xmx8g\".");

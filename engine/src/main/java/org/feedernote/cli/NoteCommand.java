@@ -58,7 +58,7 @@ final class NoteCommand implements Callable<Integer> {
         PrintWriter terminal = spec.commandLine().getErr();
         Installation inst = Loading.load(input, terminal);
         if (inst == null) return ExitStatus.BAD_INPUT;
-        Progress progress = Progress.onTerminal(terminal, System.console() != null, inst.circuits().size(), started);
+        Progress progress = Progress.onTerminal(terminal, Progress.standardErrorIsTerminal(), inst.circuits().size(), started);
         try {
             return write(inst, progress.messages(out), progress.messages(terminal), progress);
         } finally {

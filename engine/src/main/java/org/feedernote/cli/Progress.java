@@ -6,7 +6,7 @@ import java.io.Writer;
 import org.feedernote.report.NoteRenderer;
 
 /**
- * How far a long note has come, on one terminal line rewritten as it goes: each stage named as
+ * How far a long note (or the check of a very large installation) has come, on one terminal line rewritten as it goes: each stage named as
  * it begins ("calculating 10000 circuits"), the counted ones with their count ("writing the trace:
  * section 1234 of 10002"), at most a few times a second, with the seconds since the command
  * began. Nothing at all when standard error is not a terminal or the installation is small.
@@ -16,6 +16,8 @@ import org.feedernote.report.NoteRenderer;
 final class Progress implements NoteRenderer.Progress {
     /** Below this many circuits a note takes about a second: no progress line. */
     static final int SHOWN_FROM_CIRCUITS = 50;
+    /** Below this many circuits check takes a few seconds at most: no progress line. */
+    static final int CHECK_SHOWN_FROM_CIRCUITS = 20_000;
     private static final long INTERVAL_NANOS = 250_000_000L;
 
     private final PrintWriter err;
@@ -32,10 +34,25 @@ final class Progress implements NoteRenderer.Progress {
     }
 
     /**
+     * Whether standard error is a terminal. Java cannot tell by itself: the wrapper, which can,
+     * says so in the system property {@code feedernote.stderr.terminal}; without it, whether the
+     * JVM has a console (standard input and output on a terminal) stands in.
+     */
+    static boolean standardErrorIsTerminal() {
+        String told = System.getProperty("feedernote.stderr.terminal");
+        return told != null ? Boolean.parseBoolean(told) : System.console() != null;
+    }
+
+    /**
      * @param started System.nanoTime() when the command began: the seconds shown count from it
      */
     static Progress onTerminal(PrintWriter err, boolean terminal, int circuits, long started) {
-        return new Progress(terminal && circuits >= SHOWN_FROM_CIRCUITS ? err : null, started);
+        return onTerminal(err, terminal, circuits, SHOWN_FROM_CIRCUITS, started);
+    }
+
+    /** As above, shown from the given number of circuits on (check: {@link #CHECK_SHOWN_FROM_CIRCUITS}). */
+    static Progress onTerminal(PrintWriter err, boolean terminal, int circuits, int shownFrom, long started) {
+        return new Progress(terminal && circuits >= shownFrom ? err : null, started);
     }
 
     /**

@@ -53,7 +53,7 @@ final class VerifyCommand implements Callable<Integer> {
             for (InputError error : e.errors()) err.println("  " + error.text());
             return ExitStatus.BAD_INPUT;
         }
-        Progress progress = Progress.onTerminal(err, System.console() != null, inst.circuits().size(), started);
+        Progress progress = Progress.onTerminal(err, Progress.standardErrorIsTerminal(), inst.circuits().size(), started);
         try {
             return verify(archive, inst, progress.messages(out), progress.messages(err), progress);
         } finally {

@@ -38,6 +38,19 @@ class ProgressTest {
     }
 
     @Test
+    void checkShowsProgressOnlyForAVeryLargeInstallation() {
+        StringWriter text = new StringWriter();
+        Progress p = Progress.onTerminal(new PrintWriter(text), true, 10_000, Progress.CHECK_SHOWN_FROM_CIRCUITS, System.nanoTime());
+        p.stage("calculating 10000 circuits");
+        p.endLine();
+        assertEquals("", text.toString(), "10 000 circuits take a second or two: no line");
+        Progress large = Progress.onTerminal(new PrintWriter(text), true, 100_000, Progress.CHECK_SHOWN_FROM_CIRCUITS, System.nanoTime());
+        large.stage("calculating 100000 circuits");
+        large.endLine();
+        assertEquals("\rfeedernote: calculating 100000 circuits (0 s)" + System.lineSeparator(), text.toString());
+    }
+
+    @Test
     void onATerminalEachStageIsNamedOnTheSameLineWhichIsEndedAtTheEnd() {
         StringWriter text = new StringWriter();
         Progress p = Progress.onTerminal(new PrintWriter(text), true, 500, System.nanoTime());
