@@ -47,21 +47,31 @@ class ArchiveTest {
         assertEquals(0, r.status(), "the draft mark must not make the bytes depend on the process: " + r.out());
     }
 
-    @Test
-    void aNoteWhoseEmbeddedInputWasAlteredFails() throws Exception {
-        Path altered = dir.resolve("altered.pdf");
+    /** A copy of the note with the embedded files whose names are accepted edited as text (the PDF saved by PDFBox). */
+    private static Path altered(String name, java.util.function.Predicate<String> files,
+                                java.util.function.UnaryOperator<String> edit) throws IOException {
+        Path altered = dir.resolve(name);
         try (PDDocument doc = Loader.loadPDF(note.toFile())) {
-            Map<String, PDComplexFileSpecification> files = doc.getDocumentCatalog().getNames().getEmbeddedFiles().getNames();
-            for (PDComplexFileSpecification spec : files.values()) {
+            Map<String, PDComplexFileSpecification> specs = doc.getDocumentCatalog().getNames().getEmbeddedFiles().getNames();
+            for (PDComplexFileSpecification spec : specs.values()) {
+                if (!files.test(spec.getFilename())) continue;
                 PDEmbeddedFile ef = spec.getEmbeddedFile();
                 String text = new String(ef.toByteArray(), StandardCharsets.UTF_8);
-                String changed = text.replace("\"length_m\":24", "\"length_m\":25").replace("length_m: 24", "length_m: 25");
+                String changed = edit.apply(text);
+                assertNotEquals(text, changed, "the edit changes " + spec.getFilename());
                 try (var out = ef.getCOSObject().createOutputStream()) {
                     out.write(changed.getBytes(StandardCharsets.UTF_8));
                 }
             }
             doc.save(altered.toFile());
         }
+        return altered;
+    }
+
+    @Test
+    void aNoteWhoseEmbeddedInputWasAlteredFails() throws Exception {
+        Path altered = altered("altered.pdf", name -> !name.equals(org.feedernote.archive.NoteArchive.TRACE_NAME),
+                text -> text.replace("\"length_m\":24", "\"length_m\":25").replace("length_m: 24", "length_m: 25"));
         CommandLineTest.Run r = CommandLineTest.run("verify", altered.toString());
         assertEquals(1, r.status(), r.out() + r.err());
         assertTrue(r.out().contains("fingerprint"), r.out());
@@ -70,20 +80,9 @@ class ArchiveTest {
 
     @Test
     void aNoteWhoseEmbeddedTraceWasAlteredFailsNamingTheStep() throws Exception {
-        Path altered = dir.resolve("altered-trace.pdf");
-        try (PDDocument doc = Loader.loadPDF(note.toFile())) {
-            PDEmbeddedFile ef = doc.getDocumentCatalog().getNames().getEmbeddedFiles().getNames().values().stream()
-                    .filter(spec -> org.feedernote.archive.NoteArchive.TRACE_NAME.equals(spec.getFilename()))
-                    .findFirst().orElseThrow().getEmbeddedFile();
-            String text = new String(ef.toByteArray(), StandardCharsets.UTF_8);
-            // The supply's nominal line voltage, the first step of the trace.
-            String changed = text.replaceFirst("\"value\" : 400.0,", "\"value\" : 401.0,");
-            assertNotEquals(text, changed);
-            try (var out = ef.getCOSObject().createOutputStream()) {
-                out.write(changed.getBytes(StandardCharsets.UTF_8));
-            }
-            doc.save(altered.toFile());
-        }
+        // The supply's nominal line voltage, the first step of the trace.
+        Path altered = altered("altered-trace.pdf", org.feedernote.archive.NoteArchive.TRACE_NAME::equals,
+                text -> text.replaceFirst("\"value\" : 400.0,", "\"value\" : 401.0,"));
         CommandLineTest.Run r = CommandLineTest.run("verify", altered.toString());
         assertEquals(1, r.status(), r.out() + r.err());
         assertTrue(r.out().contains("supply: Nominal line voltage U (supply/U): recorded 401.0 V, recomputed 400.0 V"), r.out());
