@@ -57,7 +57,7 @@ public record NoteArchive(Path file, String canonicalInput, String fingerprint, 
                 throw new NotANote(file + ": a PDF, but not a feedernote note (it carries no embedded design input and trace)");
             }
             String input = text(files.get(INPUT_NAME), file);
-            embedded(files.get(TRACE_NAME), file);
+            embedded(files.get(TRACE_NAME), file); // present, not read: openTrace streams it
             PDDocumentInformation info = doc.getDocumentInformation();
             String fingerprint = info.getCustomMetadataValue("Fingerprint");
             String engine = info.getCustomMetadataValue("EngineVersion");
