@@ -83,11 +83,11 @@ public record NoteArchive(Path file, String canonicalInput, String fingerprint, 
         } catch (IOException e) {
             throw new NotANote(file + ": damaged or truncated PDF (" + e.getMessage() + ")");
         }
+        boolean handedOver = false;
         try {
             PDComplexFileSpecification spec = embeddedFiles(doc).get(TRACE_NAME);
             if (spec == null) throw new NotANote(file + ": the note carries no embedded trace");
-            InputStream trace = decoded(embedded(spec, file), file);
-            return new java.io.FilterInputStream(trace) {
+            InputStream trace = new java.io.FilterInputStream(decoded(embedded(spec, file), file)) {
                 @Override public void close() throws IOException {
                     try {
                         super.close();
@@ -96,15 +96,18 @@ public record NoteArchive(Path file, String canonicalInput, String fingerprint, 
                     }
                 }
             };
-        } catch (IOException | NotANote | RuntimeException e) {
-            try {
-                doc.close();
-            } catch (IOException ignored) {
-                // the first failure is the one reported
-            }
-            if (e instanceof NotANote n) throw n;
-            if (e instanceof RuntimeException r) throw r;
+            handedOver = true;
+            return trace;
+        } catch (IOException e) {
             throw new NotANote(file + ": damaged or truncated PDF (" + e.getMessage() + ")");
+        } finally {
+            if (!handedOver) {
+                try {
+                    doc.close();
+                } catch (IOException ignored) {
+                    // the first failure is the one reported
+                }
+            }
         }
     }
 

@@ -48,31 +48,36 @@ final class CheckCommand implements Callable<Integer> {
         long t1 = System.nanoTime();
         Progress progress = Progress.onTerminal(err, Progress.standardErrorIsTerminal(), inst.circuits().size(),
                 Progress.CHECK_SHOWN_FROM_CIRCUITS, t0);
+        PrintWriter messages = progress.messages(err);
+        Result result;
+        long t2;
         try {
             progress.stage("calculating " + inst.circuits().size() + " circuits");
             ReferenceData data = ReferenceData.standard();
-            Result result = Loading.calculate(inst, data, progress.messages(err), trace != null);
+            result = Loading.calculate(inst, data, messages, trace != null);
             if (result == null) return ExitStatus.BAD_INPUT;
-            long t2 = System.nanoTime();
-            if (trace != null) {
-                int sections = result.trace().sections().size();
-                try {
-                    Files.writeAtomically(trace, stream -> {
-                        java.io.Writer w = new java.io.OutputStreamWriter(stream, java.nio.charset.StandardCharsets.UTF_8);
-                        TraceJson.write(result.trace(), Version.engine(), data.version(), "", w,
-                                done -> progress.counted("writing the trace: section", done, sections));
-                        w.flush();
-                    });
-                } catch (IOException e) {
-                    progress.endLine();
-                    err.println("feedernote: cannot write the trace to " + trace + ": " + e.getMessage());
-                    return ExitStatus.BAD_INPUT;
-                }
-            }
-            progress.endLine();
-            return report(result, out, err, t0, t1, t2);
+            t2 = System.nanoTime();
+            if (trace != null && !writeTrace(result, data, progress, messages)) return ExitStatus.BAD_INPUT;
         } finally {
             progress.endLine();
+        }
+        return report(result, out, err, t0, t1, t2);
+    }
+
+    /** Writes the trace file; false after the reason was printed. */
+    private boolean writeTrace(Result result, ReferenceData data, Progress progress, PrintWriter err) {
+        int sections = result.trace().sections().size();
+        try {
+            Files.writeAtomically(trace, stream -> {
+                java.io.Writer w = new java.io.OutputStreamWriter(stream, java.nio.charset.StandardCharsets.UTF_8);
+                TraceJson.write(result.trace(), Version.engine(), data.version(), "", w,
+                        done -> progress.counted("writing the trace: section", done, sections));
+                w.flush();
+            });
+            return true;
+        } catch (IOException e) {
+            err.println("feedernote: cannot write the trace to " + trace + ": " + e.getMessage());
+            return false;
         }
     }
 

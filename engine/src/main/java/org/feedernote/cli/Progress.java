@@ -6,10 +6,10 @@ import java.io.Writer;
 import org.feedernote.report.NoteRenderer;
 
 /**
- * How far a long note (or the check of a very large installation) has come, on one terminal line rewritten as it goes: each stage named as
- * it begins ("calculating 10000 circuits"), the counted ones with their count ("writing the trace:
- * section 1234 of 10002"), at most a few times a second, with the seconds since the command
- * began. Nothing at all when standard error is not a terminal or the installation is small.
+ * How far a long note (or the check of a very large installation) has come, on one terminal line
+ * rewritten as it goes: each stage named as it begins ("calculating 10000 circuits"), the counted
+ * ones with their count ("writing the trace: section 1234 of 10002"), at most a few times a
+ * second, with the seconds since the command began. Nothing at all when standard error is not a terminal or the installation is small.
  * Messages printed meanwhile go through {@link #messages}, which ends the line first; the command
  * ends the line when it is done ({@link #endLine()}).
  */
