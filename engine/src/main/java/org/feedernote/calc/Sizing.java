@@ -49,6 +49,12 @@ final class Sizing {
     }
 
     Map<String, Circuit> run() {
+        if (nothingToChoose()) {
+            // Every size given: no candidate to weigh, nothing a drop could enlarge. The final
+            // pass calculates each circuit once; evaluating them here first would only repeat it.
+            for (Circuit c : run.order()) current.put(c.id(), c);
+            return current;
+        }
         firstPass();
         for (Circuit c : run.order()) {
             Slot slot = new Slot(run.original(c.id()), current.get(c.id()), sizesFor(c));
@@ -70,6 +76,11 @@ final class Sizing {
         trim();
         smallestProtectiveConductors();
         return current;
+    }
+
+    private boolean nothingToChoose() {
+        for (Circuit c : run.order()) if (auto(c) || c.cable().cpc().auto()) return false;
+        return true;
     }
 
     /**
