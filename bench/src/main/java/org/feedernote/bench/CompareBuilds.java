@@ -66,7 +66,7 @@ public final class CompareBuilds {
         for (int b = 0; b < 2; b++) {
             long[] counted = Arrays.copyOfRange(times[b], runs / 2, runs);
             Arrays.sort(counted);
-            System.out.printf(Locale.ROOT, "%s: min %.0f ms, median %.0f ms (%d runs counted of %d, %s)%n", builds[b].name(),
+            System.out.printf(Locale.ROOT, "%s: min %.2f ms, median %.2f ms (%d runs counted of %d, %s)%n", builds[b].name(),
                     counted[0] / 1e6, counted[counted.length / 2] / 1e6, counted.length, runs, traced ? "traced" : "figures only");
         }
     }

@@ -220,6 +220,7 @@ public final class Engine {
             Trace ct = circuitTrace.get(c.id());
             sizing.record(ct, original, c);
             CircuitResult r = evaluate(c, ct, calculated, true);
+            ct.complete();
             return new Recorded(r, r.withGoverning(sizing.governing(c.id(), r)));
         }
 

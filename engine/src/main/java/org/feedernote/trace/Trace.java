@@ -16,6 +16,13 @@ public interface Trace {
     /** A sub-section; steps added to the returned trace land in it. */
     Trace section(String id, String title, String subtitle);
 
+    /**
+     * Nothing more will be added to this section or its sub-sections. A recording trace makes
+     * the section now, while its steps are still fresh in memory, rather than when the whole
+     * trace is collected.
+     */
+    default void complete() {}
+
     static Trace noop() {
         return Noop.INSTANCE;
     }

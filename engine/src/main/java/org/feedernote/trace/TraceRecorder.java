@@ -22,6 +22,8 @@ public final class TraceRecorder implements Trace {
     private final List<TraceRecorder> children = new ArrayList<>();
     /** Set when the section is made: the steps are the section's from then on. */
     private boolean frozen;
+    /** The section, once made. */
+    private Section section;
     /** The ids of the top-level section, kept when assertions are on; else null. */
     private final IdSet index;
     private static final boolean IDS_CHECKED = TraceRecorder.class.desiredAssertionStatus();
@@ -94,15 +96,21 @@ public final class TraceRecorder implements Trace {
         }
     }
 
+    @Override public void complete() {
+        toSection();
+    }
+
     /** The recorded steps, frozen. */
     public Section toSection() {
+        if (section != null) return section;
         // The section takes the recorder's own lists, read-only, rather than copies of them: after
         // this the recorder refuses more steps and sections, so the section cannot change.
         frozen = true;
         List<Section> sections = new ArrayList<>(children.size());
         for (TraceRecorder c : children) sections.add(c.toSection());
-        return new Section(id, title, subtitle, java.util.Collections.unmodifiableList(steps),
+        section = new Section(id, title, subtitle, java.util.Collections.unmodifiableList(steps),
                 java.util.Collections.unmodifiableList(sections));
+        return section;
     }
 
     private void refuseIfFrozen() {
