@@ -779,7 +779,7 @@ public final class Engine {
                 }
             }
             Trace ft = ct.section(id + "/fault", "Fault path", "earth-fault loop, disconnection, short-circuit withstand, breaking capacity");
-            Q thetaMax = Given.lookup(ft, data.maxTemperature(id + "/fault/theta_max", c.cable().insulation()));
+            Q thetaMax = data.maxTemperature(ft, id, "/fault/theta_max", c.cable().insulation());
             FaultPath.CircuitFault fault = faultPath.circuit(ft, c, o.z(), boardFault(c.from(), done), o.length(), o.in(), o.phases(),
                     thetaMax);
             checks.addAll(fault.checks());
@@ -835,8 +835,8 @@ public final class Engine {
             int loaded = phases == 3 ? 3 : 2;
             if (t.recording()) Given.decision(t, id + "/loaded", "Loaded conductors", phases == 3 ? "three-phase circuit (neutral current not counted)"
                     : "single-phase circuit: line and neutral", loaded + " loaded conductors", "IEC 60364-5-52:2009, 523.6");
-            Q it = Given.lookup(t, capacityData.tabulated(id + "/I_t", cable.insulation(), cable.conductor(), method, loaded,
-                    cable.type(), cable.formation(), cable.size().mm2()));
+            Q it = capacityData.tabulated(t, id, "/I_t", cable.insulation(), cable.conductor(), method, loaded,
+                    cable.type(), cable.formation(), cable.size().mm2());
             List<Q> factors = new ArrayList<>();
             boolean ground = method == Method.D1 || method == Method.D2;
             Setting<Double> amb = c.conditions().ambientC().given() ? c.conditions().ambientC()
@@ -909,7 +909,7 @@ public final class Engine {
 
         Q temperature(Trace t, Circuit c, Q ib, Q iz) {
             String id = c.id() + "/z";
-            Q thetaMax = Given.lookup(t, data.maxTemperature(id + "/theta_max", c.cable().insulation()));
+            Q thetaMax = data.maxTemperature(t, id, "/theta_max", c.cable().insulation());
             Setting<ConductorTemperature> setting = inst.basis().conductorTemperature();
             if (setting.value() == ConductorTemperature.MAXIMUM || ib.value() >= iz.value()) {
                 String because = setting.value() == ConductorTemperature.MAXIMUM

@@ -191,8 +191,8 @@ final class FaultPath {
         Q x1 = LENGTH_REACTANCE.as("X_1").eval(t, id, "/X1", "line conductor", bind(X_KM, rel(z.reactance(), "X")), bind(L, length));
         Q xLoop = LOOP_REACTANCE.as("X_loop").eval(t, id, "/Xloop", "line and protective conductor", bind(X_KM, rel(z.reactance(), "X")),
                 bind(L, length));
-        Q thetaF = Given.lookup(t, faults.finalTemperature(id + "/theta_f", cable.insulation()));
-        Q cpc20 = Given.lookup(t, data.resistance20(id + "/R20_cpc", cable.conductor(), cable.cpc().mm2()));
+        Q thetaF = faults.finalTemperature(t, id, "/theta_f", cable.insulation());
+        Q cpc20 = data.resistance20(t, id, "/R20_cpc", cable.conductor(), cable.cpc().mm2());
         Conductors hot = conductors(t, id, AT_MAX, thetaMax, r20, cpc20, alpha, length, n);
         Conductors fin = conductors(t, id, AT_FINAL, thetaF, r20, cpc20, alpha, length, n);
         Q r1 = hot.r1();

@@ -35,13 +35,13 @@ final class ImpedanceCalc {
      */
     ImpedanceResult impedance(Trace t, String id, Cable cable, Q theta, Q frequency, int phases) {
         double size = cable.size().mm2();
-        Q r20 = Given.lookup(t, data.resistance20(id + "/R20", cable.conductor(), size));
-        Q alpha = Given.lookup(t, data.alpha20(id + "/alpha20", cable.conductor()));
+        Q r20 = data.resistance20(t, id, "/R20", cable.conductor(), size);
+        Q alpha = data.alpha20(t, id, "/alpha20", cable.conductor());
         Q rTheta = RESISTANCE_AT_TEMPERATURE.eval(t, id, "/R_theta", "", bind(R20, r20), bind(ALPHA, alpha), bind(THETA, theta));
 
         Q area = Given.derived(t, id, "/S", "Nominal cross-section", "S", size, Units.MM2, "design input (cable.size_mm2)");
         Q dc = CONDUCTOR_DIAMETER.eval(t, id, "/dc", "", bind(S_AREA, area));
-        Q ti = Given.lookup(t, data.insulationThickness(id + "/t_i", cable.insulation(), size));
+        Q ti = data.insulationThickness(t, id, "/t_i", cable.insulation(), size);
         Q spacing;
         Q gmd;
         if (cable.type() == CableType.MULTICORE && cable.formation() != null) {

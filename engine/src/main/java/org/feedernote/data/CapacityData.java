@@ -11,8 +11,10 @@ import org.feedernote.model.DeviceKind;
 import org.feedernote.model.Formation;
 import org.feedernote.model.Insulation;
 import org.feedernote.model.Method;
+import org.feedernote.trace.Q;
 import org.feedernote.trace.Step;
 import org.feedernote.trace.TableRef;
+import org.feedernote.trace.Trace;
 
 /**
  * Lookups for current-carrying capacity (IEC 60364-5-52 Annex B), its correction factors and the
@@ -33,6 +35,14 @@ public final class CapacityData {
         Column c = column(insulation, conductor, method, loaded, formation);
         String row = ReferenceData.sizeKey(size);
         return c.table().lookup(id, "Tabulated current-carrying capacity", "I_t", "A", row, c.column(), row + " mm²", c.label());
+    }
+
+    /** {@link #tabulated} as the quantity owner + step, recorded in t (see {@link ReferenceTable#quantity}). */
+    public Q tabulated(Trace t, String owner, String step, Insulation insulation, Conductor conductor, Method method, int loaded,
+                       CableType type, Formation formation, double size) {
+        Column c = column(insulation, conductor, method, loaded, formation);
+        return c.table().quantity(t, owner, step, "I_t", "A", ReferenceData.sizeKey(size), c.column(),
+                () -> tabulated(owner + step, insulation, conductor, method, loaded, type, formation, size));
     }
 
     /** The table and column of a cable and method, and the column in words. */

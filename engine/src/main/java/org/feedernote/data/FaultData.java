@@ -5,7 +5,9 @@ import java.util.List;
 import org.feedernote.model.Conductor;
 import org.feedernote.model.Curve;
 import org.feedernote.model.Insulation;
+import org.feedernote.trace.Q;
 import org.feedernote.trace.Step;
+import org.feedernote.trace.Trace;
 
 /** Lookups for the fault path: adiabatic constants and temperatures, let-through energy of class 3 MCBs. */
 public final class FaultData {
@@ -25,6 +27,11 @@ public final class FaultData {
 
     public Step.Lookup beta(String id, Conductor c) {
         return adiabatic().lookup(id, "Reciprocal of the temperature coefficient at 0 °C", "β", "°C", c.token(), "beta", c.token(), "β");
+    }
+
+    /** {@link #finalTemperature(String, Insulation)} as the quantity owner + step, recorded in t. */
+    public Q finalTemperature(Trace t, String owner, String step, Insulation i) {
+        return adiabatic().quantity(t, owner, step, "θ_f", "°C", i.token(), "theta_final", () -> finalTemperature(owner + step, i));
     }
 
     public Step.Lookup finalTemperature(String id, Insulation i) {

@@ -8,8 +8,10 @@ import java.util.List;
 
 import org.feedernote.model.Conductor;
 import org.feedernote.model.Insulation;
+import org.feedernote.trace.Q;
 import org.feedernote.trace.Step;
 import org.feedernote.trace.TableRef;
+import org.feedernote.trace.Trace;
 
 /**
  * The reference tables the engine uses, read once from the packaged resources. Immutable; the
@@ -81,9 +83,20 @@ public final class ReferenceData {
         return v == Math.rint(v) && Math.abs(v) < 1e15 ? Long.toString((long) v) : Double.toString(v);
     }
 
+    /** {@link #resistance20(String, Conductor, double)} as the quantity owner + step, recorded in t (see {@link ReferenceTable#quantity}). */
+    public Q resistance20(Trace t, String owner, String step, Conductor conductor, double sizeMm2) {
+        return resistance.quantity(t, owner, step, "R_20", "Ω/km", sizeKey(sizeMm2), conductor.token(),
+                () -> resistance20(owner + step, conductor, sizeMm2));
+    }
+
     public Step.Lookup resistance20(String stepId, Conductor conductor, double sizeMm2) {
         return resistance.lookup(stepId, "Conductor resistance at 20 °C", "R_20", "Ω/km", sizeKey(sizeMm2), conductor.token(),
                 sizeKey(sizeMm2) + " mm²", "class 2, " + (conductor == Conductor.COPPER ? "plain copper" : "aluminium"));
+    }
+
+    /** {@link #alpha20(String, Conductor)} as the quantity owner + step, recorded in t. */
+    public Q alpha20(Trace t, String owner, String step, Conductor conductor) {
+        return materials.quantity(t, owner, step, "α_20", "1/K", conductor.token(), "alpha20", () -> alpha20(owner + step, conductor));
     }
 
     public Step.Lookup alpha20(String stepId, Conductor conductor) {
@@ -101,9 +114,21 @@ public final class ReferenceData {
                 conductor.token() + ", round stranded", "k_p");
     }
 
+    /** {@link #maxTemperature(String, Insulation)} as the quantity owner + step, recorded in t. */
+    public Q maxTemperature(Trace t, String owner, String step, Insulation insulation) {
+        return temperatures.quantity(t, owner, step, "θ_max", "°C", insulation.token(), "theta_max",
+                () -> maxTemperature(owner + step, insulation));
+    }
+
     public Step.Lookup maxTemperature(String stepId, Insulation insulation) {
         return temperatures.lookup(stepId, "Maximum conductor temperature", "θ_max", "°C", insulation.token(), "theta_max",
                 insulation == Insulation.PVC ? "PVC (thermoplastic)" : "XLPE (thermosetting)", "normal operation");
+    }
+
+    /** {@link #insulationThickness(String, Insulation, double)} as the quantity owner + step, recorded in t. */
+    public Q insulationThickness(Trace t, String owner, String step, Insulation insulation, double sizeMm2) {
+        return thickness.quantity(t, owner, step, "t_i", "mm", sizeKey(sizeMm2), insulation.token(),
+                () -> insulationThickness(owner + step, insulation, sizeMm2));
     }
 
     public Step.Lookup insulationThickness(String stepId, Insulation insulation, double sizeMm2) {

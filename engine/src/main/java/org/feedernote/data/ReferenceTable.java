@@ -10,9 +10,12 @@ import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.Supplier;
 
+import org.feedernote.trace.Q;
 import org.feedernote.trace.Step;
 import org.feedernote.trace.TableRef;
+import org.feedernote.trace.Trace;
 
 /**
  * A reference table read from a CSV resource whose '#' header names the source, edition, table,
@@ -106,6 +109,23 @@ public final class ReferenceTable {
     public String text(String row, String column) {
         Map<String, String> r = rows.get(row);
         return r == null ? null : r.get(column);
+    }
+
+    /**
+     * The value at (row, column) as the quantity owner + step. With the no-op trace (a sizing
+     * candidate) it is read straight from the table, with no step, labels or joined id made; with a
+     * recording trace, and wherever the cell is missing (so that the gap is reported in the same
+     * words), recorded is made, added to the trace and its quantity returned.
+     */
+    public Q quantity(Trace t, String owner, String step, String symbol, String unit, String row, String column,
+                      Supplier<Step.Lookup> recorded) {
+        if (!t.recording()) {
+            Double v = value(row, column);
+            if (v != null) return new Q(owner, step, symbol, v, unit);
+        }
+        Step.Lookup s = recorded.get();
+        t.add(s);
+        return s.q();
     }
 
     /** Exact lookup recorded as a trace step; a missing cell is a loud error, never a zero. */
