@@ -1071,6 +1071,8 @@ public final class Engine {
      */
     static String trim(double v) {
         if (!Double.isFinite(v)) return Double.toString(v);
+        // Whole numbers (ratings, sizes, lengths) are most of them: the same text without BigDecimal.
+        if (v != 0 && v == Math.rint(v) && Math.abs(v) < 1e15) return Long.toString((long) v);
         java.math.BigDecimal d = threeDecimals(v);
         if (d.signum() == 0) return v < 0 || (v == 0 && 1 / v < 0) ? "-0" : "0";
         return d.stripTrailingZeros().toPlainString();

@@ -46,4 +46,26 @@ class FixedDecimalsTest {
         assertEquals(formatter(Double.POSITIVE_INFINITY), Engine.fixed3(Double.POSITIVE_INFINITY));
         assertEquals(formatter(Double.NEGATIVE_INFINITY), Engine.fixed3(Double.NEGATIVE_INFINITY));
     }
+
+    /** trim: the formatter's three decimals with the trailing zeros stripped; "0" and "-0" for zeros. */
+    private static String trimmed(double v) {
+        if (v == 0) return 1 / v < 0 ? "-0" : "0";
+        return new java.math.BigDecimal(formatter(v)).stripTrailingZeros().toPlainString();
+    }
+
+    @ParameterizedTest
+    @ValueSource(doubles = {0, -0.0, 1, -1, 16, 100, 2500, 1e7, 1e14, 999_999_999_999_999.0, 1e15, 1e16, 0.5, 16.0004, 16.0005,
+            -2.5, 1.23456789e9})
+    void trimWritesWhatTheFormatterWritesWithoutTrailingZeros(double v) {
+        assertEquals(trimmed(v), Engine.trim(v));
+    }
+
+    @Test
+    void trimWritesWholeNumbersAsTheFormatterDoes() {
+        SplittableRandom random = new SplittableRandom(20261203);
+        for (int i = 0; i < 20_000; i++) {
+            double v = i % 2 == 0 ? random.nextInt(-100_000, 100_000) : Math.rint(random.nextDouble() * 1e12);
+            assertEquals(trimmed(v), Engine.trim(v), () -> "for " + v);
+        }
+    }
 }
