@@ -44,9 +44,36 @@ public final class Benchmark {
             try (PDDocument doc = Loader.loadPDF(new java.io.File(args[1]))) {
                 System.out.println(doc.getNumberOfPages());
             }
+        } else if (what.equals("reference")) {
+            reference();
         } else {
-            throw new IllegalArgumentException("note N or pages FILE");
+            throw new IllegalArgumentException("note N, pages FILE or reference");
         }
+    }
+
+    /**
+     * A fixed workload that owes nothing to feedernote: four million seeded random numbers sorted
+     * and summed, the median of five runs after three warm-ups. bench/run prints it at its start
+     * and at its end, so that figures of runs on different days or hours can be read against the
+     * speed the shared machine had at the time (the same figure twice: the machine's speed held).
+     */
+    private static void reference() {
+        long[] numbers = new long[4_000_000];
+        double[] ms = new double[5];
+        long checksum = 0;
+        for (int run = -3; run < ms.length; run++) {
+            java.util.SplittableRandom random = new java.util.SplittableRandom(20261203);
+            long start = System.nanoTime();
+            for (int i = 0; i < numbers.length; i++) numbers[i] = random.nextLong();
+            java.util.Arrays.sort(numbers);
+            long sum = 0;
+            for (int i = 0; i < numbers.length; i += 97) sum += numbers[i];
+            checksum = sum;
+            if (run >= 0) ms[run] = (System.nanoTime() - start) / 1e6;
+        }
+        java.util.Arrays.sort(ms);
+        System.out.printf(Locale.ROOT, "%.0f ms (median of %d; fastest %.0f, slowest %.0f; checksum %x)%n", ms[ms.length / 2], ms.length,
+                ms[0], ms[ms.length - 1], checksum);
     }
 
     /** Runs before the measured ones, so that the JIT compiler has finished with the code measured. */
