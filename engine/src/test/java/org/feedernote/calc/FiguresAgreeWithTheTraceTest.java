@@ -34,6 +34,15 @@ class FiguresAgreeWithTheTraceTest {
                 SyntheticInstallation.toJson(SyntheticInstallation.generate(600, 3)), true));
     }
 
+    /** A design with every size given has nothing to choose: the sizing evaluates nothing, the final pass every circuit once. */
+    @Test
+    void aDesignWithEverySizeGivenGivesTheSameResultWithAndWithoutTheTrace() throws Exception {
+        Installation generated = InputReader.parse("synthetic.json",
+                SyntheticInstallation.toJson(SyntheticInstallation.generate(400, 6)), true);
+        Engine engine = new Engine(org.feedernote.data.ReferenceData.standard());
+        assertSameResult(SyntheticInstallation.asSized(generated, engine.run(generated, false)));
+    }
+
     @Test
     void boardsWithAWithstandRatingGiveTheSameVerdictWithAndWithoutTheTrace() throws Exception {
         // Sub-boards rated 10 kA and 60 kA by turns: a 1 600 kVA, 6 % transformer gives about 42 kA at
