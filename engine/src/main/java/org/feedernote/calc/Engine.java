@@ -352,8 +352,8 @@ public final class Engine {
                 int best = 0;
                 for (int k = 1; k < 3; k++) if (load[k] < load[best] - 1e-12) best = k;
                 Trace t = circuitTrace.get(c.id());
-                String before = !t.recording() ? "" : String.format(Locale.ROOT, "phase loads before allocation L1 %s kVA, L2 %s kVA, L3 %s kVA",
-                        trim(load[0]), trim(load[1]), trim(load[2]));
+                String before = !t.recording() ? "" : "phase loads before allocation L1 " + trim(load[0]) + " kVA, L2 " + trim(load[1])
+                        + " kVA, L3 " + trim(load[2]) + " kVA";
                 LoadDemand d = demand.get(c.id());
                 load[best] += d.apparentKva();
                 demand.put(c.id(), withPhase(d, best + 1));

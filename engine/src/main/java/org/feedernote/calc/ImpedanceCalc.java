@@ -3,7 +3,6 @@ package org.feedernote.calc;
 import static org.feedernote.formula.Formula.bind;
 import static org.feedernote.formula.ImpedanceFormulas.*;
 
-import java.util.Locale;
 
 import org.feedernote.data.ReferenceData;
 import org.feedernote.formula.Units;
@@ -87,8 +86,8 @@ final class ImpedanceCalc {
         } else {
             rAc = Given.alias(rTheta.id(), "R_ac", rTheta);
             if (t.recording()) Given.decision(t, id + "/ac", "Skin and proximity effect",
-                    String.format(Locale.ROOT, "S = %s mm² < %s mm²: y_s + y_p stays below 0.2 %%", ReferenceData.sizeKey(size),
-                            ReferenceData.sizeKey(AC_EFFECT_FROM_MM2)),
+                    "S = " + ReferenceData.sizeKey(size) + " mm² < " + ReferenceData.sizeKey(AC_EFFECT_FROM_MM2)
+                            + " mm²: y_s + y_p stays below 0.2 %",
                     "neglected: R_ac = R_θ", "IEC 60287-1-1:2006, 2.1.2 and 2.1.4 (evaluated; negligible)", rTheta.id());
         }
 
