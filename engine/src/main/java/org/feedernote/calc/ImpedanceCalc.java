@@ -3,7 +3,6 @@ package org.feedernote.calc;
 import static org.feedernote.formula.Formula.bind;
 import static org.feedernote.formula.ImpedanceFormulas.*;
 
-
 import org.feedernote.data.ReferenceData;
 import org.feedernote.formula.Units;
 import org.feedernote.model.Cable;
