@@ -43,15 +43,22 @@ final class CheckCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         long t0 = System.nanoTime();
-        Installation inst = Loading.load(input, err);
-        if (inst == null) return ExitStatus.BAD_INPUT;
-        long t1 = System.nanoTime();
-        Progress progress = Progress.onTerminal(err, Progress.standardErrorIsTerminal(), inst.circuits().size(),
-                Progress.CHECK_SHOWN_FROM_CIRCUITS, t0);
-        PrintWriter messages = progress.messages(err);
+        boolean terminal = Progress.standardErrorIsTerminal();
+        // A very large input takes seconds to read before its circuits are counted: named by its size.
+        long bytes = sizeOf(input);
+        Progress progress = Progress.whileReading(err, terminal, bytes, t0);
         Result result;
+        long t1;
         long t2;
         try {
+            progress.stage("reading " + input.getFileName() + " (" + Math.round(bytes / 1e6) + " MB)");
+            Installation inst = Loading.load(input, progress.messages(err));
+            if (inst == null) return ExitStatus.BAD_INPUT;
+            t1 = System.nanoTime();
+            if (!progress.showing()) {
+                progress = Progress.onTerminal(err, terminal, inst.circuits().size(), Progress.CHECK_SHOWN_FROM_CIRCUITS, t0);
+            }
+            PrintWriter messages = progress.messages(err);
             progress.stage("calculating " + inst.circuits().size() + " circuits");
             ReferenceData data = ReferenceData.standard();
             result = Loading.calculate(inst, data, messages, trace != null);
@@ -62,6 +69,14 @@ final class CheckCommand implements Callable<Integer> {
             progress.endLine();
         }
         return report(result, out, err, t0, t1, t2);
+    }
+
+    private static long sizeOf(Path file) {
+        try {
+            return java.nio.file.Files.isRegularFile(file) ? java.nio.file.Files.size(file) : 0;
+        } catch (IOException e) {
+            return 0;
+        }
     }
 
     /** Writes the trace file; false after the reason was printed. */

@@ -18,6 +18,11 @@ final class Progress implements NoteRenderer.Progress {
     static final int SHOWN_FROM_CIRCUITS = 50;
     /** Below this many circuits check takes a few seconds at most: no progress line. */
     static final int CHECK_SHOWN_FROM_CIRCUITS = 20_000;
+    /**
+     * From this size on, check names the reading of its input before the circuits are known: some
+     * 20 000 circuits of JSON (about 400 bytes each), read in a second or more.
+     */
+    static final long CHECK_READING_SHOWN_FROM_BYTES = 8_000_000;
     private static final long INTERVAL_NANOS = 250_000_000L;
 
     private final PrintWriter err;
@@ -53,6 +58,16 @@ final class Progress implements NoteRenderer.Progress {
     /** As above, shown from the given number of circuits on (check: {@link #CHECK_SHOWN_FROM_CIRCUITS}). */
     static Progress onTerminal(PrintWriter err, boolean terminal, int circuits, int shownFrom, long started) {
         return new Progress(terminal && circuits >= shownFrom ? err : null, started);
+    }
+
+    /** For check while it reads its input: shown when the input has {@link #CHECK_READING_SHOWN_FROM_BYTES} bytes or more. */
+    static Progress whileReading(PrintWriter err, boolean terminal, long inputBytes, long started) {
+        return new Progress(terminal && inputBytes >= CHECK_READING_SHOWN_FROM_BYTES ? err : null, started);
+    }
+
+    /** Whether the line is shown at all (standard error a terminal, the installation large). */
+    boolean showing() {
+        return err != null;
     }
 
     /**

@@ -51,6 +51,24 @@ class ProgressTest {
     }
 
     @Test
+    void checkNamesTheReadingOfAVeryLargeInputBeforeItsCircuitsAreCounted() {
+        StringWriter text = new StringWriter();
+        Progress small = Progress.whileReading(new PrintWriter(text), true, 4_000_000, System.nanoTime());
+        small.stage("reading g10000.json (4 MB)");
+        assertFalse(small.showing());
+        assertEquals("", text.toString(), "10 000 circuits of JSON are read in a fraction of a second: no line");
+        Progress large = Progress.whileReading(new PrintWriter(text), true, 40_000_000, System.nanoTime());
+        large.stage("reading g100000.json (40 MB)");
+        large.stage("calculating 100000 circuits");
+        large.endLine();
+        assertTrue(large.showing());
+        assertTrue(text.toString().startsWith("\rfeedernote: reading g100000.json (40 MB) (0 s)\rfeedernote: calculating 100000 circuits"),
+                text.toString());
+        assertFalse(Progress.whileReading(new PrintWriter(text), false, 40_000_000, System.nanoTime()).showing(),
+                "not on a terminal: nothing");
+    }
+
+    @Test
     void onATerminalEachStageIsNamedOnTheSameLineWhichIsEndedAtTheEnd() {
         StringWriter text = new StringWriter();
         Progress p = Progress.onTerminal(new PrintWriter(text), true, 500, System.nanoTime());
