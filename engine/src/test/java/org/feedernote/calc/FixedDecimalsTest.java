@@ -47,15 +47,17 @@ class FixedDecimalsTest {
         assertEquals(formatter(Double.NEGATIVE_INFINITY), Engine.fixed3(Double.NEGATIVE_INFINITY));
     }
 
-    /** trim: the formatter's three decimals with the trailing zeros stripped; "0" and "-0" for zeros. */
+    /** trim: the formatter's three decimals with the trailing zeros stripped; "-0" for a negative value that rounds to zero. */
     private static String trimmed(double v) {
-        if (v == 0) return 1 / v < 0 ? "-0" : "0";
-        return new java.math.BigDecimal(formatter(v)).stripTrailingZeros().toPlainString();
+        java.math.BigDecimal d = new java.math.BigDecimal(formatter(v));
+        if (d.signum() == 0) return v < 0 || 1 / v < 0 ? "-0" : "0";
+        return d.stripTrailingZeros().toPlainString();
     }
 
     @ParameterizedTest
     @ValueSource(doubles = {0, -0.0, 1, -1, 16, 100, 2500, 1e7, 1e14, 999_999_999_999_999.0, 1e15, 1e16, 0.5, 16.0004, 16.0005,
-            -2.5, 1.23456789e9})
+            -2.5, 1.23456789e9, 0.001, 0.0009, 0.0005, 0.0004999, -0.0004, 0.9995, 9.9995, 9_999_999.9995, 9_999_999.9994,
+            1e-3, 0.00099999, 6_999_999.9999, 0.125, 0.1 + 0.2, 4.35, 1.005, -1.0005, 12.3456789})
     void trimWritesWhatTheFormatterWritesWithoutTrailingZeros(double v) {
         assertEquals(trimmed(v), Engine.trim(v));
     }
@@ -65,6 +67,21 @@ class FixedDecimalsTest {
         SplittableRandom random = new SplittableRandom(20261203);
         for (int i = 0; i < 20_000; i++) {
             double v = i % 2 == 0 ? random.nextInt(-100_000, 100_000) : Math.rint(random.nextDouble() * 1e12);
+            assertEquals(trimmed(v), Engine.trim(v), () -> "for " + v);
+        }
+    }
+
+    @Test
+    void trimWritesWhatTheFormatterWritesForManyValues() {
+        SplittableRandom random = new SplittableRandom(202612031);
+        for (int i = 0; i < 200_000; i++) {
+            double v = switch (i % 5) {
+                case 0 -> random.nextDouble() * 10;
+                case 1 -> Math.round(random.nextDouble() * 1e7) / 1e4 + 0.0005;
+                case 2 -> -random.nextDouble() * 1000;
+                case 3 -> random.nextDouble() * 2e7;
+                default -> Math.scalb(random.nextDouble(), random.nextInt(-30, 30));
+            };
             assertEquals(trimmed(v), Engine.trim(v), () -> "for " + v);
         }
     }
