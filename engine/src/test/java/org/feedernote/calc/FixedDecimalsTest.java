@@ -26,18 +26,25 @@ class FixedDecimalsTest {
         assertEquals(formatter(v), Engine.fixed3(v));
     }
 
-    @Test
-    void writesWhatTheFormatterWritesForManyValues() {
-        SplittableRandom random = new SplittableRandom(20261202);
-        for (int i = 0; i < 100_000; i++) {
-            double v = switch (i % 4) {
+    /** Seeded values of every kind the working meets: small, with a half at the fourth decimal, negative, large, tiny. */
+    private static double[] sample(long seed, int count) {
+        SplittableRandom random = new SplittableRandom(seed);
+        double[] values = new double[count];
+        for (int i = 0; i < count; i++) {
+            values[i] = switch (i % 5) {
                 case 0 -> random.nextDouble() * 10;
-                case 1 -> Math.round(random.nextDouble() * 1e6) / 1e4 + 0.0005;
+                case 1 -> Math.round(random.nextDouble() * 1e7) / 1e4 + 0.0005;
                 case 2 -> -random.nextDouble() * 1000;
+                case 3 -> random.nextDouble() * 2e7;
                 default -> Math.scalb(random.nextDouble(), random.nextInt(-30, 30));
             };
-            assertEquals(formatter(v), Engine.fixed3(v), () -> "for " + v);
         }
+        return values;
+    }
+
+    @Test
+    void writesWhatTheFormatterWritesForManyValues() {
+        for (double v : sample(20261202, 100_000)) assertEquals(formatter(v), Engine.fixed3(v), () -> "for " + v);
     }
 
     @Test
@@ -73,16 +80,6 @@ class FixedDecimalsTest {
 
     @Test
     void trimWritesWhatTheFormatterWritesForManyValues() {
-        SplittableRandom random = new SplittableRandom(202612031);
-        for (int i = 0; i < 200_000; i++) {
-            double v = switch (i % 5) {
-                case 0 -> random.nextDouble() * 10;
-                case 1 -> Math.round(random.nextDouble() * 1e7) / 1e4 + 0.0005;
-                case 2 -> -random.nextDouble() * 1000;
-                case 3 -> random.nextDouble() * 2e7;
-                default -> Math.scalb(random.nextDouble(), random.nextInt(-30, 30));
-            };
-            assertEquals(trimmed(v), Engine.trim(v), () -> "for " + v);
-        }
+        for (double v : sample(202612031, 200_000)) assertEquals(trimmed(v), Engine.trim(v), () -> "for " + v);
     }
 }
