@@ -15,8 +15,10 @@ import org.feedernote.trace.Trace;
 /**
  * One formula of the catalogue: the result's symbol and unit, the expression tree and the
  * reference it comes from. The only way the engine obtains a computed number is {@link #eval},
- * which records the step and returns the value. Immutable; the variables of the tree are found
- * once, when the formula is made.
+ * which records the step and returns the value. Immutable; the variables of the tree are found,
+ * and the tree compiled, once, when the formula is first evaluated: a sum shown over the
+ * quantities of one circuit is made for that circuit and valued by its kept twin (see
+ * {@link #evalLike}), so it never needs either.
  */
 public final class Formula {
     private final String id;
@@ -25,8 +27,11 @@ public final class Formula {
     private final String unit;
     private final Expr expr;
     private final String reference;
-    private final List<Var> vars;
-    private final Evaluator.Compiled compiled;
+    /** Null until first needed; then the same for every thread (a benign race: each would make equal ones). */
+    private Prepared prepared;
+
+    /** The variables in order of first appearance, and the tree compiled against them. */
+    private record Prepared(List<Var> vars, Evaluator.Compiled compiled) {}
 
     public Formula(String id, String title, String symbol, String unit, Expr expr, String reference) {
         this.id = id;
@@ -35,10 +40,6 @@ public final class Formula {
         this.unit = unit;
         this.expr = expr;
         this.reference = reference;
-        Set<Var> found = new LinkedHashSet<>();
-        collect(expr, found);
-        this.vars = List.copyOf(found);
-        this.compiled = Evaluator.compile(expr, vars);
     }
 
     private Formula(Formula f, String symbol) {
@@ -48,8 +49,7 @@ public final class Formula {
         this.unit = f.unit;
         this.expr = f.expr;
         this.reference = f.reference;
-        this.vars = f.vars;
-        this.compiled = f.compiled;
+        this.prepared = f.prepared();
     }
 
     public String id() { return id; }
@@ -61,7 +61,19 @@ public final class Formula {
 
     /** The variables the expression refers to, in order of first appearance. */
     public List<Var> vars() {
-        return vars;
+        return prepared().vars();
+    }
+
+    private Prepared prepared() {
+        Prepared p = prepared;
+        if (p == null) {
+            Set<Var> found = new LinkedHashSet<>();
+            collect(expr, found);
+            List<Var> vars = List.copyOf(found);
+            p = new Prepared(vars, Evaluator.compile(expr, vars));
+            prepared = p;
+        }
+        return p;
     }
 
     private static void collect(Expr e, Set<Var> out) {
@@ -85,20 +97,6 @@ public final class Formula {
         return null;
     }
 
-    /** Variables named after the quantities they stand for, and their bindings: the terms of a sum or product. */
-    public record Terms(List<Var> vars, Step.Binding[] bindings) {}
-
-    public static Terms terms(String keyPrefix, String unit, List<Q> quantities) {
-        List<Var> vars = new ArrayList<>();
-        Step.Binding[] bindings = new Step.Binding[quantities.size()];
-        for (int i = 0; i < quantities.size(); i++) {
-            Var v = new Var(keyPrefix + i, quantities.get(i).symbol(), unit);
-            vars.add(v);
-            bindings[i] = bind(v, quantities.get(i));
-        }
-        return new Terms(List.copyOf(vars), bindings);
-    }
-
     public static Step.Binding bind(Var var, Q q) {
         return new Step.Binding(var, q);
     }
@@ -119,16 +117,9 @@ public final class Formula {
      * the id is read, never for the no-op trace of a sizing candidate.
      */
     public Q eval(Trace trace, String owner, String step, String form, Step.Binding... bindings) {
-        for (Step.Binding b : bindings) {
-            String expected = b.var().unit();
-            String given = b.q().unit();
-            // Units are mostly the same constant: compared by identity first (a call to equals per
-            // binding of every candidate's formulas was a visible share under the first JIT tier).
-            if (expected != given && !expected.equals(given)) {
-                throw new IllegalStateException(owner + step + ": " + b.var().symbol() + " must be in '" + b.var().unit()
-                        + "' but " + b.q().id() + " is in '" + b.q().unit() + "'");
-            }
-        }
+        requireUnits(owner, step, bindings);
+        Prepared p = prepared();
+        List<Var> vars = p.vars();
         double[] values = new double[vars.size()];
         for (int i = 0; i < values.length; i++) {
             Var v = vars.get(i);
@@ -137,7 +128,7 @@ public final class Formula {
             if (b == null) throw new IllegalStateException(owner + step + ": formula " + id + " needs " + vars.get(i).symbol() + " bound");
             values[i] = b.q().value();
         }
-        double value = compiled.evaluate(values, owner, step);
+        double value = p.compiled().evaluate(values, owner, step);
         Q q = new Q(owner, step, symbol, value, unit);
         if (trace.recording()) {
             // The bindings of variables of this formula, in the order given (mostly the variables' own).
@@ -159,5 +150,42 @@ public final class Formula {
                     List.of(n == used.length ? used : java.util.Arrays.copyOf(used, n)), value, form, reference));
         }
         return q;
+    }
+
+    /**
+     * As {@link #eval(Trace, String, String, Step.Binding...)}, valued by the compiled tree of
+     * twin: the formula the same function made over other variables, kept for the no-op trace.
+     * Both trees have the same operations in the same order, so the value is the one this
+     * formula's own tree gives (and the one a sizing candidate got). The bindings are of this
+     * formula's variables, one each, in the order of the twin's.
+     */
+    public Q evalLike(Formula twin, Trace trace, String stepId, String form, Step.Binding[] bindings) {
+        List<Var> twinVars = twin.vars();
+        if (twinVars.size() != bindings.length) {
+            throw new IllegalStateException(stepId + ": formula " + id + " has " + twinVars.size() + " variables, "
+                    + bindings.length + " bound");
+        }
+        requireUnits(stepId, "", bindings);
+        double[] values = new double[bindings.length];
+        for (int i = 0; i < values.length; i++) values[i] = bindings[i].q().value();
+        double value = twin.prepared().compiled().evaluate(values, stepId, "");
+        Q q = new Q(stepId, symbol, value, unit);
+        if (trace.recording()) {
+            trace.add(new Step.Formula(stepId, title, symbol, unit, id, expr, List.of(bindings), value, form, reference));
+        }
+        return q;
+    }
+
+    private static void requireUnits(String owner, String step, Step.Binding[] bindings) {
+        for (Step.Binding b : bindings) {
+            String expected = b.var().unit();
+            String given = b.q().unit();
+            // Units are mostly the same constant: compared by identity first (a call to equals per
+            // binding of every candidate's formulas was a visible share under the first JIT tier).
+            if (expected != given && !expected.equals(given)) {
+                throw new IllegalStateException(owner + step + ": " + b.var().symbol() + " must be in '" + b.var().unit()
+                        + "' but " + b.q().id() + " is in '" + b.q().unit() + "'");
+            }
+        }
     }
 }

@@ -1,6 +1,7 @@
 package org.feedernote.formula;
 
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
@@ -14,10 +15,11 @@ import org.feedernote.trace.Trace;
 /**
  * Formulas over a varying number of terms: a sum of drops along a path, a product of correction
  * factors, impedances in series. With a recording trace the variables carry the symbols of the
- * quantities they stand for, as the working shows them. With the no-op trace the same formula
- * over anonymous variables is made once per kind, result symbol and number of terms and kept:
- * the same expression with its operations in the same order, hence the same value, without
- * building a formula for every sizing candidate. One per engine; safe to share between threads.
+ * quantities they stand for, as the working shows them. The same formula over anonymous
+ * variables is made once per kind, result symbol and number of terms and kept: the same
+ * expression with its operations in the same order, hence the same value. It values every
+ * evaluation, so that neither a sizing candidate nor a recorded step compiles a tree of its own.
+ * One per engine; safe to share between threads.
  */
 public final class TermFormulas {
     /**
@@ -49,16 +51,28 @@ public final class TermFormulas {
      */
     public Q eval(Trace trace, String stepId, String form, String kind, String symbol, String keyPrefix, String unit,
                   List<Q> quantities, Function<List<Var>, Formula> make) {
-        if (trace.recording()) {
-            Formula.Terms terms = Formula.terms(keyPrefix, unit, quantities);
-            return make.apply(terms.vars()).eval(trace, stepId, form, terms.bindings());
-        }
         Made m = made.computeIfAbsent(new Key(kind, symbol, quantities.size()), k -> {
             List<Var> vars = new ArrayList<>();
             for (int i = 0; i < k.terms(); i++) vars.add(new Var(keyPrefix + i, keyPrefix + i, unit));
-            return new Made(make.apply(List.copyOf(vars)), List.copyOf(vars));
+            Formula twin = make.apply(List.copyOf(vars));
+            if (!twin.vars().equals(vars)) {
+                throw new IllegalStateException(kind + ": the formula must use each term once, in order");
+            }
+            return new Made(twin, List.copyOf(vars));
         });
         Step.Binding[] bindings = new Step.Binding[quantities.size()];
+        if (trace.recording()) {
+            // Variables named after the quantities they stand for, as the working shows them; the
+            // formula over them is valued by the kept twin, the same tree over anonymous variables.
+            List<Var> shown = new ArrayList<>(bindings.length);
+            for (int i = 0; i < bindings.length; i++) {
+                Q q = quantities.get(i);
+                Var v = new Var(m.vars().get(i).key(), q.symbol(), unit);
+                shown.add(v);
+                bindings[i] = Formula.bind(v, q);
+            }
+            return make.apply(Collections.unmodifiableList(shown)).evalLike(m.formula(), trace, stepId, form, bindings);
+        }
         for (int i = 0; i < bindings.length; i++) bindings[i] = Formula.bind(m.vars().get(i), quantities.get(i));
         return m.formula().eval(trace, stepId, form, bindings);
     }
