@@ -90,11 +90,19 @@ public final class Formula {
         return new Formula(this, resultSymbol);
     }
 
-    /** The binding of a variable: by identity first (catalogue variables are shared constants), then by key. */
-    private static Step.Binding find(Step.Binding[] bindings, Var v) {
-        for (Step.Binding b : bindings) if (b.var() == v) return b;
-        for (Step.Binding b : bindings) if (b.var().key().equals(v.key())) return b;
-        return null;
+    /**
+     * The index of the binding of a variable, or -1: by identity first (catalogue variables are
+     * shared constants), then by key; the identity search starts at from, where bindings given in
+     * the order of the variables (perhaps rotated, the factor last) have it.
+     */
+    private static int find(Step.Binding[] bindings, Var v, int from) {
+        int n = bindings.length;
+        for (int k = 0; k < n; k++) {
+            int j = from + k < n ? from + k : from + k - n;
+            if (bindings[j].var() == v) return j;
+        }
+        for (int j = 0; j < n; j++) if (bindings[j].var().key().equals(v.key())) return j;
+        return -1;
     }
 
     public static Step.Binding bind(Var var, Q q) {
@@ -121,12 +129,17 @@ public final class Formula {
         Prepared p = prepared();
         List<Var> vars = p.vars();
         double[] values = new double[vars.size()];
+        // Which bindings were found by identity: those are of this formula without asking again.
+        boolean[] identical = trace.recording() ? new boolean[bindings.length] : null;
+        int next = 0;
         for (int i = 0; i < values.length; i++) {
             Var v = vars.get(i);
             // Bindings are mostly given in the order of the variables: a sum over many terms stays linear.
-            Step.Binding b = i < bindings.length && bindings[i].var() == v ? bindings[i] : find(bindings, v);
-            if (b == null) throw new IllegalStateException(owner + step + ": formula " + id + " needs " + vars.get(i).symbol() + " bound");
-            values[i] = b.q().value();
+            int j = next < bindings.length && bindings[next].var() == v ? next : find(bindings, v, next);
+            if (j < 0) throw new IllegalStateException(owner + step + ": formula " + id + " needs " + vars.get(i).symbol() + " bound");
+            values[i] = bindings[j].q().value();
+            if (identical != null && bindings[j].var() == v) identical[j] = true;
+            next = j + 1;
         }
         double value = p.compiled().evaluate(values, owner, step);
         Q q = new Q(owner, step, symbol, value, unit);
@@ -136,12 +149,10 @@ public final class Formula {
             int n = 0;
             Set<Var> known = null;
             for (int i = 0; i < bindings.length; i++) {
-                Var v = bindings[i].var();
-                boolean ofThis;
-                if (i < vars.size() && vars.get(i) == v) {
-                    ofThis = true;
-                } else {
+                boolean ofThis = identical[i];
+                if (!ofThis) {
                     if (known == null && vars.size() > 8) known = new java.util.HashSet<>(vars);
+                    Var v = bindings[i].var();
                     ofThis = known != null ? known.contains(v) : vars.contains(v);
                 }
                 if (ofThis) used[n++] = bindings[i];
