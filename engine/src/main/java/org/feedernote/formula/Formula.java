@@ -157,8 +157,8 @@ public final class Formula {
                 }
                 if (ofThis) used[n++] = bindings[i];
             }
-            trace.add(new Step.Formula(q.id(), title, symbol, unit, id, expr,
-                    List.of(n == used.length ? used : java.util.Arrays.copyOf(used, n)), value, form, reference));
+            trace.add(new Step.Formula(q, title, id, expr, List.of(n == used.length ? used : java.util.Arrays.copyOf(used, n)),
+                    form, reference));
         }
         return q;
     }
@@ -182,7 +182,7 @@ public final class Formula {
         double value = twin.prepared().compiled().evaluate(values, stepId, "");
         Q q = new Q(stepId, symbol, value, unit);
         if (trace.recording()) {
-            trace.add(new Step.Formula(stepId, title, symbol, unit, id, expr, List.of(bindings), value, form, reference));
+            trace.add(new Step.Formula(q, title, id, expr, List.of(bindings), form, reference));
         }
         return q;
     }

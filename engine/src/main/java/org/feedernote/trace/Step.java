@@ -45,14 +45,21 @@ public sealed interface Step {
     /** One variable of a formula bound to the quantity that supplied it. */
     record Binding(Var var, Q q) {}
 
-    /** A formula evaluated: the expression itself, its bindings and its value. */
-    record Formula(String id, String title, String symbol, String unit, String formulaId, Expr expr,
-                   List<Binding> bindings, double value, String form, String reference) implements Step {
+    /**
+     * A formula evaluated: the expression itself, its bindings and its result. The result keeps
+     * the step's id as the owner's and the step's own part, joined when first read.
+     */
+    record Formula(Q result, String title, String formulaId, Expr expr, List<Binding> bindings, String form,
+                   String reference) implements Step {
+        public String id() { return result.id(); }
+        public String symbol() { return result.symbol(); }
+        public String unit() { return result.unit(); }
+        public double value() { return result.value(); }
         public List<String> uses() {
             return bindings.stream().map(b -> b.q().id()).distinct().toList();
         }
         public String kind() { return "formula"; }
-        public Q q() { return new Q(id, symbol, value, unit); }
+        public Q q() { return result; }
     }
 
     /** A comparison of a value against its limit with the outcome. */
