@@ -24,9 +24,11 @@ import org.feedernote.trace.Trace;
 public final class CapacityData {
     private static final String NEXT_HIGHER = "next higher tabulated row (on the safe side)";
     private final ReferenceData data;
+    private final ReferenceTable devices;
 
     public CapacityData(ReferenceData data) {
         this.data = data;
+        this.devices = data.table("devices.csv");
     }
 
     /** The column of the capacity tables for a cable and method, or a data gap. */
@@ -264,8 +266,7 @@ public final class CapacityData {
     }
 
     public Step.Lookup k2(String id, DeviceKind kind) {
-        ReferenceTable t = data.table("devices.csv");
-        return new Step.Lookup(id, "Conventional tripping current factor", "k_2", t.value(kind.token(), "k2"), "", deviceRef(kind),
+        return new Step.Lookup(id, "Conventional tripping current factor", "k_2", devices.value(kind.token(), "k2"), "", deviceRef(kind),
                 kind.token(), "I_2 / I_n", "exact", List.of());
     }
 

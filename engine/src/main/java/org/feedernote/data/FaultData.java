@@ -12,13 +12,15 @@ import org.feedernote.trace.Trace;
 /** Lookups for the fault path: adiabatic constants and temperatures, let-through energy of class 3 MCBs. */
 public final class FaultData {
     private final ReferenceData data;
+    private final ReferenceTable adiabatic;
 
     public FaultData(ReferenceData data) {
         this.data = data;
+        this.adiabatic = data.table("adiabatic.csv");
     }
 
     private ReferenceTable adiabatic() {
-        return data.table("adiabatic.csv");
+        return adiabatic;
     }
 
     public Step.Lookup materialConstant(String id, Conductor c) {

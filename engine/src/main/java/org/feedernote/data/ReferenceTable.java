@@ -27,7 +27,10 @@ public final class ReferenceTable {
     private final Map<String, String> header;
     private final List<String> columns;
     private final Map<String, Map<String, String>> rows;
-    private final Map<String, Map<String, Double>> numbers = new java.util.HashMap<>();
+    /** The numbers of each row, by the column's place in columns (null where a cell is empty or text). */
+    private final Map<String, Double[]> numbers = new java.util.HashMap<>();
+    /** The column names, for finding a column's place. */
+    private final String[] columnNames;
 
     private ReferenceTable(TableRef ref, Map<String, String> header, List<String> columns,
                            Map<String, Map<String, String>> rows) {
@@ -35,11 +38,13 @@ public final class ReferenceTable {
         this.header = header;
         this.columns = columns;
         this.rows = rows;
+        this.columnNames = columns.toArray(new String[0]);
         for (var r : rows.entrySet()) {
-            Map<String, Double> parsed = new java.util.HashMap<>();
-            for (var c : r.getValue().entrySet()) {
+            Double[] parsed = new Double[columnNames.length];
+            for (int i = 0; i < columnNames.length; i++) {
+                String cell = r.getValue().get(columnNames[i]);
                 try {
-                    if (!c.getValue().isEmpty()) parsed.put(c.getKey(), Double.parseDouble(c.getValue()));
+                    if (cell != null && !cell.isEmpty()) parsed[i] = Double.parseDouble(cell);
                 } catch (NumberFormatException text) {
                     // a text column (a standard's name, a list of ratings)
                 }
@@ -102,8 +107,21 @@ public final class ReferenceTable {
 
     /** The value at (row, column), or null where the table has none. */
     public Double value(String row, String column) {
-        Map<String, Double> r = numbers.get(row);
-        return r == null ? null : r.get(column);
+        Double[] r = numbers.get(row);
+        if (r == null) return null;
+        int c = place(column);
+        return c < 0 ? null : r[c];
+    }
+
+    /**
+     * The place of a column, or -1. A table has a few columns and callers name them by constants:
+     * compared by identity first, a lookup hashes nothing.
+     */
+    private int place(String column) {
+        String[] names = columnNames;
+        for (int i = 0; i < names.length; i++) if (names[i] == column) return i;
+        for (int i = 0; i < names.length; i++) if (names[i].equals(column)) return i;
+        return -1;
     }
 
     public String text(String row, String column) {

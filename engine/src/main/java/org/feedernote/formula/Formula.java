@@ -129,8 +129,8 @@ public final class Formula {
         Prepared p = prepared();
         List<Var> vars = p.vars();
         double[] values = new double[vars.size()];
-        // Which bindings were found by identity: those are of this formula without asking again.
-        boolean[] identical = trace.recording() ? new boolean[bindings.length] : null;
+        // Bindings found by identity are of this formula: when every binding was, none need be asked about.
+        int identical = 0;
         int next = 0;
         for (int i = 0; i < values.length; i++) {
             Var v = vars.get(i);
@@ -138,24 +138,22 @@ public final class Formula {
             int j = next < bindings.length && bindings[next].var() == v ? next : find(bindings, v, next);
             if (j < 0) throw new IllegalStateException(owner + step + ": formula " + id + " needs " + vars.get(i).symbol() + " bound");
             values[i] = bindings[j].q().value();
-            if (identical != null && bindings[j].var() == v) identical[j] = true;
+            if (bindings[j].var() == v) identical++;
             next = j + 1;
         }
         double value = p.compiled().evaluate(values, owner, step);
         Q q = new Q(owner, step, symbol, value, unit);
         if (trace.recording()) {
             // The bindings of variables of this formula, in the order given (mostly the variables' own).
-            Step.Binding[] used = new Step.Binding[bindings.length];
-            int n = 0;
-            Set<Var> known = null;
-            for (int i = 0; i < bindings.length; i++) {
-                boolean ofThis = identical[i];
-                if (!ofThis) {
-                    if (known == null && vars.size() > 8) known = new java.util.HashSet<>(vars);
-                    Var v = bindings[i].var();
-                    ofThis = known != null ? known.contains(v) : vars.contains(v);
+            Step.Binding[] used = bindings;
+            int n = bindings.length;
+            if (identical < bindings.length) {
+                used = new Step.Binding[bindings.length];
+                n = 0;
+                Set<Var> known = vars.size() > 8 ? new java.util.HashSet<>(vars) : null;
+                for (Step.Binding b : bindings) {
+                    if (known != null ? known.contains(b.var()) : vars.contains(b.var())) used[n++] = b;
                 }
-                if (ofThis) used[n++] = bindings[i];
             }
             trace.add(new Step.Formula(q, title, id, expr, List.of(n == used.length ? used : java.util.Arrays.copyOf(used, n)),
                     form, reference));

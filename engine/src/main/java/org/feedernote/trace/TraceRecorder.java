@@ -19,7 +19,8 @@ public final class TraceRecorder implements Trace {
     private final String title;
     private final String subtitle;
     private final List<Step> steps = new ArrayList<>();
-    private final List<TraceRecorder> children = new ArrayList<>();
+    /** Made with the first sub-section: most sections have none. */
+    private List<TraceRecorder> children;
     /** Set when the section is made: the steps are the section's from then on. */
     private boolean frozen;
     /** The section, once made. */
@@ -53,6 +54,7 @@ public final class TraceRecorder implements Trace {
         refuseIfFrozen();
         // A top-level section keeps its own index; its sub-sections share it.
         TraceRecorder child = new TraceRecorder(sectionId, sectionTitle, sectionSubtitle, id.isEmpty() ? null : index);
+        if (children == null) children = new ArrayList<>(4);
         children.add(child);
         return child;
     }
@@ -106,10 +108,13 @@ public final class TraceRecorder implements Trace {
         // The section takes the recorder's own lists, read-only, rather than copies of them: after
         // this the recorder refuses more steps and sections, so the section cannot change.
         frozen = true;
-        List<Section> sections = new ArrayList<>(children.size());
-        for (TraceRecorder c : children) sections.add(c.toSection());
-        section = new Section(id, title, subtitle, java.util.Collections.unmodifiableList(steps),
-                java.util.Collections.unmodifiableList(sections));
+        List<Section> sections = List.of();
+        if (children != null) {
+            List<Section> made = new ArrayList<>(children.size());
+            for (TraceRecorder c : children) made.add(c.toSection());
+            sections = java.util.Collections.unmodifiableList(made);
+        }
+        section = new Section(id, title, subtitle, java.util.Collections.unmodifiableList(steps), sections);
         return section;
     }
 
