@@ -43,6 +43,22 @@ public final class Engine {
     private final ImpedanceCalc impedance;
     private final CapacityData capacityData;
     private final TermFormulas termFormulas = new TermFormulas();
+    /** A board's phase sums over anonymous terms, by unit and which terms count a third (see phaseSum). */
+    private final Map<String, Formula> phaseSums = new java.util.concurrent.ConcurrentHashMap<>();
+
+    /**
+     * A board's sum for one phase, d · (x₁ + x₂/3 + …): three-phase loads contribute a third to
+     * each phase. Its variables, in order of first appearance: d, then the terms.
+     */
+    private static Formula phaseSumFormula(String title, String symbol, String unit, List<Var> terms, List<Boolean> third) {
+        Expr sum = null;
+        for (int i = 0; i < terms.size(); i++) {
+            Expr e = third.get(i) ? Expr.div(Expr.v(terms.get(i)), Expr.n(3)) : Expr.v(terms.get(i));
+            sum = sum == null ? e : Expr.add(sum, e);
+        }
+        return new Formula("board-phase-sum", title, symbol, unit, Expr.mul(Expr.v(DemandFormulas.D), sum),
+                "P and Q summed separately (complex power); three-phase loads contribute a third to each phase; times the board's diversity");
+    }
 
     public Engine(ReferenceData data) {
         this.data = data;
@@ -508,24 +524,28 @@ public final class Engine {
 
         Q phaseSum(Trace t, String id, String title, String symbol, String unit, Q d, List<Q> terms, List<Boolean> third) {
             if (terms.isEmpty()) return null;
-            List<Var> vars = new ArrayList<>();
-            List<Step.Binding> bindings = new ArrayList<>();
-            Expr sum = null;
+            StringBuilder shape = new StringBuilder(unit).append(' ');
+            for (Boolean b : third) shape.append(b ? '3' : '1');
+            // The same sum over anonymous terms, kept for each shape: it values the shown one.
+            Formula twin = phaseSums.computeIfAbsent(shape.toString(), k -> {
+                List<Var> anonymous = new ArrayList<>();
+                for (int i = 0; i < terms.size(); i++) anonymous.add(new Var("x" + i, "x" + i, unit));
+                return phaseSumFormula("", "", unit, anonymous, third);
+            });
+            List<Var> vars = new ArrayList<>(terms.size() + 1);
+            vars.add(DemandFormulas.D);
+            Step.Binding[] bindings = new Step.Binding[terms.size() + 1];
             for (int i = 0; i < terms.size(); i++) {
                 Q term = terms.get(i);
                 Var v = new Var("x" + i, term.symbol(), unit);
                 vars.add(v);
-                bindings.add(bind(v, term));
-                Expr e = third.get(i) ? Expr.div(Expr.v(v), Expr.n(3)) : Expr.v(v);
-                sum = sum == null ? e : Expr.add(sum, e);
+                bindings[i] = bind(v, term);
             }
-            bindings.add(bind(DemandFormulas.D, d));
-            Formula f = new Formula("board-phase-sum", title, symbol, unit, Expr.mul(Expr.v(DemandFormulas.D), sum),
-                    "P and Q summed separately (complex power); three-phase loads contribute a third to each phase; times the board's diversity");
-            return f.eval(t, id, "", bindings.toArray(new Step.Binding[0]));
+            bindings[terms.size()] = bind(DemandFormulas.D, d);
+            return phaseSumFormula(title, symbol, unit, vars.subList(1, vars.size()), third).evalLike(twin, vars, t, id, "", bindings);
         }
 
-        // ---------------- one circuit: device, capacity, impedance, drop, checks ----------------
+        // ---------------- one circuit: device, capacity, impedance, drop, checks ----------------        // ---------------- one circuit: device, capacity, impedance, drop, checks ----------------
 
         /** Circuits in the order they are calculated: board by board from the origin. */
         List<Circuit> order() {

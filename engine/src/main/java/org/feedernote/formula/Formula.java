@@ -163,20 +163,32 @@ public final class Formula {
 
     /**
      * As {@link #eval(Trace, String, String, Step.Binding...)}, valued by the compiled tree of
-     * twin: the formula the same function made over other variables, kept for the no-op trace.
-     * Both trees have the same operations in the same order, so the value is the one this
-     * formula's own tree gives (and the one a sizing candidate got). The bindings are of this
-     * formula's variables, one each, in the order of the twin's.
+     * twin: the formula the same function made over other variables, kept so that a formula made
+     * afresh for each use (a sum over a path's terms) is not compiled each time. Both trees have
+     * the same operations in the same order, so the value is the one this formula's own tree
+     * gives (and the one a sizing candidate got).
+     *
+     * @param vars     this formula's variables in the order of the twin's (as the function made them)
+     * @param bindings one for each of vars, by identity, in any order; recorded in the order given
      */
-    public Q evalLike(Formula twin, Trace trace, String stepId, String form, Step.Binding[] bindings) {
+    public Q evalLike(Formula twin, List<Var> vars, Trace trace, String stepId, String form, Step.Binding[] bindings) {
         List<Var> twinVars = twin.vars();
-        if (twinVars.size() != bindings.length) {
+        if (twinVars.size() != vars.size() || bindings.length != vars.size()) {
             throw new IllegalStateException(stepId + ": formula " + id + " has " + twinVars.size() + " variables, "
-                    + bindings.length + " bound");
+                    + vars.size() + " named and " + bindings.length + " bound");
         }
         requireUnits(stepId, "", bindings);
         double[] values = new double[bindings.length];
-        for (int i = 0; i < values.length; i++) values[i] = bindings[i].q().value();
+        int next = 0;
+        for (int i = 0; i < values.length; i++) {
+            Var v = vars.get(i);
+            int j = next < bindings.length && bindings[next].var() == v ? next : find(bindings, v, next);
+            if (j < 0 || bindings[j].var() != v) {
+                throw new IllegalStateException(stepId + ": formula " + id + " needs " + v.symbol() + " bound");
+            }
+            values[i] = bindings[j].q().value();
+            next = j + 1;
+        }
         double value = twin.prepared().compiled().evaluate(values, stepId, "");
         Q q = new Q(stepId, symbol, value, unit);
         if (trace.recording()) {

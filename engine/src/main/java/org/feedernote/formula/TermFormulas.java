@@ -71,7 +71,8 @@ public final class TermFormulas {
                 shown.add(v);
                 bindings[i] = Formula.bind(v, q);
             }
-            return make.apply(Collections.unmodifiableList(shown)).evalLike(m.formula(), trace, stepId, form, bindings);
+            List<Var> vars = Collections.unmodifiableList(shown);
+            return make.apply(vars).evalLike(m.formula(), vars, trace, stepId, form, bindings);
         }
         for (int i = 0; i < bindings.length; i++) bindings[i] = Formula.bind(m.vars().get(i), quantities.get(i));
         return m.formula().eval(trace, stepId, form, bindings);
