@@ -137,6 +137,10 @@ public final class Engine {
         }
     }
 
+    private static <V> Map<String, V> perCircuit(int circuits) {
+        return new HashMap<>(Math.max(16, (int) (circuits / 0.75f) + 1));
+    }
+
     /** The state of one calculation; discarded when it returns. */
     final class Run {
         final Installation inst;
@@ -145,17 +149,17 @@ public final class Engine {
         final Map<String, List<Circuit>> outgoing = new HashMap<>();
         final Map<String, Circuit> feederOf = new HashMap<>();
         final List<String> boardOrder = new ArrayList<>();
-        final Map<String, Trace> circuitTrace = new HashMap<>();
-        final Map<String, LoadDemand> demand = new HashMap<>();
+        final Map<String, Trace> circuitTrace;
+        final Map<String, LoadDemand> demand;
         final Map<String, PhaseDemand> boardDemand = new HashMap<>();
-        final Map<String, Q> designCurrent = new HashMap<>();
-        final Map<String, Q> powerFactor = new HashMap<>();
+        final Map<String, Q> designCurrent;
+        final Map<String, Q> powerFactor;
         final Map<String, Q> neutral = new HashMap<>();
         final Map<String, List<Q>> phaseCurrents = new HashMap<>();
-        final Map<String, String> connection = new HashMap<>();
+        final Map<String, String> connection;
         final Map<String, Q> boardDrop = new HashMap<>();
-        final Map<String, CircuitResult> results = new HashMap<>();
-        final Map<String, Circuit> originals = new HashMap<>();
+        final Map<String, CircuitResult> results;
+        final Map<String, Circuit> originals;
 
         Q u;
         Q u0;
@@ -169,6 +173,16 @@ public final class Engine {
         Run(Installation inst, TraceRecorder recorder, Trace root) {
             this.inst = inst;
             this.root = root;
+            // Maps by circuit made for every circuit at once rather than grown while the run fills them.
+            int n = inst.circuits().size();
+            circuitTrace = perCircuit(n);
+            demand = perCircuit(n);
+            designCurrent = perCircuit(n);
+            powerFactor = perCircuit(n);
+            connection = perCircuit(n);
+            results = perCircuit(n);
+            originals = perCircuit(n);
+            calculated = perCircuit(n);
         }
 
         void calculate() {
@@ -230,7 +244,7 @@ public final class Engine {
         private record Recorded(CircuitResult calculated, CircuitResult result) {}
 
         /** The results of the final pass as calculated, for the circuits below (results adds the governing check). */
-        private final Map<String, CircuitResult> calculated = new HashMap<>();
+        private final Map<String, CircuitResult> calculated;
 
         private Recorded record(Sizing sizing, Circuit original, Circuit c) {
             Trace ct = circuitTrace.get(c.id());
