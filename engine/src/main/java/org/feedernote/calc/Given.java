@@ -42,21 +42,27 @@ final class Given {
     /** As {@link #input(Trace, String, String, String, double, String, String)} for the step owner + step, key path pathOwner + pathStep. */
     static Q input(Trace t, String owner, String step, String title, String symbol, double value, String unit, String pathOwner,
                    String pathStep) {
-        if (!t.recording()) return new Q(owner, step, symbol, value, unit);
-        return input(t, owner + step, title, symbol, value, unit, pathOwner + pathStep);
+        Q q = new Q(owner, step, symbol, value, unit);
+        if (t.recording()) t.add(new Step.Input(q, title, pathOwner, pathStep, Step.Origin.GIVEN, "design input"));
+        return q;
     }
 
     /** As {@link #setting(Trace, String, String, String, Setting, String, String)} for the step owner + step. */
     static Q setting(Trace t, String owner, String step, String title, String symbol, Setting<Double> setting, String unit,
                      String defaultReference) {
-        if (!t.recording()) return new Q(owner, step, symbol, setting.value(), unit);
-        return setting(t, owner + step, title, symbol, setting, unit, defaultReference);
+        Q q = new Q(owner, step, symbol, setting.value(), unit);
+        if (t.recording()) {
+            t.add(new Step.Input(q, title, setting.path(), "", setting.given() ? Step.Origin.GIVEN : Step.Origin.DEFAULT,
+                    setting.given() ? "design input" : defaultReference));
+        }
+        return q;
     }
 
     /** As {@link #derived(Trace, String, String, String, double, String, String)} for the step owner + step. */
     static Q derived(Trace t, String owner, String step, String title, String symbol, double value, String unit, String reference) {
-        if (!t.recording()) return new Q(owner, step, symbol, value, unit);
-        return derived(t, owner + step, title, symbol, value, unit, reference);
+        Q q = new Q(owner, step, symbol, value, unit);
+        if (t.recording()) t.add(new Step.Input(q, title, "", "", Step.Origin.DERIVED, reference));
+        return q;
     }
 
     static Q lookup(Trace t, Step.Lookup step) {

@@ -19,12 +19,27 @@ public sealed interface Step {
     /** Whether an input value was given or defaulted. */
     enum Origin { GIVEN, DEFAULT, DERIVED }
 
-    /** A value from the design input, or the stated default where the input was silent. */
-    record Input(String id, String title, String symbol, double value, String unit, String keyPath,
-                 Origin origin, String reference) implements Step {
+    /**
+     * A value from the design input, or the stated default where the input was silent. The id
+     * (in the result) and the key path are each kept as the owner's part and the step's, joined
+     * where they are read.
+     */
+    record Input(Q result, String title, String keyPathOwner, String keyPathStep, Origin origin, String reference)
+            implements Step {
+        public Input(String id, String title, String symbol, double value, String unit, String keyPath, Origin origin,
+                     String reference) {
+            this(new Q(id, symbol, value, unit), title, keyPath, "", origin, reference);
+        }
+
+        public String id() { return result.id(); }
+        public String symbol() { return result.symbol(); }
+        public double value() { return result.value(); }
+        public String unit() { return result.unit(); }
+        /** Where in the design input the value was given (or would have been), or "" for a derived value. */
+        public String keyPath() { return keyPathStep.isEmpty() ? keyPathOwner : keyPathOwner + keyPathStep; }
         public List<String> uses() { return List.of(); }
         public String kind() { return "input"; }
-        public Q q() { return new Q(id, symbol, value, unit); }
+        public Q q() { return result; }
     }
 
     /** A tabulated value, with the table, the row and column used, and the lookup method. */
