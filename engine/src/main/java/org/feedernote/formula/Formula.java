@@ -155,7 +155,7 @@ public final class Formula {
                     if (known != null ? known.contains(b.var()) : vars.contains(b.var())) used[n++] = b;
                 }
             }
-            trace.add(new Step.Formula(q, title, id, expr, List.of(n == used.length ? used : java.util.Arrays.copyOf(used, n)),
+            trace.add(new Step.Formula(q, title, id, expr, new Recorded(n == used.length ? used : java.util.Arrays.copyOf(used, n)),
                     form, reference));
         }
         return q;
@@ -192,7 +192,7 @@ public final class Formula {
         double value = twin.prepared().compiled().evaluate(values, stepId, "");
         Q q = new Q(stepId, symbol, value, unit);
         if (trace.recording()) {
-            trace.add(new Step.Formula(q, title, id, expr, List.of(bindings), form, reference));
+            trace.add(new Step.Formula(q, title, id, expr, new Recorded(bindings), form, reference));
         }
         return q;
     }
@@ -208,5 +208,21 @@ public final class Formula {
                         + "' but " + b.q().id() + " is in '" + b.q().unit() + "'");
             }
         }
+    }
+
+    /**
+     * A recorded step's bindings: a read-only list over the array the formula was evaluated with,
+     * which nothing writes after the call (a varargs array, or one its caller made for the call),
+     * rather than a copy of it.
+     */
+    private static final class Recorded extends java.util.AbstractList<Step.Binding> implements java.util.RandomAccess {
+        private final Step.Binding[] bindings;
+
+        Recorded(Step.Binding[] bindings) {
+            this.bindings = bindings;
+        }
+
+        @Override public Step.Binding get(int index) { return bindings[index]; }
+        @Override public int size() { return bindings.length; }
     }
 }
