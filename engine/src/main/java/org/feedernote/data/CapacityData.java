@@ -109,7 +109,8 @@ public final class CapacityData {
             throw new DataGapException(table.ref().citation() + " has no column for " + label
                     + " in the packaged data; give a copper cable or another method");
         }
-        return new Column(table, column, label);
+        // Interned, as the table's column names are: every candidate's lookup finds it by identity.
+        return new Column(table, column.intern(), label);
     }
 
     /** A column and a size (equals and hashCode written out, as ColumnKey's). */

@@ -38,7 +38,9 @@ public final class ReferenceTable {
         this.header = header;
         this.columns = columns;
         this.rows = rows;
-        this.columnNames = columns.toArray(new String[0]);
+        // Interned, as the names callers pass are (literals, and the capacity columns CapacityData
+        // interns): a column is then found by identity.
+        this.columnNames = columns.stream().map(String::intern).toArray(String[]::new);
         for (var r : rows.entrySet()) {
             Double[] parsed = new Double[columnNames.length];
             for (int i = 0; i < columnNames.length; i++) {
@@ -114,8 +116,8 @@ public final class ReferenceTable {
     }
 
     /**
-     * The place of a column, or -1. A table has a few columns and callers name them by constants:
-     * compared by identity first, a lookup hashes nothing.
+     * The place of a column, or -1. A table has a few columns (at most 15) and callers name them
+     * by interned strings: compared by identity first, a lookup hashes nothing.
      */
     private int place(String column) {
         String[] names = columnNames;
