@@ -72,8 +72,7 @@ final class Given {
 
     static Q lookupUsing(Trace t, Step.Lookup step, List<String> uses) {
         if (!t.recording()) return step.q();
-        Step.Lookup s = new Step.Lookup(step.id(), step.title(), step.symbol(), step.value(), step.unit(), step.table(),
-                step.row(), step.column(), step.method(), uses);
+        Step.Lookup s = new Step.Lookup(step.result(), step.title(), step.table(), step.row(), step.column(), step.method(), uses);
         t.add(s);
         return s.q();
     }

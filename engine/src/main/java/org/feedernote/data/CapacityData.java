@@ -202,8 +202,7 @@ public final class CapacityData {
         boolean exact = Math.abs(Double.parseDouble(chosen) - key) < 1e-9;
         Step.Lookup s = table.lookup(id, title, symbol, "", chosen, column, chosen + " " + keyUnit
                 + (exact ? "" : " (" + what + " " + num(key) + " " + keyUnit + ")"), columnLabel);
-        return new Step.Lookup(s.id(), s.title(), s.symbol(), s.value(), s.unit(), s.table(), s.row(), s.column(),
-                exact ? "exact" : NEXT_HIGHER, s.uses());
+        return new Step.Lookup(s.result(), s.title(), s.table(), s.row(), s.column(), exact ? "exact" : NEXT_HIGHER, s.uses());
     }
 
     private static String num(double v) {

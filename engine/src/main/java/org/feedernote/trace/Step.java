@@ -43,11 +43,20 @@ public sealed interface Step {
     }
 
     /** A tabulated value, with the table, the row and column used, and the lookup method. */
-    record Lookup(String id, String title, String symbol, double value, String unit, TableRef table,
-                  String row, String column, String method, List<String> uses) implements Step {
+    record Lookup(Q result, String title, TableRef table, String row, String column, String method, List<String> uses)
+            implements Step {
+        public Lookup(String id, String title, String symbol, double value, String unit, TableRef table, String row,
+                      String column, String method, List<String> uses) {
+            this(new Q(id, symbol, value, unit), title, table, row, column, method, uses);
+        }
+
+        public String id() { return result.id(); }
+        public String symbol() { return result.symbol(); }
+        public double value() { return result.value(); }
+        public String unit() { return result.unit(); }
         public String reference() { return table.citation(); }
         public String kind() { return "lookup"; }
-        public Q q() { return new Q(id, symbol, value, unit); }
+        public Q q() { return result; }
     }
 
     /** A correction or derating factor applied by a rule. */
