@@ -933,9 +933,9 @@ public final class Engine {
             boolean second = in.value() <= iz.value() + 1e-9;
             if (t.recording()) {
                 t.add(new Step.Check(id + "1", "Coordination: I_b ≤ I_n", "capacity", relabel(ib, ib.symbol()), "≤", relabel(in, "I_n"),
-                        first, "IEC 60364-4-43:2008, 433.1", List.of(ib.id(), in.id())));
+                        first, "IEC 60364-4-43:2008, 433.1"));
                 t.add(new Step.Check(id + "2", "Coordination: I_n ≤ I_z", "capacity", relabel(in, "I_n"), "≤", relabel(iz, "I_z"),
-                        second, "IEC 60364-4-43:2008, 433.1", List.of(in.id(), iz.id())));
+                        second, "IEC 60364-4-43:2008, 433.1"));
             }
             if (!first) return new CheckResult("capacity", "Ib ≤ In ≤ Iz", false, in.value(), ib.value(), Units.A, true, id + "1");
             return new CheckResult("capacity", "Ib ≤ In ≤ Iz", second, iz.value(), in.value(), Units.A, true, id + "2");
@@ -1036,7 +1036,7 @@ public final class Engine {
         CheckResult check(Trace t, String id, String name, String title, Q value, Q limit, String reference) {
             boolean pass = value.value() <= limit.value() + 1e-12;
             if (t.recording()) {
-                t.add(new Step.Check(id, title, name, value, "≤", limit, pass, reference, List.of(value.id(), limit.id())));
+                t.add(new Step.Check(id, title, name, value, "≤", limit, pass, reference));
             }
             return new CheckResult(name, title, pass, value.value(), limit.value(), limit.unit(), false, id);
         }

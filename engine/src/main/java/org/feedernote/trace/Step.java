@@ -86,9 +86,10 @@ public sealed interface Step {
         public Q q() { return result; }
     }
 
-    /** A comparison of a value against its limit with the outcome. */
+    /** A comparison of a value against its limit with the outcome; it uses the steps of the two. */
     record Check(String id, String title, String name, Q value, String comparison, Q limit, boolean pass,
-                 String reference, List<String> uses) implements Step {
+                 String reference) implements Step {
+        public List<String> uses() { return List.of(value.id(), limit.id()); }
         public String kind() { return "check"; }
     }
 
