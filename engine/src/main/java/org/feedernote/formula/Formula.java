@@ -8,6 +8,7 @@ import java.util.Set;
 import org.feedernote.expr.Evaluator;
 import org.feedernote.expr.Expr;
 import org.feedernote.expr.Var;
+import org.feedernote.trace.ArrayView;
 import org.feedernote.trace.Q;
 import org.feedernote.trace.Step;
 import org.feedernote.trace.Trace;
@@ -155,7 +156,7 @@ public final class Formula {
                     if (known != null ? known.contains(b.var()) : vars.contains(b.var())) used[n++] = b;
                 }
             }
-            trace.add(new Step.Formula(q, title, id, expr, new Recorded(n == used.length ? used : java.util.Arrays.copyOf(used, n)),
+            trace.add(new Step.Formula(q, title, id, expr, new ArrayView<>(used, n),
                     form, reference));
         }
         return q;
@@ -192,7 +193,7 @@ public final class Formula {
         double value = twin.prepared().compiled().evaluate(values, stepId, "");
         Q q = new Q(stepId, symbol, value, unit);
         if (trace.recording()) {
-            trace.add(new Step.Formula(q, title, id, expr, new Recorded(bindings), form, reference));
+            trace.add(new Step.Formula(q, title, id, expr, new ArrayView<>(bindings, bindings.length), form, reference));
         }
         return q;
     }
@@ -208,21 +209,5 @@ public final class Formula {
                         + "' but " + b.q().id() + " is in '" + b.q().unit() + "'");
             }
         }
-    }
-
-    /**
-     * A recorded step's bindings: a read-only list over the array the formula was evaluated with,
-     * which nothing writes after the call (a varargs array, or one its caller made for the call),
-     * rather than a copy of it.
-     */
-    private static final class Recorded extends java.util.AbstractList<Step.Binding> implements java.util.RandomAccess {
-        private final Step.Binding[] bindings;
-
-        Recorded(Step.Binding[] bindings) {
-            this.bindings = bindings;
-        }
-
-        @Override public Step.Binding get(int index) { return bindings[index]; }
-        @Override public int size() { return bindings.length; }
     }
 }

@@ -18,7 +18,10 @@ public final class TraceRecorder implements Trace {
     private final String id;
     private final String title;
     private final String subtitle;
-    private final List<Step> steps = new ArrayList<>();
+    /** The steps so far, in the first size places (an array, so that the section can be a view of it). */
+    private Step[] steps = NONE;
+    private int size;
+    private static final Step[] NONE = new Step[0];
     /** Made with the first sub-section: most sections have none. */
     private List<TraceRecorder> children;
     /** Set when the section is made: the steps are the section's from then on. */
@@ -45,7 +48,8 @@ public final class TraceRecorder implements Trace {
         if (IDS_CHECKED && !index.add(step.id())) {
             throw new IllegalStateException("step id recorded twice: " + step.id());
         }
-        steps.add(step);
+        if (size == steps.length) steps = java.util.Arrays.copyOf(steps, size == 0 ? 12 : size + (size >> 1));
+        steps[size++] = step;
     }
 
     @Override public boolean recording() { return true; }
@@ -114,7 +118,7 @@ public final class TraceRecorder implements Trace {
             for (TraceRecorder c : children) made.add(c.toSection());
             sections = java.util.Collections.unmodifiableList(made);
         }
-        section = new Section(id, title, subtitle, java.util.Collections.unmodifiableList(steps), sections);
+        section = new Section(id, title, subtitle, new ArrayView<>(steps, size), sections);
         return section;
     }
 
