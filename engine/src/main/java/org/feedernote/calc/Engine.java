@@ -765,7 +765,7 @@ public final class Engine {
                         bind(VoltageDropFormulas.COS_PHI, pf), bind(VoltageDropFormulas.SIN_PHI, sin), bind(VoltageDropFormulas.I, ib),
                         bind(VoltageDropFormulas.L, length));
                 dropExactPct = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.as("ΔU_exact").eval(vt, vid, "/dU_exact_pct", "exact form",
-                        bind(VoltageDropFormulas.DU, relabel(dropExact, "ΔU")), bind(VoltageDropFormulas.U_N, un)), "ΔU_exact");
+                        bind(VoltageDropFormulas.DU, dropExact), bind(VoltageDropFormulas.U_N, un)), "ΔU_exact");
             }
             boolean exactGoverns = inst.basis().voltageDropMethod().value() == DropMethod.EXACT && dropExactPct != null;
             if (inst.basis().voltageDropMethod().value() == DropMethod.EXACT) {
@@ -960,8 +960,8 @@ public final class Engine {
             Q thetaA = Given.setting(t, id, "/theta_a", ground ? "Ground temperature" : "Ambient air temperature", "θ_a", amb, Units.DEG_C,
                     "IEC 60364-5-52:2009, reference ambient");
             return ImpedanceFormulas.ESTIMATED_TEMPERATURE.eval(t, id, "/theta", "estimated", bind(ImpedanceFormulas.THETA_A, thetaA),
-                    bind(ImpedanceFormulas.THETA_MAX, relabel(thetaMax, "θ_max")), bind(ImpedanceFormulas.I_B, ib),
-                    bind(ImpedanceFormulas.I_REF, relabel(iz, "I_z")));
+                    bind(ImpedanceFormulas.THETA_MAX, thetaMax), bind(ImpedanceFormulas.I_B, ib),
+                    bind(ImpedanceFormulas.I_REF, iz));
         }
 
         Q cumulative(Trace t, Circuit c, Q own, Map<String, CircuitResult> done) {
@@ -1011,7 +1011,7 @@ public final class Engine {
                     bind(VoltageDropFormulas.X, z.x()), bind(VoltageDropFormulas.COS_ST, cosSt), bind(VoltageDropFormulas.SIN_ST, sinSt),
                     bind(VoltageDropFormulas.I_ST, ist), bind(VoltageDropFormulas.L, length));
             Q own = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.as("ΔU_st").eval(t, id, "/dU_pct", "",
-                    bind(VoltageDropFormulas.DU, relabel(du, "ΔU")), bind(VoltageDropFormulas.U_N, un)), "ΔU_st(" + c.id() + ")");
+                    bind(VoltageDropFormulas.DU, du), bind(VoltageDropFormulas.U_N, un)), "ΔU_st(" + c.id() + ")");
             List<Q> terms = new ArrayList<>();
             int phases = c.load().phases();
             for (Circuit f : feederPath(c.from())) {

@@ -123,7 +123,7 @@ final class FaultPath {
             Q zqLoop = DOUBLE.as("Z_QN").eval(t, id, "/Z_QN", "line-neutral loop of the network",
                     bind(Z, rel(magnitude(t, id + "/ZQ_mag", "Z_Q", r, x), "Z")));
             Q xr = rel(new Q(id + "/xr", "X/R", x.value() / r.value(), Units.NONE), "X/R");
-            rN = RESISTANCE_FROM_XR.as("R_QN").eval(t, id, "/R_QN", "", bind(Z, rel(zqLoop, "Z")), bind(XR, xr));
+            rN = RESISTANCE_FROM_XR.as("R_QN").eval(t, id, "/R_QN", "", bind(Z, zqLoop), bind(XR, xr));
             xN = REACTANCE_FROM_XR.as("X_QN").eval(t, id, "/X_QN", "", bind(R, rN), bind(XR, xr));
         }
         return atBoard(t, id, board, r, x, rN, xN, ze, ze);
@@ -132,10 +132,10 @@ final class FaultPath {
     private BoardFault atBoard(Trace t, String id, String board, Q r3, Q x3, Q rN, Q xN, Q ze, Q zeF) {
         Q z3 = magnitude(t, id + "/Z3", "|Z_3|", rel(r3, "R"), rel(x3, "X"));
         Q ik3 = THREE_PHASE_FAULT.as("I_k3(" + board + ")").eval(t, id, "/Ik3", "at board " + board, bind(C_MAX, cmax), bind(U, u),
-                bind(Z, rel(z3, "Z")));
+                bind(Z, z3));
         Q zn = magnitude(t, id + "/ZN", "|Z_N|", rel(rN, "R"), rel(xN, "X"));
         Q ik1 = SINGLE_PHASE_FAULT.as("I_k1(" + board + ")").eval(t, id, "/Ik1", "at board " + board, bind(C_MAX, cmax), bind(U0, u0),
-                bind(Z, rel(zn, "Z")));
+                bind(Z, zn));
         return new BoardFault(r3, x3, rN, xN, rel(ze, "Z_e(" + board + ")"), rel(zeF, "Z_ef(" + board + ")"), ik3, ik1);
     }
 
@@ -168,12 +168,12 @@ final class FaultPath {
 
     private Conductors conductors(Trace t, String id, Temperature at, Q theta, Q r20, Q cpc20, Q alpha, Q length, Q n) {
         Q r1km = RESISTANCE_AT.as(at.r1PerKm()).eval(t, id, at.r1PerKmStep(), at.lineForm(), bind(R20, r20), bind(ALPHA, alpha),
-                bind(THETA, rel(theta, "θ")));
+                bind(THETA, theta));
         Q r2km = RESISTANCE_AT.as(at.r2PerKm()).eval(t, id, at.r2PerKmStep(), at.cpcForm(), bind(R20, rel(cpc20, "R_20")),
-                bind(ALPHA, alpha), bind(THETA, rel(theta, "θ")));
-        Q r1 = LENGTH_RESISTANCE.as(at.r1()).eval(t, id, at.r1Step(), at.lengthForm(), bind(R_KM, rel(r1km, "R")), bind(L, length),
+                bind(ALPHA, alpha), bind(THETA, theta));
+        Q r1 = LENGTH_RESISTANCE.as(at.r1()).eval(t, id, at.r1Step(), at.lengthForm(), bind(R_KM, r1km), bind(L, length),
                 bind(N, n));
-        Q r2 = LENGTH_RESISTANCE.as(at.r2()).eval(t, id, at.r2Step(), at.lengthForm(), bind(R_KM, rel(r2km, "R")), bind(L, length),
+        Q r2 = LENGTH_RESISTANCE.as(at.r2()).eval(t, id, at.r2Step(), at.lengthForm(), bind(R_KM, r2km), bind(L, length),
                 bind(N, n));
         return new Conductors(r1, r2);
     }
@@ -186,10 +186,10 @@ final class FaultPath {
         Q r20 = rel(z.r20(), "R_20");
         Q alpha = rel(z.alpha(), "α_20");
         Q r1km20 = r20;
-        Q r1_20 = LENGTH_RESISTANCE.as("R_1,20").eval(t, id, "/R1_20", "line conductor at 20 °C", bind(R_KM, rel(r1km20, "R")),
+        Q r1_20 = LENGTH_RESISTANCE.as("R_1,20").eval(t, id, "/R1_20", "line conductor at 20 °C", bind(R_KM, r1km20),
                 bind(L, length), bind(N, n));
-        Q x1 = LENGTH_REACTANCE.as("X_1").eval(t, id, "/X1", "line conductor", bind(X_KM, rel(z.reactance(), "X")), bind(L, length));
-        Q xLoop = LOOP_REACTANCE.as("X_loop").eval(t, id, "/Xloop", "line and protective conductor", bind(X_KM, rel(z.reactance(), "X")),
+        Q x1 = LENGTH_REACTANCE.as("X_1").eval(t, id, "/X1", "line conductor", bind(X_KM, z.reactance()), bind(L, length));
+        Q xLoop = LOOP_REACTANCE.as("X_loop").eval(t, id, "/Xloop", "line and protective conductor", bind(X_KM, z.reactance()),
                 bind(L, length));
         Q thetaF = faults.finalTemperature(t, id, "/theta_f", cable.insulation());
         Q cpc20 = data.resistance20(t, id, "/R20_cpc", cable.conductor(), cable.cpc().mm2());
@@ -206,7 +206,7 @@ final class FaultPath {
         Q r12f = series(t, id + "/R12f", "Resistance of the loop, at θ_f", "R_1f + R_2f", r1f, r2f);
         Q zLoopF = magnitude(t, id + "/Zloopf", "Z_loop,f", rel(r12f, "R"), rel(xLoop, "X"));
         Q zsf = loop(t, id + "/Zsf", "Earth-fault loop impedance at the far end, at θ_f", "Z_sf", rel(at.zeF(), "Z_ef"), zLoopF);
-        Q ief = MIN_EARTH_FAULT.as("I_ef,min").eval(t, id, "/Ief", "far end", bind(C_MIN, cmin), bind(U0, u0), bind(ZS, rel(zsf, "Z_s")));
+        Q ief = MIN_EARTH_FAULT.as("I_ef,min").eval(t, id, "/Ief", "far end", bind(C_MIN, cmin), bind(U0, u0), bind(ZS, zsf));
 
         List<CheckResult> checks = new ArrayList<>();
         Disconnection d = disconnection(t, c, id, zs, in);
@@ -351,7 +351,7 @@ final class FaultPath {
                             + NumberFormatPolicyLite.a(d.ia().value()) + " A", "the device is taken to operate within the required time t", "IEC 60364-4-43:2008, 434.5.2");
                 }
                 i2t = ENERGY.eval(t, id, "/I2t", instantaneous ? "instantaneous region" : "within the required time",
-                        bind(I, rel(current, "I")), bind(T, time));
+                        bind(I, current), bind(T, time));
             }
         }
         Q k = kFactor(t, id, cable, thetaMax, protective);
