@@ -82,4 +82,26 @@ class FixedDecimalsTest {
     void trimWritesWhatTheFormatterWritesForManyValues() {
         for (double v : sample(202612031, 200_000)) assertEquals(trimmed(v), Engine.trim(v), () -> "for " + v);
     }
+
+    /**
+     * Values at and a few ulps either side of a half thousandth, and running sums of thirds (a
+     * board's phase loads): where the text is decided by the decimal form rather than the binary
+     * value, and where a shortcut through the binary value would go wrong.
+     */
+    @Test
+    void bothWriteWhatTheFormatterWritesNearHalfThousandths() {
+        SplittableRandom random = new SplittableRandom(20261204);
+        double load = 0;
+        for (int i = 0; i < 50_000; i++) {
+            double half = (random.nextInt(-2_000_000, 2_000_000) + 0.5) / 1000;
+            double v = switch (i % 4) {
+                case 0 -> half;
+                case 1 -> Math.nextUp(half);
+                case 2 -> Math.nextDown(half);
+                default -> load += random.nextDouble() * 10 / 3;
+            };
+            assertEquals(formatter(v), Engine.fixed3(v), () -> "fixed3 for " + v);
+            assertEquals(trimmed(v), Engine.trim(v), () -> "trim for " + v);
+        }
+    }
 }
