@@ -458,7 +458,7 @@ public final class Engine {
                 String ph = "L" + (k + 1);
                 Q pk = p[k] != null ? p[k] : zero(t, id + "/P0_" + ph, "P_" + ph, Units.KW);
                 Q qk = q[k] != null ? q[k] : zero(t, id + "/Q0_" + ph, "Q_" + ph, Units.KVAR);
-                Q sk = DemandFormulas.APPARENT.as(su[k] != null ? "S_pq," + ph : "S_" + ph).eval(t, id + "/S_" + ph, ph, bind(DemandFormulas.P, pk), bind(DemandFormulas.Q, qk));
+                Q sk = DemandFormulas.APPARENT.evalAs(su[k] != null ? "S_pq," + ph : "S_" + ph, t, id + "/S_" + ph, ph, bind(DemandFormulas.P, pk), bind(DemandFormulas.Q, qk));
                 if (su[k] != null) {
                     sk = DemandFormulas.sum("apparent-with-unknown", "Apparent power on " + ph + " with loads of unknown power factor",
                             "S_" + ph, Units.KVA, List.of(var("a", sk), var("b", su[k])),
@@ -467,11 +467,11 @@ public final class Engine {
                 }
                 sk = relabel(sk, "S_" + ph);
                 Q ik = balanced
-                        ? DemandFormulas.PHASE_CURRENT_BALANCED.as("I_" + ph).eval(t, id + "/I_" + ph, ph + ", balanced", bind(DemandFormulas.S, sk), bind(DemandFormulas.U, u))
-                        : DemandFormulas.PHASE_CURRENT.as("I_" + ph).eval(t, id + "/I_" + ph, ph, bind(DemandFormulas.S, sk), bind(DemandFormulas.U0, u0));
+                        ? DemandFormulas.PHASE_CURRENT_BALANCED.evalAs("I_" + ph, t, id + "/I_" + ph, ph + ", balanced", bind(DemandFormulas.S, sk), bind(DemandFormulas.U, u))
+                        : DemandFormulas.PHASE_CURRENT.evalAs("I_" + ph, t, id + "/I_" + ph, ph, bind(DemandFormulas.S, sk), bind(DemandFormulas.U0, u0));
                 currents.add(relabel(ik, "I_" + ph));
                 if (su[k] == null && sk.value() > 0) {
-                    pfs.add(relabel(DemandFormulas.POWER_FACTOR.as("cos φ_" + ph).eval(t, id + "/cos_phi_" + ph, ph, bind(DemandFormulas.P, pk), bind(DemandFormulas.S, sk)), "cos φ_" + ph));
+                    pfs.add(relabel(DemandFormulas.POWER_FACTOR.evalAs("cos φ_" + ph, t, id + "/cos_phi_" + ph, ph, bind(DemandFormulas.P, pk), bind(DemandFormulas.S, sk)), "cos φ_" + ph));
                 } else {
                     pfs.add(null);
                 }
@@ -760,11 +760,11 @@ public final class Engine {
                         "the exact form has no solution: the cable cannot deliver I_b over this length", "circuit theory", dropPct.id());
             }
             if (exactSolvable) {
-                Q dropExact = VoltageDropFormulas.EXACT.as("ΔU_exact").eval(vt, vid, "/dU_exact", "phasor form",
+                Q dropExact = VoltageDropFormulas.EXACT.evalAs("ΔU_exact", vt, vid, "/dU_exact", "phasor form",
                         bind(VoltageDropFormulas.U_N, un), bind(VoltageDropFormulas.R, z.r()), bind(VoltageDropFormulas.X, z.x()),
                         bind(VoltageDropFormulas.COS_PHI, pf), bind(VoltageDropFormulas.SIN_PHI, sin), bind(VoltageDropFormulas.I, ib),
                         bind(VoltageDropFormulas.L, length));
-                dropExactPct = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.as("ΔU_exact").eval(vt, vid, "/dU_exact_pct", "exact form",
+                dropExactPct = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.evalAs("ΔU_exact", vt, vid, "/dU_exact_pct", "exact form",
                         bind(VoltageDropFormulas.DU, dropExact), bind(VoltageDropFormulas.U_N, un)), "ΔU_exact");
             }
             boolean exactGoverns = inst.basis().voltageDropMethod().value() == DropMethod.EXACT && dropExactPct != null;
@@ -1010,7 +1010,7 @@ public final class Engine {
             Q du = VoltageDropFormulas.MOTOR_STARTING.eval(t, id, "/dU", "", bind(VoltageDropFormulas.R, z.r()),
                     bind(VoltageDropFormulas.X, z.x()), bind(VoltageDropFormulas.COS_ST, cosSt), bind(VoltageDropFormulas.SIN_ST, sinSt),
                     bind(VoltageDropFormulas.I_ST, ist), bind(VoltageDropFormulas.L, length));
-            Q own = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.as("ΔU_st").eval(t, id, "/dU_pct", "",
+            Q own = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.evalAs("ΔU_st", t, id, "/dU_pct", "",
                     bind(VoltageDropFormulas.DU, du), bind(VoltageDropFormulas.U_N, un)), "ΔU_st(" + c.id() + ")");
             List<Q> terms = new ArrayList<>();
             int phases = c.load().phases();

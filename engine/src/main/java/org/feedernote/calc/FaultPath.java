@@ -67,7 +67,7 @@ final class FaultPath {
     }
 
     private Q magnitude(Trace t, String id, String symbol, Q r, Q x) {
-        return MAGNITUDE.as(symbol).eval(t, id, "", bind(R, r), bind(X, x));
+        return MAGNITUDE.evalAs(symbol, t, id, "", bind(R, r), bind(X, x));
     }
 
     // ---------------- the origin ----------------
@@ -90,8 +90,8 @@ final class FaultPath {
             Q xr = Given.setting(t, id, "/xr", "X/R of the transformer", "X/R", new Setting<>(tr.xrRatio() == null ? 5.0 : tr.xrRatio(),
                     tr.xrRatio() != null, "supply.source.transformer.x_r_ratio"), Units.NONE, "assumption of this program: 5 (common practice, no source)");
             Q z = TRANSFORMER_IMPEDANCE.eval(t, id, "/Z_T", "", bind(UK, uk), bind(U, u), bind(SR, sr));
-            r = RESISTANCE_FROM_XR.as("R_T").eval(t, id, "/R_T", "", bind(Z, z), bind(XR, xr));
-            x = REACTANCE_FROM_XR.as("X_T").eval(t, id, "/X_T", "", bind(R, r), bind(XR, xr));
+            r = RESISTANCE_FROM_XR.evalAs("R_T", t, id, "/R_T", "", bind(Z, z), bind(XR, xr));
+            x = REACTANCE_FROM_XR.evalAs("X_T", t, id, "/X_T", "", bind(R, r), bind(XR, xr));
             if (t.recording()) Given.decision(t, id + "/loop", "Loop impedance of the source", "a transformer at the origin (upstream network taken as infinite; Dyn vector group, Z_0 ≈ Z_1)",
                     "the line-neutral and line-earth loops at the origin have the impedance Z_T", "IEC 60909-0:2016, 6.3", z.id());
             ze = rel(z, "Z_e");
@@ -113,28 +113,28 @@ final class FaultPath {
             } else {
                 ze = DOUBLE.eval(t, id, "/Ze", "no loop impedance given", bind(Z, zq));
             }
-            if (zq == null) zq = HALF.as("Z_Q").eval(t, id, "/Z_Q", "no fault level given", bind(ZE, ze));
-            r = RESISTANCE_FROM_XR.as("R_Q").eval(t, id, "/R_Q", "", bind(Z, zq), bind(XR, xr));
-            x = REACTANCE_FROM_XR.as("X_Q").eval(t, id, "/X_Q", "", bind(R, r), bind(XR, xr));
+            if (zq == null) zq = HALF.evalAs("Z_Q", t, id, "/Z_Q", "no fault level given", bind(ZE, ze));
+            r = RESISTANCE_FROM_XR.evalAs("R_Q", t, id, "/R_Q", "", bind(Z, zq), bind(XR, xr));
+            x = REACTANCE_FROM_XR.evalAs("X_Q", t, id, "/X_Q", "", bind(R, r), bind(XR, xr));
         }
         Q rN = r;
         Q xN = x;
         if (!(src instanceof Supply.Transformer)) {
-            Q zqLoop = DOUBLE.as("Z_QN").eval(t, id, "/Z_QN", "line-neutral loop of the network",
+            Q zqLoop = DOUBLE.evalAs("Z_QN", t, id, "/Z_QN", "line-neutral loop of the network",
                     bind(Z, rel(magnitude(t, id + "/ZQ_mag", "Z_Q", r, x), "Z")));
             Q xr = rel(new Q(id + "/xr", "X/R", x.value() / r.value(), Units.NONE), "X/R");
-            rN = RESISTANCE_FROM_XR.as("R_QN").eval(t, id, "/R_QN", "", bind(Z, zqLoop), bind(XR, xr));
-            xN = REACTANCE_FROM_XR.as("X_QN").eval(t, id, "/X_QN", "", bind(R, rN), bind(XR, xr));
+            rN = RESISTANCE_FROM_XR.evalAs("R_QN", t, id, "/R_QN", "", bind(Z, zqLoop), bind(XR, xr));
+            xN = REACTANCE_FROM_XR.evalAs("X_QN", t, id, "/X_QN", "", bind(R, rN), bind(XR, xr));
         }
         return atBoard(t, id, board, r, x, rN, xN, ze, ze);
     }
 
     private BoardFault atBoard(Trace t, String id, String board, Q r3, Q x3, Q rN, Q xN, Q ze, Q zeF) {
         Q z3 = magnitude(t, id + "/Z3", "|Z_3|", rel(r3, "R"), rel(x3, "X"));
-        Q ik3 = THREE_PHASE_FAULT.as("I_k3(" + board + ")").eval(t, id, "/Ik3", "at board " + board, bind(C_MAX, cmax), bind(U, u),
+        Q ik3 = THREE_PHASE_FAULT.evalAs("I_k3(" + board + ")", t, id, "/Ik3", "at board " + board, bind(C_MAX, cmax), bind(U, u),
                 bind(Z, z3));
         Q zn = magnitude(t, id + "/ZN", "|Z_N|", rel(rN, "R"), rel(xN, "X"));
-        Q ik1 = SINGLE_PHASE_FAULT.as("I_k1(" + board + ")").eval(t, id, "/Ik1", "at board " + board, bind(C_MAX, cmax), bind(U0, u0),
+        Q ik1 = SINGLE_PHASE_FAULT.evalAs("I_k1(" + board + ")", t, id, "/Ik1", "at board " + board, bind(C_MAX, cmax), bind(U0, u0),
                 bind(Z, zn));
         return new BoardFault(r3, x3, rN, xN, rel(ze, "Z_e(" + board + ")"), rel(zeF, "Z_ef(" + board + ")"), ik3, ik1);
     }
@@ -167,13 +167,13 @@ final class FaultPath {
     private record Conductors(Q r1, Q r2) {}
 
     private Conductors conductors(Trace t, String id, Temperature at, Q theta, Q r20, Q cpc20, Q alpha, Q length, Q n) {
-        Q r1km = RESISTANCE_AT.as(at.r1PerKm()).eval(t, id, at.r1PerKmStep(), at.lineForm(), bind(R20, r20), bind(ALPHA, alpha),
+        Q r1km = RESISTANCE_AT.evalAs(at.r1PerKm(), t, id, at.r1PerKmStep(), at.lineForm(), bind(R20, r20), bind(ALPHA, alpha),
                 bind(THETA, theta));
-        Q r2km = RESISTANCE_AT.as(at.r2PerKm()).eval(t, id, at.r2PerKmStep(), at.cpcForm(), bind(R20, rel(cpc20, "R_20")),
+        Q r2km = RESISTANCE_AT.evalAs(at.r2PerKm(), t, id, at.r2PerKmStep(), at.cpcForm(), bind(R20, rel(cpc20, "R_20")),
                 bind(ALPHA, alpha), bind(THETA, theta));
-        Q r1 = LENGTH_RESISTANCE.as(at.r1()).eval(t, id, at.r1Step(), at.lengthForm(), bind(R_KM, r1km), bind(L, length),
+        Q r1 = LENGTH_RESISTANCE.evalAs(at.r1(), t, id, at.r1Step(), at.lengthForm(), bind(R_KM, r1km), bind(L, length),
                 bind(N, n));
-        Q r2 = LENGTH_RESISTANCE.as(at.r2()).eval(t, id, at.r2Step(), at.lengthForm(), bind(R_KM, r2km), bind(L, length),
+        Q r2 = LENGTH_RESISTANCE.evalAs(at.r2(), t, id, at.r2Step(), at.lengthForm(), bind(R_KM, r2km), bind(L, length),
                 bind(N, n));
         return new Conductors(r1, r2);
     }
@@ -186,10 +186,10 @@ final class FaultPath {
         Q r20 = rel(z.r20(), "R_20");
         Q alpha = rel(z.alpha(), "α_20");
         Q r1km20 = r20;
-        Q r1_20 = LENGTH_RESISTANCE.as("R_1,20").eval(t, id, "/R1_20", "line conductor at 20 °C", bind(R_KM, r1km20),
+        Q r1_20 = LENGTH_RESISTANCE.evalAs("R_1,20", t, id, "/R1_20", "line conductor at 20 °C", bind(R_KM, r1km20),
                 bind(L, length), bind(N, n));
-        Q x1 = LENGTH_REACTANCE.as("X_1").eval(t, id, "/X1", "line conductor", bind(X_KM, z.reactance()), bind(L, length));
-        Q xLoop = LOOP_REACTANCE.as("X_loop").eval(t, id, "/Xloop", "line and protective conductor", bind(X_KM, z.reactance()),
+        Q x1 = LENGTH_REACTANCE.evalAs("X_1", t, id, "/X1", "line conductor", bind(X_KM, z.reactance()), bind(L, length));
+        Q xLoop = LOOP_REACTANCE.evalAs("X_loop", t, id, "/Xloop", "line and protective conductor", bind(X_KM, z.reactance()),
                 bind(L, length));
         Q thetaF = faults.finalTemperature(t, id, "/theta_f", cable.insulation());
         Q cpc20 = data.resistance20(t, id, "/R20_cpc", cable.conductor(), cable.cpc().mm2());
@@ -206,7 +206,7 @@ final class FaultPath {
         Q r12f = series(t, id + "/R12f", "Resistance of the loop, at θ_f", "R_1f + R_2f", r1f, r2f);
         Q zLoopF = magnitude(t, id + "/Zloopf", "Z_loop,f", rel(r12f, "R"), rel(xLoop, "X"));
         Q zsf = loop(t, id + "/Zsf", "Earth-fault loop impedance at the far end, at θ_f", "Z_sf", rel(at.zeF(), "Z_ef"), zLoopF);
-        Q ief = MIN_EARTH_FAULT.as("I_ef,min").eval(t, id, "/Ief", "far end", bind(C_MIN, cmin), bind(U0, u0), bind(ZS, zsf));
+        Q ief = MIN_EARTH_FAULT.evalAs("I_ef,min", t, id, "/Ief", "far end", bind(C_MIN, cmin), bind(U0, u0), bind(ZS, zsf));
 
         List<CheckResult> checks = new ArrayList<>();
         Disconnection d = disconnection(t, c, id, zs, in);
@@ -281,7 +281,7 @@ final class FaultPath {
             Q idn = Given.input(t, id, "/Idn", "Rated residual operating current", "I_Δn", dev.rcdResidualA(), Units.A, c.where().path(),
                     ".device.residual_current_a");
             Q iaR = RCD_TRIP.eval(t, id, "/Ia_rcd", "the RCD part of the device", bind(IDN, idn));
-            Q zmaxR = MAX_LOOP.as("Z_s,max(RCD)").eval(t, id, "/Zs_max_rcd", "RCD", bind(C_MIN, cmin), bind(U0, u0), bind(IA, iaR));
+            Q zmaxR = MAX_LOOP.evalAs("Z_s,max(RCD)", t, id, "/Zs_max_rcd", "RCD", bind(C_MIN, cmin), bind(U0, u0), bind(IA, iaR));
             boolean passR = zs.value() <= zmaxR.value() + 1e-12;
             if (t.recording()) t.add(new Step.Check(id + "/check2", "Automatic disconnection by the RCD: Z_s ≤ Z_s,max(RCD)", name, rel(zs, "Z_s"), "≤",
                     zmaxR, passR, "IEC 60364-4-41:2005, 411.4.5"));
@@ -355,7 +355,7 @@ final class FaultPath {
             }
         }
         Q k = kFactor(t, id, cable, thetaMax, protective);
-        Q smin = MIN_SIZE.as(protective ? "S_PE,min" : "S_min").eval(t, id, "/Smin", "", bind(I2T, rel(i2t, "I²t")), bind(KF, k));
+        Q smin = MIN_SIZE.evalAs(protective ? "S_PE,min" : "S_min", t, id, "/Smin", "", bind(I2T, rel(i2t, "I²t")), bind(KF, k));
         Q installed = Given.derived(t, id, "/S", protective ? "Protective conductor installed" : "Line conductor installed",
                 protective ? "S_PE" : "S", size * cable.parallel(), Units.MM2,
                 cable.parallel() > 1 ? "design input (" + cable.parallel() + " conductors in parallel share the fault current)" : "design input");

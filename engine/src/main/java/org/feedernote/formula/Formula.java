@@ -43,16 +43,6 @@ public final class Formula {
         this.reference = reference;
     }
 
-    private Formula(Formula f, String symbol) {
-        this.id = f.id;
-        this.title = f.title;
-        this.symbol = symbol;
-        this.unit = f.unit;
-        this.expr = f.expr;
-        this.reference = f.reference;
-        this.prepared = f.prepared();
-    }
-
     public String id() { return id; }
     public String title() { return title; }
     public String symbol() { return symbol; }
@@ -86,11 +76,6 @@ public final class Formula {
         });
     }
 
-    /** The same formula with its result shown by another symbol (S_L1 rather than S). */
-    public Formula as(String resultSymbol) {
-        return new Formula(this, resultSymbol);
-    }
-
     /**
      * The index of the binding of a variable, or -1: by identity first (catalogue variables are
      * shared constants), then by key; the identity search starts at from, where bindings given in
@@ -120,12 +105,26 @@ public final class Formula {
         return eval(trace, stepId, "", form, bindings);
     }
 
+    /** As {@link #eval(Trace, String, String, Step.Binding...)} with the result shown by another symbol (S_L1 rather than S). */
+    public Q evalAs(String resultSymbol, Trace trace, String stepId, String form, Step.Binding... bindings) {
+        return evalAs(resultSymbol, trace, stepId, "", form, bindings);
+    }
+
+    /** As {@link #eval(Trace, String, String, String, Step.Binding...)} with the result shown by another symbol, without a copy of the formula. */
+    public Q evalAs(String resultSymbol, Trace trace, String owner, String step, String form, Step.Binding... bindings) {
+        return evaluate(resultSymbol, trace, owner, step, form, bindings);
+    }
+
     /**
      * As {@link #eval(Trace, String, String, Step.Binding...)} for the step owner + step (a
      * circuit's id and the step's own part, "C-12" and "/vd/dU"): the two are joined only where
      * the id is read, never for the no-op trace of a sizing candidate.
      */
     public Q eval(Trace trace, String owner, String step, String form, Step.Binding... bindings) {
+        return evaluate(symbol, trace, owner, step, form, bindings);
+    }
+
+    private Q evaluate(String resultSymbol, Trace trace, String owner, String step, String form, Step.Binding... bindings) {
         requireUnits(owner, step, bindings);
         Prepared p = prepared();
         List<Var> vars = p.vars();
@@ -143,7 +142,7 @@ public final class Formula {
             next = j + 1;
         }
         double value = p.compiled().evaluate(values, owner, step);
-        Q q = new Q(owner, step, symbol, value, unit);
+        Q q = new Q(owner, step, resultSymbol, value, unit);
         if (trace.recording()) {
             // The bindings of variables of this formula, in the order given (mostly the variables' own).
             Step.Binding[] used = bindings;
