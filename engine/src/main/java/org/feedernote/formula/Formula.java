@@ -135,7 +135,7 @@ public final class Formula {
         for (int i = 0; i < values.length; i++) {
             Var v = vars.get(i);
             // Bindings are mostly given in the order of the variables: a sum over many terms stays linear.
-            int j = next < bindings.length && bindings[next].var() == v ? next : find(bindings, v, next);
+            int j = find(bindings, v, next);
             if (j < 0) throw new IllegalStateException(owner + step + ": formula " + id + " needs " + vars.get(i).symbol() + " bound");
             values[i] = bindings[j].q().value();
             if (bindings[j].var() == v) identical++;
@@ -182,7 +182,7 @@ public final class Formula {
         int next = 0;
         for (int i = 0; i < values.length; i++) {
             Var v = vars.get(i);
-            int j = next < bindings.length && bindings[next].var() == v ? next : find(bindings, v, next);
+            int j = find(bindings, v, next);
             if (j < 0 || bindings[j].var() != v) {
                 throw new IllegalStateException(stepId + ": formula " + id + " needs " + v.symbol() + " bound");
             }
