@@ -58,7 +58,9 @@ final class Sizing {
         firstPass();
         for (Circuit c : run.order()) {
             Slot slot = new Slot(run.original(c.id()), current.get(c.id()), sizesFor(c));
-            slot.ownPct = governingOwn(results.get(c.id()));
+            CircuitResult r = results.get(c.id());
+            slot.ownPct = governingOwn(r);
+            if (!slot.feeder) slot.limitPct = r.limitPercent().value();
             slots.put(c.id(), slot);
         }
         for (Circuit c : run.order()) {
@@ -166,6 +168,8 @@ final class Sizing {
         final boolean feeder;
         /** A motor whose starting dip is checked (the only circuits with a motor-starting check). */
         final boolean startingChecked;
+        /** A final circuit whose load gives a starting current (its dip adds the drops of the feeders above it). */
+        final boolean startingGiven;
         /** Sizes the tables cover for this cable and method, ascending. */
         final double[] covered;
         /** The feeders from the origin to the board the circuit starts at. */
@@ -177,6 +181,11 @@ final class Sizing {
         Circuit current;
         /** The own drop at the current size; the drop from the origin is the sum along the path. */
         double ownPct;
+        /**
+         * A final circuit's drop limit (it follows from the kind of load and the design basis, not
+         * from the sizes): read here by every circuit below a feeder each time the feeder grows.
+         */
+        double limitPct = Double.NaN;
         /**
          * While the circuit fails its limit: its place in the order failing loads were found in
          * (a load that stops failing and fails again goes to the end), else -1.
@@ -197,8 +206,8 @@ final class Sizing {
             this.original = original;
             this.autoSized = original.cable().size().auto();
             this.feeder = original.isFeeder();
-            this.startingChecked = !feeder && original.load().kind() == org.feedernote.model.LoadKind.MOTOR
-                    && original.load().startingCurrentMultiple() != null;
+            this.startingGiven = !feeder && original.load().startingCurrentMultiple() != null;
+            this.startingChecked = startingGiven && original.load().kind() == org.feedernote.model.LoadKind.MOTOR;
             this.covered = covered.stream().mapToDouble(Double::doubleValue).toArray();
             this.current = current;
         }
@@ -285,8 +294,7 @@ final class Sizing {
     /** Whether a final circuit fails its drop or starting limit with the current sizes. */
     private void track(Slot slot) {
         if (slot.feeder) return;
-        CircuitResult r = results.get(slot.id);
-        boolean fails = cumulative(slot) > r.limitPercent().value() + 1e-9 || slot.startingChecked && motorStartingFails(slot.id);
+        boolean fails = cumulative(slot) > slot.limitPct + 1e-9 || slot.startingChecked && motorStartingFails(slot.id);
         if (fails && slot.seq < 0) {
             failingDrop.add(slot.id);
             slot.seq = nextSeq++;
@@ -325,7 +333,7 @@ final class Sizing {
 
     /** Feeders and motors are calculated again when a circuit above them changes. */
     private static boolean recalculated(Slot a) {
-        return a.feeder || a.current.load().startingCurrentMultiple() != null;
+        return a.feeder || a.startingGiven;
     }
 
     private double ownDropAt(Slot k, double size) {
@@ -616,7 +624,7 @@ final class Sizing {
 
     /** Enlarges a circuit chosen by a step; every candidate final circuit was failing when the step began. */
     private void apply(Slot slot, double size) {
-        boolean ownDropFails = !slot.feeder && cumulative(slot) > results.get(slot.id).limitPercent().value() + 1e-9;
+        boolean ownDropFails = !slot.feeder && cumulative(slot) > slot.limitPct + 1e-9;
         Circuit k = slot.current;
         resize(slot, withCpc(slot.original, size), ownDropAt(slot, size));
         changed(slot);
