@@ -648,8 +648,7 @@ public final class Engine {
             try {
                 return ownFigures(c, Trace.noop(), known);
             } catch (DataGapException e) {
-                if (e.located()) throw e;
-                throw new DataGapException(c.where().text() + ": " + c.where().path() + " (" + c.id() + "): " + e.getMessage(), true);
+                throw locatedAt(c, e);
             }
         }
 
@@ -681,8 +680,7 @@ public final class Engine {
                 }
                 return known;
             } catch (DataGapException e) {
-                if (e.located()) throw e;
-                throw new DataGapException(c.where().text() + ": " + c.where().path() + " (" + c.id() + "): " + e.getMessage(), true);
+                throw locatedAt(c, e);
             }
         }
 
@@ -801,12 +799,9 @@ public final class Engine {
                         "IEC 60364-5-52:2009, 525 and Annex G"));
                 if (c.load().kind() == LoadKind.MOTOR && c.load().startingCurrentMultiple() != null) {
                     Trace st = ct.section(id + "/st", "Motor starting", "voltage dip at the motor terminals while it starts");
-                    dip = starting(st, c, o.z(), o.ib(), o.length(), o.un(), done);
-                    Q stLimit = Given.setting(st, id, "/st/limit", "Limit of the starting dip", "ΔU_st,max",
-                            inst.basis().motorStartingLimitPercent(), Units.PERCENT,
-                            "default of this program (common practice, no source)");
-                    checks.add(check(st, id + "/st/check", "motor-starting", "Voltage dip while the motor starts", dip, stLimit,
-                            "common practice, no source"));
+                    MotorStart start = motorStart(st, c, o, done);
+                    dip = start.dip();
+                    checks.add(start.check());
                 } else if (c.load().kind() == LoadKind.MOTOR) {
                     if (vt.recording()) Given.note(vt, id + "/st/none", "Motor starting",
                             "No starting_current_multiple is given: the starting dip is not checked.", "");
@@ -1031,6 +1026,38 @@ public final class Engine {
             return termFormulas.eval(t, id + "/dU_total", "", "starting-dip-total", "ΔU_st,total", "d", Units.PERCENT, terms,
                     vars -> DemandFormulas.sum("starting-dip-total", "Voltage dip at the motor terminals while it starts", "ΔU_st,total",
                             Units.PERCENT, vars, "Running drop of each upstream feeder, its added drop from the starting current, and the motor circuit's drop at starting current"));
+        }
+
+        /** A gap in the tables, named by the circuit where it was met (unless it already is). */
+        private static DataGapException locatedAt(Circuit c, DataGapException e) {
+            if (e.located()) return e;
+            return new DataGapException(c.where().text() + ": " + c.where().path() + " (" + c.id() + "): " + e.getMessage(), true);
+        }
+
+        /** A motor's dip while it starts and its check against the limit. */
+        record MotorStart(Q dip, CheckResult check) {}
+
+        private MotorStart motorStart(Trace st, Circuit c, OwnFigures o, Map<String, CircuitResult> done) {
+            String id = c.id();
+            Q dip = starting(st, c, o.z(), o.ib(), o.length(), o.un(), done);
+            Q stLimit = Given.setting(st, id, "/st/limit", "Limit of the starting dip", "ΔU_st,max",
+                    inst.basis().motorStartingLimitPercent(), Units.PERCENT,
+                    "default of this program (common practice, no source)");
+            return new MotorStart(dip, check(st, id + "/st/check", "motor-starting", "Voltage dip while the motor starts", dip, stLimit,
+                    "common practice, no source"));
+        }
+
+        /**
+         * The motor-starting check of a motor circuit with the no-op trace, under the feeder results
+         * in done: what the sizing reads of a motor while the feeders above it grow (the dip adds
+         * their drops; the rest of the motor's figures is calculated again in the final pass).
+         */
+        CheckResult motorStartCheck(Circuit c, Map<String, CircuitResult> done) {
+            try {
+                return motorStart(Trace.noop(), c, ownFigures(c), done).check();
+            } catch (DataGapException e) {
+                throw locatedAt(c, e);
+            }
         }
 
         CheckResult check(Trace t, String id, String name, String title, Q value, Q limit, String reference) {

@@ -61,6 +61,7 @@ final class Sizing {
             CircuitResult r = results.get(c.id());
             slot.ownPct = governingOwn(r);
             if (!slot.feeder) slot.limitPct = r.limitPercent().value();
+            if (slot.startingChecked) slot.startingFails = startingFails(r.check("motor-starting"));
             slots.put(c.id(), slot);
         }
         for (Circuit c : run.order()) {
@@ -151,7 +152,7 @@ final class Sizing {
         return best;
     }
 
-    /** Results of the sizes chosen by the first pass; motors are recalculated as their paths change. */
+    /** Results of the sizes chosen by the first pass; feeders are recalculated as their paths change. */
     private final Map<String, CircuitResult> results = new LinkedHashMap<>();
     /** Final circuits that fail their drop or starting limit. */
     private final java.util.Set<String> failingDrop = new java.util.LinkedHashSet<>();
@@ -168,8 +169,6 @@ final class Sizing {
         final boolean feeder;
         /** A motor whose starting dip is checked (the only circuits with a motor-starting check). */
         final boolean startingChecked;
-        /** A final circuit whose load gives a starting current (its dip adds the drops of the feeders above it). */
-        final boolean startingGiven;
         /** Sizes the tables cover for this cable and method, ascending. */
         final double[] covered;
         /** The feeders from the origin to the board the circuit starts at. */
@@ -186,6 +185,8 @@ final class Sizing {
          * from the sizes): read here by every circuit below a feeder each time the feeder grows.
          */
         double limitPct = Double.NaN;
+        /** A motor whose starting dip is checked: whether the dip exceeds its limit with the current sizes. */
+        boolean startingFails;
         /**
          * While the circuit fails its limit: its place in the order failing loads were found in
          * (a load that stops failing and fails again goes to the end), else -1.
@@ -206,8 +207,8 @@ final class Sizing {
             this.original = original;
             this.autoSized = original.cable().size().auto();
             this.feeder = original.isFeeder();
-            this.startingGiven = !feeder && original.load().startingCurrentMultiple() != null;
-            this.startingChecked = startingGiven && original.load().kind() == org.feedernote.model.LoadKind.MOTOR;
+            this.startingChecked = !feeder && original.load().kind() == org.feedernote.model.LoadKind.MOTOR
+                    && original.load().startingCurrentMultiple() != null;
             this.covered = covered.stream().mapToDouble(Double::doubleValue).toArray();
             this.current = current;
         }
@@ -286,15 +287,14 @@ final class Sizing {
         return sum;
     }
 
-    private boolean motorStartingFails(String id) {
-        CheckResult st = results.get(id).check("motor-starting");
+    private static boolean startingFails(CheckResult st) {
         return st != null && !st.pass();
     }
 
     /** Whether a final circuit fails its drop or starting limit with the current sizes. */
     private void track(Slot slot) {
         if (slot.feeder) return;
-        boolean fails = cumulative(slot) > slot.limitPct + 1e-9 || slot.startingChecked && motorStartingFails(slot.id);
+        boolean fails = cumulative(slot) > slot.limitPct + 1e-9 || slot.startingChecked && slot.startingFails;
         if (fails && slot.seq < 0) {
             failingDrop.add(slot.id);
             slot.seq = nextSeq++;
@@ -312,28 +312,29 @@ final class Sizing {
     }
 
     /**
-     * After a size change: the circuit is calculated again, and below a feeder every feeder (their
-     * fault levels depend on it), top-down, then every motor (its starting dip adds each upstream
-     * feeder's drop), so that what the sizing reads of the circuits upstream is never stale; then
-     * the drops are re-summed. The motors depend only on the feeders, so they are calculated side
-     * by side; the first data gap in calculation order is the one reported.
+     * After a size change: a feeder or motor is calculated again, and below a feeder every feeder
+     * (their fault levels depend on it), top-down, then the starting check of every motor (its dip
+     * adds each upstream feeder's drop; nothing else of a final circuit is read while drops are
+     * balanced, and the final pass calculates it all again), so that what the sizing reads of the
+     * circuits upstream is never stale; then the drops are re-summed. The motors depend only on
+     * the feeders, so their checks are made side by side; the first data gap in calculation order
+     * is the one reported.
      */
     private void changed(Slot slot) {
-        if (recalculated(slot)) results.put(slot.id, run.evaluate(slot.current, Trace.noop(), results));
+        if (slot.feeder || slot.startingChecked) {
+            CircuitResult r = run.evaluate(slot.current, Trace.noop(), results);
+            results.put(slot.id, r);
+            if (slot.startingChecked) slot.startingFails = startingFails(r.check("motor-starting"));
+        }
         List<Slot> motors = new ArrayList<>();
         for (Slot a : slot.below) {
             if (a.feeder) results.put(a.id, run.evaluate(a.current, Trace.noop(), results));
-            else if (recalculated(a)) motors.add(a);
+            else if (a.startingChecked) motors.add(a);
         }
-        List<SideBySide.Outcome<CircuitResult>> done = SideBySide.map(motors, a -> run.evaluate(a.current, Trace.noop(), results));
-        for (int i = 0; i < motors.size(); i++) results.put(motors.get(i).id, done.get(i).get());
+        List<SideBySide.Outcome<CheckResult>> done = SideBySide.map(motors, a -> run.motorStartCheck(a.current, results));
+        for (int i = 0; i < motors.size(); i++) motors.get(i).startingFails = startingFails(done.get(i).get());
         track(slot);
         for (Slot a : slot.below) track(a);
-    }
-
-    /** Feeders and motors are calculated again when a circuit above them changes. */
-    private static boolean recalculated(Slot a) {
-        return a.feeder || a.startingGiven;
     }
 
     private double ownDropAt(Slot k, double size) {
