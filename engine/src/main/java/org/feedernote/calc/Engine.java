@@ -727,8 +727,19 @@ public final class Engine {
             checks.add(check(kt, id + "/cap/overload", "overload", "Overload: I_2 ≤ 1.45 · I_z", relabel(i2, "I_2"), limit145,
                     "IEC 60364-4-43:2008, 433.1"));
 
+            OwnDrop d = ownDrop(ct, c, phases, ib, pf, cap.iz());
+            return new OwnFigures(c, phases, ib, pf, in, i2, cap, List.copyOf(checks), d.z(), d.vt(), d.vid(), d.length(), d.un(),
+                    d.dropV(), d.dropPct(), d.dropExactPct(), d.own());
+        }
+
+        /** A circuit's impedance and own voltage drop (sections z and vd), the part of its own figures its drop needs. */
+        record OwnDrop(ImpedanceResult z, Trace vt, String vid, Q length, Q un, Q dropV, Q dropPct, Q dropExactPct, Q own) {}
+
+        /** @param iz the circuit's current-carrying capacity, read only where the conductor temperature is estimated from it */
+        private OwnDrop ownDrop(Trace ct, Circuit c, int phases, Q ib, Q pf, Q iz) {
+            String id = c.id();
             Trace zt = ct.recording() ? ct.section(id + "/z", "Cable impedance", describeCable(c.cable())) : ct;
-            Q theta = temperature(zt, c, ib, cap.iz());
+            Q theta = temperature(zt, c, ib, iz);
             ImpedanceResult z = impedance.impedance(zt, id + "/z", c.cable(), theta, f, phases);
 
             Trace vt = ct.section(id + "/vd", "Voltage drop", phases == 3 ? "three-phase, referred to U" : "single-phase, referred to U_0");
@@ -778,8 +789,26 @@ public final class Engine {
                         "IEC 60364-5-52:2009, Annex G", dropPct.id());
             }
             Q own = relabel(exactGoverns ? dropExactPct : dropPct, "ΔU(" + id + ")");
-            return new OwnFigures(c, phases, ib, pf, in, i2, cap, List.copyOf(checks), z, vt, vid, length, un, dropV, dropPct,
-                    dropExactPct, own);
+            return new OwnDrop(z, vt, vid, length, un, dropV, dropPct, dropExactPct, own);
+        }
+
+        /**
+         * A circuit's own voltage drop with the no-op trace, for the sizing's weighing of a larger
+         * size: the device and the capacity checks are not made, and the capacity only where the
+         * conductor temperature is estimated from it.
+         */
+        Q ownDrop(Circuit c) {
+            try {
+                OwnFigures known = Evaluated.ownFigures(evaluated.get(c.id()), c);
+                if (known != null) return known.own();
+                int phases = c.isFeeder() ? 3 : c.load().phases();
+                Q ib = designCurrent.get(c.id());
+                Q iz = inst.basis().conductorTemperature().value() == ConductorTemperature.MAXIMUM ? null
+                        : capacity(Trace.noop(), c, phases, ib).iz();
+                return ownDrop(Trace.noop(), c, phases, ib, powerFactor.get(c.id()), iz).own();
+            } catch (DataGapException e) {
+                throw locatedAt(c, e);
+            }
         }
 
         /** The rest of the calculation of c from its own figures: cumulative drop, motor starting, fault path. */

@@ -338,7 +338,7 @@ final class Sizing {
     }
 
     private double ownDropAt(Slot k, double size) {
-        return k.ownDrop.computeIfAbsent(size, sz -> run.ownFigures(withCpc(k.original, sz)).own().value());
+        return k.ownDrop.computeIfAbsent(size, sz -> run.ownDrop(withCpc(k.original, sz)).value());
     }
 
     /** Covered sizes by {@link #coverageKey}: few different cables and methods serve thousands of circuits. */
