@@ -2,7 +2,6 @@ package org.feedernote.input;
 
 import java.io.IOException;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
@@ -75,9 +74,9 @@ final class TreeReader {
         return (nl < 0 ? s : s.substring(0, nl)).trim();
     }
 
-    private static Node.Pos pos(JsonParser p) {
+    private static long pos(JsonParser p) {
         JsonLocation loc = p.currentTokenLocation();
-        return new Node.Pos(Math.max(1, loc.getLineNr()), Math.max(1, loc.getColumnNr()));
+        return Node.Pos.pack(Math.max(1, loc.getLineNr()), Math.max(1, loc.getColumnNr()));
     }
 
     /** Where a value sits, written out only for a message (most inputs need none). */
@@ -95,26 +94,41 @@ final class TreeReader {
         }
     }
 
+    private static Node.Entry find(List<Node.Entry> entries, String key) {
+        for (Node.Entry e : entries) if (e.key().equals(key)) return e;
+        return null;
+    }
+
     private Node value(JsonParser p, Where path) throws IOException {
         JsonToken t = p.currentToken();
-        Node.Pos pos = pos(p);
+        long pos = pos(p);
         switch (t) {
             case START_OBJECT: {
-                Map<String, Node.Entry> entries = new LinkedHashMap<>();
+                List<Node.Entry> entries = new ArrayList<>();
+                Map<String, Node.Entry> byKey = null;
                 while (p.nextToken() == JsonToken.FIELD_NAME) {
                     String key = p.currentName();
-                    Node.Pos keyPos = pos(p);
+                    long keyAt = pos(p);
                     p.nextToken();
                     Where childPath = path.child(key);
                     Node child = value(p, childPath);
-                    if (entries.containsKey(key)) {
+                    Node.Entry first = byKey != null ? byKey.get(key) : find(entries, key);
+                    if (first != null) {
+                        Node.Pos keyPos = Node.Pos.unpack(keyAt);
                         errors.add(new InputError(file, keyPos.line(), keyPos.column(), childPath.text(),
-                                "the key '" + key + "' is given twice (first at line " + entries.get(key).keyPos().line() + ")"));
+                                "the key '" + key + "' is given twice (first at line " + first.keyPos().line() + ")"));
                     } else {
-                        entries.put(key, new Node.Entry(key, keyPos, child));
+                        Node.Entry e = new Node.Entry(key, keyAt, child);
+                        entries.add(e);
+                        if (byKey == null && entries.size() > Fields.MOST_SEARCHED) {
+                            byKey = new java.util.HashMap<>();
+                            for (Node.Entry x : entries) byKey.put(x.key(), x);
+                        } else if (byKey != null) {
+                            byKey.put(key, e);
+                        }
                     }
                 }
-                return new Node.Obj(pos, entries);
+                return new Node.Obj(pos, Fields.of(entries));
             }
             case START_ARRAY: {
                 List<Node> items = new ArrayList<>();
