@@ -95,28 +95,13 @@ class SizingTest {
                     cable: {conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}
                     installation: {method: C}
                     device: {kind: mccb, rating_a: 125, instantaneous_a: 630, breaking_capacity_ka: 25, disconnection_current_a: 300, let_through_a2s: 400000}
-                  - id: M-1
-                    from: DB-P
-                    load: {kind: motor, power_kw: 22, power_factor: 0.85, efficiency: 0.92, phases: 3, starting_current_multiple: 7.5}
-                    length_m: 12
-                    cable: {conductor: copper, insulation: pvc, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}
-                    installation: {method: C}
-                    device: {kind: mccb, rating_a: 63, instantaneous_a: 380, breaking_capacity_ka: 16, disconnection_current_a: 380, let_through_a2s: 90000}
-                  - id: M-2
-                    from: DB-P
-                    load: {kind: motor, power_kw: 7.5, power_factor: 0.84, efficiency: 0.9, phases: 3, starting_current_multiple: 7}
-                    length_m: 10
-                    cable: {conductor: copper, insulation: pvc, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}
-                    installation: {method: C}
-                    device: {kind: mcb, curve: C, rating_a: auto, breaking_capacity_ka: 10, let_through_a2s: 45000}
-                  - id: M-3
-                    from: DB-P
-                    load: {kind: motor, power_kw: 11, power_factor: 0.85, efficiency: 0.91, phases: 3, starting_current_multiple: 7}
-                    length_m: 15
-                    cable: {conductor: copper, insulation: pvc, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}
-                    installation: {method: C}
-                    device: {kind: mcb, curve: C, rating_a: auto, breaking_capacity_ka: 10, let_through_a2s: 45000}
-                """;
+                """
+                + motor("M-1", "power_kw: 22, power_factor: 0.85, efficiency: 0.92, phases: 3, starting_current_multiple: 7.5", 12,
+                        "kind: mccb, rating_a: 63, instantaneous_a: 380, breaking_capacity_ka: 16, disconnection_current_a: 380, let_through_a2s: 90000")
+                + motor("M-2", "power_kw: 7.5, power_factor: 0.84, efficiency: 0.9, phases: 3, starting_current_multiple: 7", 10,
+                        "kind: mcb, curve: C, rating_a: auto, breaking_capacity_ka: 10, let_through_a2s: 45000")
+                + motor("M-3", "power_kw: 11, power_factor: 0.85, efficiency: 0.91, phases: 3, starting_current_multiple: 7", 15,
+                        "kind: mcb, curve: C, rating_a: auto, breaking_capacity_ka: 10, let_through_a2s: 45000");
         Result sized = Fixtures.run(motors);
         assertTrue(sized.pass(), () -> sized.circuits().stream().filter(c -> !c.pass()).map(c -> c.id() + " " + c.failing()).toList().toString());
         long feederSteps = TraceWalk.steps(sized.trace()).stream().filter(s -> s instanceof Step.Decision d
@@ -138,5 +123,18 @@ class SizingTest {
                 assertEquals(check.pass(), again.pass(), a.id() + " " + check.name());
             }
         }
+    }
+
+    /** A motor circuit on board DB-P, its sizes auto, as an item of the circuits list. */
+    private static String motor(String id, String load, int lengthM, String device) {
+        return """
+                  - id: %s
+                    from: DB-P
+                    load: {kind: motor, %s}
+                    length_m: %d
+                    cable: {conductor: copper, insulation: pvc, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}
+                    installation: {method: C}
+                    device: {%s}
+                """.formatted(id, load, lengthM, device);
     }
 }
