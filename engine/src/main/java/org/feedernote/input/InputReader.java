@@ -39,6 +39,18 @@ public final class InputReader {
         return parse(name, text, name.toLowerCase(java.util.Locale.ROOT).endsWith(".json"));
     }
 
+    /**
+     * Runs the structure check on a thread of its own. Its failure reaches the reader through the
+     * future; the thread itself reports nothing (with the heap exhausted, the JVM's report of it
+     * would be written beside the command's own message).
+     */
+    private static void alongside(Runnable task) {
+        Thread t = new Thread(task, "feedernote-structure-check");
+        t.setDaemon(true);
+        t.setUncaughtExceptionHandler((thread, e) -> { });
+        t.start();
+    }
+
     public static Installation parse(String name, String text, boolean json) throws InputException {
         InputReader r = new InputReader(name);
         Node root = TreeReader.read(name, text, json, r.errors);
@@ -50,7 +62,7 @@ public final class InputReader {
             // any it is bound again after it, as one after the other would.
             List<InputError> structural = new ArrayList<>();
             java.util.concurrent.CompletableFuture<Void> check = java.util.concurrent.CompletableFuture.runAsync(
-                    () -> new StructureValidator(name, structural).check(root, InputSchema.ROOT, ""));
+                    () -> new StructureValidator(name, structural).check(root, InputSchema.ROOT, ""), InputReader::alongside);
             InputReader alongside = new InputReader(name);
             RuntimeException failure = null;
             try {
@@ -58,7 +70,15 @@ public final class InputReader {
             } catch (RuntimeException e) {
                 failure = e;
             }
-            check.join();
+            try {
+                check.join();
+            } catch (java.util.concurrent.CompletionException e) {
+                // The structure check's own failure (out of memory, a fault of this program), as if
+                // it had run on this thread.
+                if (e.getCause() instanceof Error err) throw err;
+                if (e.getCause() instanceof RuntimeException run) throw run;
+                throw e;
+            }
             r.errors.addAll(structural);
             if (structural.isEmpty()) {
                 if (failure != null) throw failure;
