@@ -712,7 +712,7 @@ public final class Engine {
             Q in = c.device().ratingA() != null
                     ? Given.input(dt, id, "/dev/I_n", "Rated current of the device", "I_n", c.device().ratingA(), Units.A, c.where().path(),
                             ".device.rating_a")
-                    : Given.lookupUsing(dt, capacityData.ratingAtLeast(id + "/dev/I_n", c.device().kind(), ib.value()), List.of(ib.id()));
+                    : Given.lookupUsing(dt, capacityData.ratingAtLeast(id + "/dev/I_n", c.device().kind(), ib.value()), ib);
             Q k2 = Given.lookup(dt, capacityData.k2(id + "/dev/k2", c.device().kind()));
             Q i2 = CapacityFormulas.CONVENTIONAL_TRIPPING.eval(dt, id, "/dev/I_2", "", bind(CapacityFormulas.K2, k2),
                     bind(CapacityFormulas.I_N, in));
@@ -722,9 +722,9 @@ public final class Engine {
 
             List<CheckResult> checks = new ArrayList<>();
             Q demand = cap.neutralDesign() != null ? cap.neutralDesign() : ib;
-            checks.add(capacityCheck(kt, id + "/cap/check", demand, in, cap.iz()));
+            checks.add(capacityCheck(kt, id, demand, in, cap.iz()));
             Q limit145 = CapacityFormulas.OVERLOAD_LIMIT.eval(kt, id, "/cap/1.45Iz", "", bind(CapacityFormulas.I_Z, cap.iz()));
-            checks.add(check(kt, id + "/cap/overload", "overload", "Overload: I_2 ≤ 1.45 · I_z", relabel(i2, "I_2"), limit145,
+            checks.add(check(kt, id, "/cap/overload", "overload", "Overload: I_2 ≤ 1.45 · I_z", relabel(i2, "I_2"), limit145,
                     "IEC 60364-4-43:2008, 433.1"));
 
             OwnDrop d = ownDrop(ct, c, phases, ib, pf, cap.iz());
@@ -745,7 +745,7 @@ public final class Engine {
             Trace vt = ct.section(id + "/vd", "Voltage drop", phases == 3 ? "three-phase, referred to U" : "single-phase, referred to U_0");
             String vid = id + "/vd";
             Q length = Given.input(vt, vid, "/L", "Route length", "L", c.lengthM(), Units.M, c.where().path(), ".length_m");
-            Q un = Given.alias(phases == 3 ? u.id() : u0.id(), "U_n", phases == 3 ? u : u0);
+            Q un = Given.alias("U_n", phases == 3 ? u : u0);
             Q dropV;
             Q sin = null;
             if (pf != null) {
@@ -824,7 +824,7 @@ public final class Engine {
                         "Checked against the limit at the terminals of each load supplied from " + c.to() + ".", "");
             } else {
                 limit = limit(vt, c);
-                checks.add(check(vt, o.vid() + "/check", "voltage-drop", "Voltage drop, origin to terminals", cumulative, limit,
+                checks.add(check(vt, o.vid(), "/check", "voltage-drop", "Voltage drop, origin to terminals", cumulative, limit,
                         "IEC 60364-5-52:2009, 525 and Annex G"));
                 if (c.load().kind() == LoadKind.MOTOR && c.load().startingCurrentMultiple() != null) {
                     Trace st = ct.section(id + "/st", "Motor starting", "voltage dip at the motor terminals while it starts");
@@ -902,7 +902,7 @@ public final class Engine {
             Q thetaA = Given.setting(t, id, "/theta_a", ground ? "Ground temperature" : "Ambient air temperature", "θ_a", amb, Units.DEG_C,
                     ground ? "IEC 60364-5-52:2009, reference ground temperature 20 °C" : "IEC 60364-5-52:2009, reference ambient 30 °C");
             factors.add(Given.lookupUsing(t, ground ? capacityData.ambientGround(id + "/C_a", cable.insulation(), amb.value())
-                    : capacityData.ambientAir(id + "/C_a", cable.insulation(), amb.value()), List.of(thetaA.id())));
+                    : capacityData.ambientAir(id + "/C_a", cable.insulation(), amb.value()), thetaA));
             int n = c.conditions().groupedCircuits();
             if (n > 1) {
                 factors.add(Given.lookup(t, capacityData.grouping(id + "/C_g", method, c.conditions().groupArrangement(), n)));
@@ -916,7 +916,7 @@ public final class Engine {
             if (ground) {
                 Q rho = Given.setting(t, id, "/rho", "Soil thermal resistivity", "ρ_T", c.conditions().soilResistivityKmW(), "K·m/W",
                         "IEC 60364-5-52:2009, reference 2.5 K·m/W");
-                factors.add(Given.lookupUsing(t, capacityData.soil(id + "/C_s", method, rho.value()), List.of(rho.id())));
+                factors.add(Given.lookupUsing(t, capacityData.soil(id + "/C_s", method, rho.value()), rho));
             }
             Q neutralDesign = null;
             Double h = c.conditions().thirdHarmonicPercent();
@@ -952,17 +952,18 @@ public final class Engine {
          * Ib ≤ In ≤ Iz, reported with the contract's convention: value I_z against limit I_n, or,
          * where I_b exceeds I_n, value I_n against limit I_b (the comparison that fails).
          */
-        CheckResult capacityCheck(Trace t, String id, Q ib, Q in, Q iz) {
+        CheckResult capacityCheck(Trace t, String circuit, Q ib, Q in, Q iz) {
             boolean first = ib.value() <= in.value() + 1e-9;
             boolean second = in.value() <= iz.value() + 1e-9;
             if (t.recording()) {
+                String id = circuit + "/cap/check";
                 t.add(new Step.Check(id + "1", "Coordination: I_b ≤ I_n", "capacity", relabel(ib, ib.symbol()), "≤", relabel(in, "I_n"),
                         first, "IEC 60364-4-43:2008, 433.1"));
                 t.add(new Step.Check(id + "2", "Coordination: I_n ≤ I_z", "capacity", relabel(in, "I_n"), "≤", relabel(iz, "I_z"),
                         second, "IEC 60364-4-43:2008, 433.1"));
             }
-            if (!first) return new CheckResult("capacity", "Ib ≤ In ≤ Iz", false, in.value(), ib.value(), Units.A, true, id + "1");
-            return new CheckResult("capacity", "Ib ≤ In ≤ Iz", second, iz.value(), in.value(), Units.A, true, id + "2");
+            if (!first) return new CheckResult("capacity", "Ib ≤ In ≤ Iz", false, in.value(), ib.value(), Units.A, true, circuit, "/cap/check1");
+            return new CheckResult("capacity", "Ib ≤ In ≤ Iz", second, iz.value(), in.value(), Units.A, true, circuit, "/cap/check2");
         }
 
         Q temperature(Trace t, Circuit c, Q ib, Q iz) {
@@ -1072,7 +1073,7 @@ public final class Engine {
             Q stLimit = Given.setting(st, id, "/st/limit", "Limit of the starting dip", "ΔU_st,max",
                     inst.basis().motorStartingLimitPercent(), Units.PERCENT,
                     "default of this program (common practice, no source)");
-            return new MotorStart(dip, check(st, id + "/st/check", "motor-starting", "Voltage dip while the motor starts", dip, stLimit,
+            return new MotorStart(dip, check(st, id, "/st/check", "motor-starting", "Voltage dip while the motor starts", dip, stLimit,
                     "common practice, no source"));
         }
 
@@ -1089,12 +1090,13 @@ public final class Engine {
             }
         }
 
-        CheckResult check(Trace t, String id, String name, String title, Q value, Q limit, String reference) {
+        /** value ≤ limit, for the step owner + part (joined only where the step is recorded or its id read). */
+        CheckResult check(Trace t, String owner, String part, String name, String title, Q value, Q limit, String reference) {
             boolean pass = value.value() <= limit.value() + 1e-12;
             if (t.recording()) {
-                t.add(new Step.Check(id, title, name, value, "≤", limit, pass, reference));
+                t.add(new Step.Check(owner + part, title, name, value, "≤", limit, pass, reference));
             }
-            return new CheckResult(name, title, pass, value.value(), limit.value(), limit.unit(), false, id);
+            return new CheckResult(name, title, pass, value.value(), limit.value(), limit.unit(), false, owner, part);
         }
 
         String describeSource() {

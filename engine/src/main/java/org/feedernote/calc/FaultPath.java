@@ -260,7 +260,7 @@ final class FaultPath {
             if (t.recording()) t.add(new Step.Check(id + "/check", "Fault protection by RCD: R_A · I_Δn ≤ 50 V", name, ul, "≤", limit, pass,
                     "IEC 60364-4-41:2005, 411.5.3"));
             Q ia = RCD_TRIP.eval(t, id, "/Ia", "RCD", bind(IDN, idn));
-            return new Disconnection(new CheckResult(name, "R_A · I_Δn ≤ 50 V", pass, ul.value(), 50, Units.V, false, id + "/check"), null, ia, time, true);
+            return new Disconnection(new CheckResult(name, "R_A · I_Δn ≤ 50 V", pass, ul.value(), 50, Units.V, false, id, "/check"), null, ia, time, true);
         }
         if (b.earthing().value() == Earthing.TT) {
             if (t.recording()) Given.note(t, id + "/tt-ocpd", "TT system without an RCD", "Fault protection by the overcurrent device: Z_s · I_a ≤ U_0 (IEC 60364-4-41:2005, 411.5.4).", "");
@@ -271,7 +271,7 @@ final class FaultPath {
                     : "device.disconnection_current_a (the fuse's current for disconnection within " + NumberFormatPolicyLite.s(time.value()) + " s, from the manufacturer's curve)";
             if (t.recording()) Given.decision(t, id + "/check", "Automatic disconnection", "the input does not give " + missing,
                     "FAIL: disconnection cannot be shown", "IEC 60364-4-41:2005, 411.4.4");
-            return new Disconnection(CheckResult.undetermined(name, title, Units.OHM, id + "/check"), null, null, time, false);
+            return new Disconnection(CheckResult.undetermined(name, title, Units.OHM, id, "/check"), null, null, time, false);
         }
         Q zmax = MAX_LOOP.eval(t, id, "/Zs_max", "", bind(C_MIN, cmin), bind(U0, u0), bind(IA, ia));
         boolean pass = zs.value() <= zmax.value() + 1e-12;
@@ -285,10 +285,10 @@ final class FaultPath {
             boolean passR = zs.value() <= zmaxR.value() + 1e-12;
             if (t.recording()) t.add(new Step.Check(id + "/check2", "Automatic disconnection by the RCD: Z_s ≤ Z_s,max(RCD)", name, rel(zs, "Z_s"), "≤",
                     zmaxR, passR, "IEC 60364-4-41:2005, 411.4.5"));
-            return new Disconnection(new CheckResult(name, title, passR, zs.value(), zmaxR.value(), Units.OHM, false, id + "/check2"),
+            return new Disconnection(new CheckResult(name, title, passR, zs.value(), zmaxR.value(), Units.OHM, false, id, "/check2"),
                     zmaxR, iaR, time, true);
         }
-        return new Disconnection(new CheckResult(name, title, pass, zs.value(), zmax.value(), Units.OHM, false, id + "/check1"),
+        return new Disconnection(new CheckResult(name, title, pass, zs.value(), zmax.value(), Units.OHM, false, id, "/check1"),
                 zmax, ia, time, true);
     }
 
@@ -333,19 +333,19 @@ final class FaultPath {
             Step.Lookup class3 = (dev.kind() == DeviceKind.MCB || dev.kind() == DeviceKind.RCBO) && instantaneous
                     ? faults.classThreeLetThrough(id + "/I2t", dev.curve(), in.value(), current.value() / 1000) : null;
             if (class3 != null) {
-                i2t = Given.lookupUsing(t, class3, List.of(current.id()));
+                i2t = Given.lookupUsing(t, class3, current);
                 if (t.recording()) Given.note(t, id + "/class3", "Energy-limiting class", "The circuit-breaker is taken as energy-limiting class 3, the usual class of modern MCBs; confirm with the manufacturer.", "");
             } else if (dev.kind() == DeviceKind.FUSE && !protective) {
                 if (t.recording()) Given.decision(t, id + "/check", title, "the input gives no let_through_a2s for the fuse",
                         "FAIL: the let-through energy cannot be shown (give device.let_through_a2s from the manufacturer's data)", "IEC 60364-4-43:2008, 434.5.2");
-                return CheckResult.undetermined(name, title, Units.MM2, id + "/check");
+                return CheckResult.undetermined(name, title, Units.MM2, id, "/check");
             } else if (d.ia() == null) {
                 if (t.recording()) Given.decision(t, id + "/check", title, "the operating current of the device is not known", "FAIL: cannot be shown", "IEC 60364-4-43:2008, 434.5.2");
-                return CheckResult.undetermined(name, title, Units.MM2, id + "/check");
+                return CheckResult.undetermined(name, title, Units.MM2, id, "/check");
             } else {
                 Q time = instantaneous
                         ? Given.derived(t, id, "/t", "Operating time", "t", 0.1, Units.S, T_INSTANT)
-                        : Given.alias(d.time().id(), "t", d.time());
+                        : Given.alias("t", d.time());
                 if (!instantaneous) {
                     if (t.recording()) Given.decision(t, id + "/t-basis", "Operating time", "I = " + NumberFormatPolicyLite.a(current.value()) + " A is below I_a = "
                             + NumberFormatPolicyLite.a(d.ia().value()) + " A", "the device is taken to operate within the required time t", "IEC 60364-4-43:2008, 434.5.2");
@@ -362,7 +362,7 @@ final class FaultPath {
         boolean pass = installed.value() >= smin.value() - 1e-12;
         if (t.recording()) t.add(new Step.Check(id + "/check", title, name, installed, "≥", smin, pass,
                 "IEC 60364-4-43:2008, 434.5.2" + (protective ? "; IEC 60364-5-54:2011, 543.1.2" : "")));
-        return new CheckResult(name, title, pass, installed.value(), smin.value(), Units.MM2, true, id + "/check");
+        return new CheckResult(name, title, pass, installed.value(), smin.value(), Units.MM2, true, id, "/check");
     }
 
     /** What the k factor depends on: the conductor and insulation materials and the initial temperature. */
@@ -411,14 +411,14 @@ final class FaultPath {
         if (c.device().breakingCapacityKa() == null) {
             if (t.recording()) Given.decision(t, id + "/check", title, "the input gives no breaking_capacity_ka for the device",
                     "FAIL: the device cannot be shown to break " + NumberFormatPolicyLite.ka(prospective.value()) + " kA", "IEC 60364-4-43:2008, 434.5.1");
-            return CheckResult.undetermined("breaking-capacity", title, Units.KA, id + "/check");
+            return CheckResult.undetermined("breaking-capacity", title, Units.KA, id, "/check");
         }
         Q icu = Given.input(t, id, "/Icu", "Rated breaking capacity of the device", "I_cu", c.device().breakingCapacityKa(), Units.KA,
                 c.where().path(), ".device.breaking_capacity_ka");
         boolean pass = icu.value() >= prospective.value() - 1e-12;
         if (t.recording()) t.add(new Step.Check(id + "/check", title, "breaking-capacity", icu, "≥", prospective, pass,
                 "IEC 60364-4-43:2008, 434.5.1"));
-        return new CheckResult("breaking-capacity", title, pass, icu.value(), prospective.value(), Units.KA, true, id + "/check");
+        return new CheckResult("breaking-capacity", title, pass, icu.value(), prospective.value(), Units.KA, true, id, "/check");
     }
 
     /** Plain number text for decisions (the report's policy is not reachable from calc). */

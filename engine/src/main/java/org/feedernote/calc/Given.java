@@ -70,9 +70,11 @@ final class Given {
         return step.q();
     }
 
-    static Q lookupUsing(Trace t, Step.Lookup step, List<String> uses) {
+    /** A lookup whose row or column was chosen by the quantity used (its id is read only where the step is recorded). */
+    static Q lookupUsing(Trace t, Step.Lookup step, Q used) {
         if (!t.recording()) return step.q();
-        Step.Lookup s = new Step.Lookup(step.result(), step.title(), step.table(), step.row(), step.column(), step.method(), uses);
+        Step.Lookup s = new Step.Lookup(step.result(), step.title(), step.table(), step.row(), step.column(), step.method(),
+                List.of(used.id()));
         t.add(s);
         return s.q();
     }
@@ -85,7 +87,8 @@ final class Given {
         if (t.recording()) t.add(new Step.Note(id, title, text, reference));
     }
 
-    static Q alias(String id, String symbol, Q q) {
+    /** The quantity q shown by another symbol: the same id and value. */
+    static Q alias(String symbol, Q q) {
         return q.as(symbol);
     }
 

@@ -51,7 +51,7 @@ final class ImpedanceCalc {
         }
         if (cable.type() == CableType.MULTICORE) {
             spacing = CORE_SPACING.eval(t, id, "/s", "cores of a multicore cable", bind(DC, dc), bind(T_I, ti));
-            gmd = Given.alias(spacing.id(), "s_g", spacing);
+            gmd = Given.alias("s_g", spacing);
             if (t.recording()) Given.decision(t, id + "/gmd", "Geometric mean distance", "multicore cable: the cores sit at the corners of a triangle",
                     "s_g = s", "common practice", spacing.id());
         } else {
@@ -65,7 +65,7 @@ final class ImpedanceCalc {
             if (phases == 3 && formation != Formation.TREFOIL) {
                 gmd = GMD_FLAT.eval(t, id, "/s_g", "flat formation, outer phases 2s apart", bind(S_AXIS, spacing));
             } else {
-                gmd = Given.alias(spacing.id(), "s_g", spacing);
+                gmd = Given.alias("s_g", spacing);
                 if (t.recording()) Given.decision(t, id + "/gmd", "Geometric mean distance",
                         phases == 3 ? "trefoil: the three cables are equally spaced" : "single-phase: two conductors",
                         "s_g = s", "common practice", spacing.id());
@@ -83,7 +83,7 @@ final class ImpedanceCalc {
             Q yp = PROXIMITY_FACTOR.eval(t, id, "/yp", "", bind(FP, fp), bind(DC, dc), bind(S_AXIS, spacing));
             rAc = AC_RESISTANCE.eval(t, id, "/R_ac", "", bind(R_THETA, rTheta), bind(YS, ys), bind(YP, yp));
         } else {
-            rAc = Given.alias(rTheta.id(), "R_ac", rTheta);
+            rAc = Given.alias("R_ac", rTheta);
             if (t.recording()) Given.decision(t, id + "/ac", "Skin and proximity effect",
                     "S = " + ReferenceData.sizeKey(size) + " mm² < " + ReferenceData.sizeKey(AC_EFFECT_FROM_MM2)
                             + " mm²: y_s + y_p stays below 0.2 %",
@@ -101,8 +101,8 @@ final class ImpedanceCalc {
             resistance = PARALLEL_RESISTANCE.eval(t, id, "/R", "", bind(R_AC, rAc), bind(N_PAR, n));
             reactance = PARALLEL_REACTANCE.eval(t, id, "/X", "", bind(X, xPer), bind(N_PAR, n));
         } else {
-            resistance = Given.alias(rAc.id(), "R", rAc);
-            reactance = Given.alias(xPer.id(), "X", xPer);
+            resistance = Given.alias("R", rAc);
+            reactance = Given.alias("X", xPer);
         }
         ImpedanceResult mv = mvPerAm(t, id, theta, resistance, reactance, phases);
         return new ImpedanceResult(mv.theta(), mv.resistance(), mv.reactance(), mv.r(), mv.x(), mv.z(), phases, r20, alpha);
