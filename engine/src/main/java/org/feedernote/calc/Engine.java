@@ -995,31 +995,31 @@ public final class Engine {
                 CircuitResult r = done.get(f.id());
                 Q used = r.dropExactPercent() != null && inst.basis().voltageDropMethod().value() == DropMethod.EXACT
                         ? r.dropExactPercent() : r.dropPercent();
-                terms.add(relabel(used, "ΔU(" + f.id() + ")"));
+                // Shown by the feeder's name; a candidate's sum (no-op trace) reads only the value.
+                terms.add(t.recording() ? relabel(used, "ΔU(" + f.id() + ")") : used);
             }
             terms.add(own);
             if (terms.size() == 1) {
                 return relabel(own, "ΔU_total");
             }
-            return termFormulas.eval(t, c.id() + "/vd/dU_total", "", "cumulative-drop", "ΔU_total", "d", Units.PERCENT, terms,
+            return termFormulas.eval(t, c.id(), "/vd/dU_total", "", "cumulative-drop", "ΔU_total", "d", Units.PERCENT, terms,
                     vars -> DemandFormulas.sum("cumulative-drop", "Voltage drop, origin to " + (c.isFeeder() ? "board " + c.to() : "terminals"),
                             "ΔU_total", Units.PERCENT, vars, "Drops add along the path from the origin (each feeder's percentage plus the circuit's own)"));
         }
 
         Q limit(Trace t, Circuit c) {
             Basis basis = inst.basis();
-            String id = c.id() + "/vd/limit";
             if (basis.limitsByKind()) {
                 String kind = c.load().kind().token();
                 boolean own = basis.voltageDropLimitsByKind().containsKey(kind);
                 String key = own ? kind : LoadKind.OTHER.token();
                 double limit = basis.voltageDropLimitsByKind().get(key);
                 // The texts of the step are written only where it is recorded (not for sizing candidates).
-                if (!t.recording()) return new Q(id, "ΔU_max", limit, Units.PERCENT);
-                return Given.input(t, id, "Voltage-drop limit for " + kind + " loads", "ΔU_max", limit, Units.PERCENT,
+                if (!t.recording()) return new Q(c.id(), "/vd/limit", "ΔU_max", limit, Units.PERCENT);
+                return Given.input(t, c.id() + "/vd/limit", "Voltage-drop limit for " + kind + " loads", "ΔU_max", limit, Units.PERCENT,
                         basis.voltageDropLimitsPath() + "." + key);
             }
-            return Given.setting(t, id, "Voltage-drop limit, origin to terminals", "ΔU_max", basis.voltageDropLimitPercent(),
+            return Given.setting(t, c.id(), "/vd/limit", "Voltage-drop limit, origin to terminals", "ΔU_max", basis.voltageDropLimitPercent(),
                     Units.PERCENT, "default of this program: 4 % (IEC 60364-5-52:2009, Annex G, Table G.52.1, other uses, public supply)");
         }
 

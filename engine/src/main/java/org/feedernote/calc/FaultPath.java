@@ -53,21 +53,23 @@ final class FaultPath {
         return q.as(symbol);
     }
 
-    private Q series(Trace t, String id, String title, String symbol, Q... terms) {
-        return add(t, id, title, symbol, false, terms);
+    // Steps named by owner and part ("C-12/fault" and "/R12"), joined only where recorded or read.
+
+    private Q series(Trace t, String owner, String part, String title, String symbol, Q... terms) {
+        return add(t, owner, part, title, symbol, false, terms);
     }
 
-    private Q loop(Trace t, String id, String title, String symbol, Q... terms) {
-        return add(t, id, title, symbol, true, terms);
+    private Q loop(Trace t, String owner, String part, String title, String symbol, Q... terms) {
+        return add(t, owner, part, title, symbol, true, terms);
     }
 
-    private Q add(Trace t, String id, String title, String symbol, boolean magnitudes, Q... terms) {
-        return termFormulas.eval(t, id, "", magnitudes ? "loop-sum" : "impedance-sum", symbol, "z", Units.OHM, List.of(terms),
+    private Q add(Trace t, String owner, String part, String title, String symbol, boolean magnitudes, Q... terms) {
+        return termFormulas.eval(t, owner, part, "", magnitudes ? "loop-sum" : "impedance-sum", symbol, "z", Units.OHM, List.of(terms),
                 vars -> magnitudes ? arithmeticSum(title, symbol, vars) : sum(title, symbol, vars));
     }
 
-    private Q magnitude(Trace t, String id, String symbol, Q r, Q x) {
-        return MAGNITUDE.evalAs(symbol, t, id, "", bind(R, r), bind(X, x));
+    private Q magnitude(Trace t, String owner, String part, String symbol, Q r, Q x) {
+        return MAGNITUDE.evalAs(symbol, t, owner, part, "", bind(R, r), bind(X, x));
     }
 
     // ---------------- the origin ----------------
@@ -121,7 +123,7 @@ final class FaultPath {
         Q xN = x;
         if (!(src instanceof Supply.Transformer)) {
             Q zqLoop = DOUBLE.evalAs("Z_QN", t, id, "/Z_QN", "line-neutral loop of the network",
-                    bind(Z, rel(magnitude(t, id + "/ZQ_mag", "Z_Q", r, x), "Z")));
+                    bind(Z, rel(magnitude(t, id, "/ZQ_mag", "Z_Q", r, x), "Z")));
             Q xr = rel(new Q(id + "/xr", "X/R", x.value() / r.value(), Units.NONE), "X/R");
             rN = RESISTANCE_FROM_XR.evalAs("R_QN", t, id, "/R_QN", "", bind(Z, zqLoop), bind(XR, xr));
             xN = REACTANCE_FROM_XR.evalAs("X_QN", t, id, "/X_QN", "", bind(R, rN), bind(XR, xr));
@@ -130,10 +132,10 @@ final class FaultPath {
     }
 
     private BoardFault atBoard(Trace t, String id, String board, Q r3, Q x3, Q rN, Q xN, Q ze, Q zeF) {
-        Q z3 = magnitude(t, id + "/Z3", "|Z_3|", rel(r3, "R"), rel(x3, "X"));
+        Q z3 = magnitude(t, id, "/Z3", "|Z_3|", rel(r3, "R"), rel(x3, "X"));
         Q ik3 = THREE_PHASE_FAULT.evalAs("I_k3(" + board + ")", t, id, "/Ik3", "at board " + board, bind(C_MAX, cmax), bind(U, u),
                 bind(Z, z3));
-        Q zn = magnitude(t, id + "/ZN", "|Z_N|", rel(rN, "R"), rel(xN, "X"));
+        Q zn = magnitude(t, id, "/ZN", "|Z_N|", rel(rN, "R"), rel(xN, "X"));
         Q ik1 = SINGLE_PHASE_FAULT.evalAs("I_k1(" + board + ")", t, id, "/Ik1", "at board " + board, bind(C_MAX, cmax), bind(U0, u0),
                 bind(Z, zn));
         return new BoardFault(r3, x3, rN, xN, rel(ze, "Z_e(" + board + ")"), rel(zeF, "Z_ef(" + board + ")"), ik3, ik1);
@@ -200,12 +202,12 @@ final class FaultPath {
         Q r1f = fin.r1();
         Q r2f = fin.r2();
 
-        Q r12 = series(t, id + "/R12", "Resistance of the loop, at θ_max", "R_1 + R_2", r1, r2);
-        Q zLoop = magnitude(t, id + "/Zloop", "Z_loop", rel(r12, "R"), rel(xLoop, "X"));
-        Q zs = loop(t, id + "/Zs", "Earth-fault loop impedance at the far end", "Z_s", rel(at.ze(), "Z_e"), zLoop);
-        Q r12f = series(t, id + "/R12f", "Resistance of the loop, at θ_f", "R_1f + R_2f", r1f, r2f);
-        Q zLoopF = magnitude(t, id + "/Zloopf", "Z_loop,f", rel(r12f, "R"), rel(xLoop, "X"));
-        Q zsf = loop(t, id + "/Zsf", "Earth-fault loop impedance at the far end, at θ_f", "Z_sf", rel(at.zeF(), "Z_ef"), zLoopF);
+        Q r12 = series(t, id, "/R12", "Resistance of the loop, at θ_max", "R_1 + R_2", r1, r2);
+        Q zLoop = magnitude(t, id, "/Zloop", "Z_loop", rel(r12, "R"), rel(xLoop, "X"));
+        Q zs = loop(t, id, "/Zs", "Earth-fault loop impedance at the far end", "Z_s", rel(at.ze(), "Z_e"), zLoop);
+        Q r12f = series(t, id, "/R12f", "Resistance of the loop, at θ_f", "R_1f + R_2f", r1f, r2f);
+        Q zLoopF = magnitude(t, id, "/Zloopf", "Z_loop,f", rel(r12f, "R"), rel(xLoop, "X"));
+        Q zsf = loop(t, id, "/Zsf", "Earth-fault loop impedance at the far end, at θ_f", "Z_sf", rel(at.zeF(), "Z_ef"), zLoopF);
         Q ief = MIN_EARTH_FAULT.evalAs("I_ef,min", t, id, "/Ief", "far end", bind(C_MIN, cmin), bind(U0, u0), bind(ZS, zsf));
 
         List<CheckResult> checks = new ArrayList<>();
@@ -222,11 +224,11 @@ final class FaultPath {
         if (c.isFeeder()) {
             Trace bt = t.section(id + "/board", "Fault levels at board " + c.to(), "");
             String bid = "fault/" + c.to();
-            Q r3 = series(bt, bid + "/R3", "Phase resistance to board " + c.to() + ", 20 °C", "R_3", rel(at.r3(), "R_3(" + c.from() + ")"), r1_20);
-            Q x3 = series(bt, bid + "/X3", "Phase reactance to board " + c.to(), "X_3", rel(at.x3(), "X_3(" + c.from() + ")"), x1);
-            Q rN = series(bt, bid + "/RN", "Line-neutral loop resistance to board " + c.to() + ", 20 °C", "R_N",
+            Q r3 = series(bt, bid, "/R3", "Phase resistance to board " + c.to() + ", 20 °C", "R_3", rel(at.r3(), "R_3(" + c.from() + ")"), r1_20);
+            Q x3 = series(bt, bid, "/X3", "Phase reactance to board " + c.to(), "X_3", rel(at.x3(), "X_3(" + c.from() + ")"), x1);
+            Q rN = series(bt, bid, "/RN", "Line-neutral loop resistance to board " + c.to() + ", 20 °C", "R_N",
                     rel(at.rN(), "R_N(" + c.from() + ")"), rel(r1_20, "R_1,20"), rel(r1_20, "R_neutral,20"));
-            Q xN = series(bt, bid + "/XN", "Line-neutral loop reactance to board " + c.to(), "X_N", rel(at.xN(), "X_N(" + c.from() + ")"), xLoop);
+            Q xN = series(bt, bid, "/XN", "Line-neutral loop reactance to board " + c.to(), "X_N", rel(at.xN(), "X_N(" + c.from() + ")"), xLoop);
             downstream = atBoard(bt, bid, c.to(), r3, x3, rN, xN, zs, zsf);
         }
         return new FaultPath.CircuitFault(prospective, zs, d.zsMax(), ief, checks, downstream, List.of());

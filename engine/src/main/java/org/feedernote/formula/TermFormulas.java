@@ -51,6 +51,12 @@ public final class TermFormulas {
      */
     public Q eval(Trace trace, String stepId, String form, String kind, String symbol, String keyPrefix, String unit,
                   List<Q> quantities, Function<List<Var>, Formula> make) {
+        return eval(trace, stepId, "", form, kind, symbol, keyPrefix, unit, quantities, make);
+    }
+
+    /** As above, for the step owner + part: joined only where the step is recorded or its id read. */
+    public Q eval(Trace trace, String owner, String part, String form, String kind, String symbol, String keyPrefix, String unit,
+                  List<Q> quantities, Function<List<Var>, Formula> make) {
         Made m = made.computeIfAbsent(new Key(kind, symbol, quantities.size()), k -> {
             List<Var> vars = new ArrayList<>();
             for (int i = 0; i < k.terms(); i++) vars.add(new Var(keyPrefix + i, keyPrefix + i, unit));
@@ -72,9 +78,9 @@ public final class TermFormulas {
                 bindings[i] = Formula.bind(v, q);
             }
             List<Var> vars = Collections.unmodifiableList(shown);
-            return make.apply(vars).evalLike(m.formula(), vars, trace, stepId, form, bindings);
+            return make.apply(vars).evalLike(m.formula(), vars, trace, owner + part, form, bindings);
         }
         for (int i = 0; i < bindings.length; i++) bindings[i] = Formula.bind(m.vars().get(i), quantities.get(i));
-        return m.formula().eval(trace, stepId, form, bindings);
+        return m.formula().eval(trace, owner, part, form, bindings);
     }
 }
