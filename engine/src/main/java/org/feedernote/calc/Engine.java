@@ -742,7 +742,7 @@ public final class Engine {
             Q theta = temperature(zt, c, ib, iz);
             ImpedanceResult z = impedance.impedance(zt, id + "/z", c.cable(), theta, f, phases);
 
-            Trace vt = ct.section(id + "/vd", "Voltage drop", phases == 3 ? "three-phase, referred to U" : "single-phase, referred to U_0");
+            Trace vt = !ct.recording() ? ct : ct.section(id + "/vd", "Voltage drop", phases == 3 ? "three-phase, referred to U" : "single-phase, referred to U_0");
             String vid = id + "/vd";
             Q length = Given.input(vt, vid, "/L", "Route length", "L", c.lengthM(), Units.M, c.where().path(), ".length_m");
             Q un = Given.alias("U_n", phases == 3 ? u : u0);
@@ -827,7 +827,7 @@ public final class Engine {
                 checks.add(check(vt, o.vid(), "/check", "voltage-drop", "Voltage drop, origin to terminals", cumulative, limit,
                         "IEC 60364-5-52:2009, 525 and Annex G"));
                 if (c.load().kind() == LoadKind.MOTOR && c.load().startingCurrentMultiple() != null) {
-                    Trace st = ct.section(id + "/st", "Motor starting", "voltage dip at the motor terminals while it starts");
+                    Trace st = !ct.recording() ? ct : ct.section(id + "/st", "Motor starting", "voltage dip at the motor terminals while it starts");
                     MotorStart start = motorStart(st, c, o, done);
                     dip = start.dip();
                     checks.add(start.check());
@@ -836,7 +836,7 @@ public final class Engine {
                             "No starting_current_multiple is given: the starting dip is not checked.", "");
                 }
             }
-            Trace ft = ct.section(id + "/fault", "Fault path", "earth-fault loop, disconnection, short-circuit withstand, breaking capacity");
+            Trace ft = !ct.recording() ? ct : ct.section(id + "/fault", "Fault path", "earth-fault loop, disconnection, short-circuit withstand, breaking capacity");
             Q thetaMax = data.maxTemperature(ft, id, "/fault/theta_max", c.cable().insulation());
             FaultPath.CircuitFault fault = faultPath.circuit(ft, c, o.z(), boardFault(c.from(), done), o.length(), o.in(), o.phases(),
                     thetaMax);
