@@ -2,12 +2,14 @@ package org.feedernote.input;
 
 import java.util.AbstractMap;
 import java.util.AbstractSet;
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collection;
 import java.util.Collections;
 import java.util.Iterator;
+import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.NoSuchElementException;
+import java.util.Map;
 import java.util.Set;
 
 /**
@@ -54,19 +56,7 @@ final class Fields extends AbstractMap<String, Node.Entry> {
     @Override public Set<Entry<String, Node.Entry>> entrySet() {
         return new AbstractSet<>() {
             @Override public Iterator<Entry<String, Node.Entry>> iterator() {
-                return new Iterator<>() {
-                    private int next;
-
-                    @Override public boolean hasNext() {
-                        return next < entries.length;
-                    }
-
-                    @Override public Entry<String, Node.Entry> next() {
-                        if (next >= entries.length) throw new NoSuchElementException();
-                        Node.Entry e = entries[next++];
-                        return new SimpleImmutableEntry<>(e.key(), e);
-                    }
-                };
+                return Arrays.stream(entries).<Entry<String, Node.Entry>>map(e -> new SimpleImmutableEntry<>(e.key(), e)).iterator();
             }
 
             @Override public int size() {
@@ -75,11 +65,35 @@ final class Fields extends AbstractMap<String, Node.Entry> {
         };
     }
 
-    /** The entries in the order given (no key twice), as the smallest map that serves. */
-    static java.util.Map<String, Node.Entry> of(List<Node.Entry> inOrder) {
-        if (inOrder.size() <= MOST_SEARCHED) return new Fields(inOrder.toArray(new Node.Entry[0]));
-        java.util.Map<String, Node.Entry> map = new java.util.LinkedHashMap<>();
-        for (Node.Entry e : inOrder) map.put(e.key(), e);
-        return Collections.unmodifiableMap(map);
+    /**
+     * Collects a mapping's entries in the order of the file and finds a key given twice: by search
+     * while the mapping is small, by a hash map (kept as the mapping) once it is larger.
+     */
+    static final class Builder {
+        private final List<Node.Entry> inOrder = new ArrayList<>();
+        private Map<String, Node.Entry> byKey;
+
+        /** The entry already given for key, or null. */
+        Node.Entry first(String key) {
+            if (byKey != null) return byKey.get(key);
+            for (Node.Entry e : inOrder) if (e.key().equals(key)) return e;
+            return null;
+        }
+
+        void add(Node.Entry e) {
+            if (byKey != null) {
+                byKey.put(e.key(), e);
+                return;
+            }
+            inOrder.add(e);
+            if (inOrder.size() > MOST_SEARCHED) {
+                byKey = new LinkedHashMap<>();
+                for (Node.Entry x : inOrder) byKey.put(x.key(), x);
+            }
+        }
+
+        Map<String, Node.Entry> build() {
+            return byKey != null ? Collections.unmodifiableMap(byKey) : new Fields(inOrder.toArray(new Node.Entry[0]));
+        }
     }
 }

@@ -3,7 +3,6 @@ package org.feedernote.input;
 import java.io.IOException;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonLocation;
@@ -94,41 +93,28 @@ final class TreeReader {
         }
     }
 
-    private static Node.Entry find(List<Node.Entry> entries, String key) {
-        for (Node.Entry e : entries) if (e.key().equals(key)) return e;
-        return null;
-    }
-
     private Node value(JsonParser p, Where path) throws IOException {
         JsonToken t = p.currentToken();
         long pos = pos(p);
         switch (t) {
             case START_OBJECT: {
-                List<Node.Entry> entries = new ArrayList<>();
-                Map<String, Node.Entry> byKey = null;
+                Fields.Builder entries = new Fields.Builder();
                 while (p.nextToken() == JsonToken.FIELD_NAME) {
                     String key = p.currentName();
                     long keyAt = pos(p);
                     p.nextToken();
                     Where childPath = path.child(key);
                     Node child = value(p, childPath);
-                    Node.Entry first = byKey != null ? byKey.get(key) : find(entries, key);
+                    Node.Entry first = entries.first(key);
                     if (first != null) {
                         Node.Pos keyPos = Node.Pos.unpack(keyAt);
                         errors.add(new InputError(file, keyPos.line(), keyPos.column(), childPath.text(),
                                 "the key '" + key + "' is given twice (first at line " + first.keyPos().line() + ")"));
                     } else {
-                        Node.Entry e = new Node.Entry(key, keyAt, child);
-                        entries.add(e);
-                        if (byKey == null && entries.size() > Fields.MOST_SEARCHED) {
-                            byKey = new java.util.HashMap<>();
-                            for (Node.Entry x : entries) byKey.put(x.key(), x);
-                        } else if (byKey != null) {
-                            byKey.put(key, e);
-                        }
+                        entries.add(new Node.Entry(key, keyAt, child));
                     }
                 }
-                return new Node.Obj(pos, Fields.of(entries));
+                return new Node.Obj(pos, entries.build());
             }
             case START_ARRAY: {
                 List<Node> items = new ArrayList<>();
