@@ -2,15 +2,18 @@ package org.feedernote.calc;
 
 /**
  * The outcome of one named check. value and limit are in unit; atLeast is true for checks of
- * the form value ≥ limit (a capacity against a current), false for value ≤ limit. A check that
- * cannot be made for want of data is not determined: it fails, and its value is not meaningful.
+ * the form value ≥ limit (a capacity against a current), false for value ≤ limit.
+ * <p>
+ * A check that is not worked as a comparison has determined false and a remark that says why:
+ * either it cannot be made for want of data (it fails; the remark names the missing key), or the
+ * standard deems it met by a rule (it passes; the remark cites the rule).
  */
 public record CheckResult(String name, String title, boolean pass, double value, double limit, String unit,
-                          boolean atLeast, String stepOwner, String stepPart, boolean determined) {
+                          boolean atLeast, String stepOwner, String stepPart, boolean determined, String remark) {
 
     public CheckResult(String name, String title, boolean pass, double value, double limit, String unit, boolean atLeast,
                        String stepId) {
-        this(name, title, pass, value, limit, unit, atLeast, stepId, "", true);
+        this(name, title, pass, value, limit, unit, atLeast, stepId, "", true, null);
     }
 
     /**
@@ -20,7 +23,7 @@ public record CheckResult(String name, String title, boolean pass, double value,
      */
     public CheckResult(String name, String title, boolean pass, double value, double limit, String unit, boolean atLeast,
                        String stepOwner, String stepPart) {
-        this(name, title, pass, value, limit, unit, atLeast, stepOwner, stepPart, true);
+        this(name, title, pass, value, limit, unit, atLeast, stepOwner, stepPart, true, null);
     }
 
     /** The id of the trace step that shows the check. */
@@ -28,14 +31,27 @@ public record CheckResult(String name, String title, boolean pass, double value,
         return stepPart.isEmpty() ? stepOwner : stepOwner + stepPart;
     }
 
-    /** A check that cannot be made: it fails, and says why in the trace step it names (owner + part). */
-    public static CheckResult undetermined(String name, String title, String unit, String stepOwner, String stepPart) {
-        return new CheckResult(name, title, false, 0, 0, unit, false, stepOwner, stepPart, false);
+    /**
+     * A check that cannot be made: it fails. why says what is missing, naming the input key that
+     * would supply it ("device.breaking_capacity_ka is not given"); the trace step (owner + part) shows it.
+     */
+    public static CheckResult undetermined(String name, String title, String unit, String stepOwner, String stepPart, String why) {
+        return new CheckResult(name, title, false, 0, 0, unit, false, stepOwner, stepPart, false, "not determined: " + why);
     }
 
-    /** How close the check is to its limit: 1 at the limit, above 1 failing. */
+    /** A check the standard deems met by a rule (rule says which and why): it passes without a comparison. */
+    public static CheckResult deemed(String name, String title, String unit, String stepOwner, String stepPart, String rule) {
+        return new CheckResult(name, title, true, 0, 0, unit, false, stepOwner, stepPart, false, "deemed met: " + rule);
+    }
+
+    /** True for a check deemed met by a rule rather than worked. */
+    public boolean deemed() {
+        return !determined && pass;
+    }
+
+    /** How close the check is to its limit: 1 at the limit, above 1 failing; 0 for a check deemed met. */
     public double utilisation() {
-        if (!determined) return Double.POSITIVE_INFINITY;
+        if (!determined) return pass ? 0 : Double.POSITIVE_INFINITY;
         if (atLeast) return value == 0 ? Double.POSITIVE_INFINITY : limit / value;
         return limit == 0 ? Double.POSITIVE_INFINITY : value / limit;
     }

@@ -839,7 +839,7 @@ public final class Engine {
             Trace ft = !ct.recording() ? ct : ct.section(id + "/fault", "Fault path", "earth-fault loop, disconnection, short-circuit withstand, breaking capacity");
             Q thetaMax = data.maxTemperature(ft, id, "/fault/theta_max", c.cable().insulation());
             FaultPath.CircuitFault fault = faultPath.circuit(ft, c, o.z(), boardFault(c.from(), done), o.length(), o.in(), o.phases(),
-                    thetaMax);
+                    thetaMax, o.checks().stream().allMatch(CheckResult::pass));
             checks.addAll(fault.checks());
             if (c.isFeeder() && finalPass) {
                 boardChecks.put(c.to(), faultPath.boardWithstand(ft, boards.get(c.to()), fault.downstream()));

@@ -30,6 +30,7 @@ final class FaultPath {
     private final Installation inst;
     private final ReferenceData data;
     private final FaultData faults;
+    private final Withstand withstand;
     private final Q u;
     private final Q u0;
     private Q cmax;
@@ -41,6 +42,7 @@ final class FaultPath {
         this.inst = inst;
         this.data = data;
         this.faults = new FaultData(data);
+        this.withstand = new Withstand(faults);
         this.u = u;
         this.u0 = u0;
     }
@@ -83,6 +85,8 @@ final class FaultPath {
         String id = "fault/origin";
         Q r;
         Q x;
+        Q rN = null;
+        Q xN = null;
         Q ze;
         Supply.Source src = inst.supply().source();
         if (src instanceof Supply.Transformer tr) {
@@ -92,11 +96,43 @@ final class FaultPath {
             Q xr = Given.setting(t, id, "/xr", "X/R of the transformer", "X/R", new Setting<>(tr.xrRatio() == null ? 5.0 : tr.xrRatio(),
                     tr.xrRatio() != null, "supply.source.transformer.x_r_ratio"), Units.NONE, "assumption of this program: 5 (common practice, no source)");
             Q z = TRANSFORMER_IMPEDANCE.eval(t, id, "/Z_T", "", bind(UK, uk), bind(U, u), bind(SR, sr));
-            r = RESISTANCE_FROM_XR.evalAs("R_T", t, id, "/R_T", "", bind(Z, z), bind(XR, xr));
-            x = REACTANCE_FROM_XR.evalAs("X_T", t, id, "/X_T", "", bind(R, r), bind(XR, xr));
-            if (t.recording()) Given.decision(t, id + "/loop", "Loop impedance of the source", "a transformer at the origin (upstream network taken as infinite; Dyn vector group, Z_0 ≈ Z_1)",
-                    "the line-neutral and line-earth loops at the origin have the impedance Z_T", "IEC 60909-0:2016, 6.3", z.id());
-            ze = rel(z, "Z_e");
+            Q rT = RESISTANCE_FROM_XR.evalAs("R_T", t, id, "/R_T", "", bind(Z, z), bind(XR, xr));
+            Q xT = REACTANCE_FROM_XR.evalAs("X_T", t, id, "/X_T", "", bind(R, rT), bind(XR, xr));
+            Q xRel = RELATIVE_REACTANCE.eval(t, id, "/x_T", "", bind(XT, xT), bind(SR, sr), bind(U, u));
+            Q kT = TRANSFORMER_CORRECTION.eval(t, id, "/K_T", "", bind(C_MAX, cmax), bind(XT_REL, xRel));
+            Q rTK = CORRECTED.evalAs("R_TK", t, id, "/R_TK", "resistance", bind(KT, kT), bind(Z, rel(rT, "R_T")));
+            Q xTK = CORRECTED.evalAs("X_TK", t, id, "/X_TK", "reactance", bind(KT, kT), bind(Z, rel(xT, "X_T")));
+            if (tr.networkFaultLevelMva() == null) {
+                if (t.recording()) Given.decision(t, id + "/network", "MV network at the primary", "supply.source.transformer.network_fault_level_mva is not given",
+                        "the network's impedance is neglected (an infinite network): the maximum fault currents are the largest possible for this transformer",
+                        "IEC 60909-0:2016, 6.2", z.id());
+                if (t.recording()) Given.decision(t, id + "/loop", "Loop impedance of the source", "a transformer at the origin (Dyn vector group, Z_0 ≈ Z_1)",
+                        "the line-neutral loop for the maximum currents has the corrected impedance Z_TK; the earth-fault loop Z_e has Z_T, uncorrected",
+                        "IEC 60909-0:2016, 6.3.3", z.id());
+                r = rTK;
+                x = xTK;
+                rN = rTK;
+                xN = xTK;
+                ze = rel(z, "Z_e");
+            } else {
+                Q skq = Given.input(t, id + "/SkQ", "Short-circuit power of the MV network at the primary", "S″_kQ", tr.networkFaultLevelMva(), "MVA",
+                        "supply.source.transformer.network_fault_level_mva");
+                Q zq = NETWORK_FROM_POWER.eval(t, id, "/Z_Qt", "", bind(C_MAX, cmax), bind(U, u), bind(SKQ, skq));
+                Q xq = NETWORK_REACTANCE.eval(t, id, "/X_Qt", "", bind(ZQ, zq));
+                Q rq = NETWORK_RESISTANCE.eval(t, id, "/R_Qt", "", bind(XQ, xq));
+                if (t.recording()) Given.decision(t, id + "/loop", "Loop impedance of the source", "a Dyn transformer fed from an MV network of S″_kQ given",
+                        "the three-phase path has Z_Qt + Z_TK; the single-phase loops take 2/3 of the network's impedance (the delta winding blocks its zero sequence)",
+                        "IEC 60909-0:2016, 6.2, 6.3.3 and 7.1.2 (from memory)", z.id());
+                r = series(t, id, "/R_src", "Resistance of the source, maximum currents", "R_Q + R_TK", rq, rTK);
+                x = series(t, id, "/X_src", "Reactance of the source", "X_Q + X_TK", xq, xTK);
+                Q rq23 = TWO_THIRDS.evalAs("R_Q,loop", t, id, "/R_Q_loop", "", bind(Z, rel(rq, "R_Qt")));
+                Q xq23 = TWO_THIRDS.evalAs("X_Q,loop", t, id, "/X_Q_loop", "", bind(Z, rel(xq, "X_Qt")));
+                rN = series(t, id, "/R_srcN", "Resistance of the source, line-neutral loop", "R_N", rq23, rTK);
+                xN = series(t, id, "/X_srcN", "Reactance of the source, line-neutral loop", "X_N", xq23, xTK);
+                Q rE = series(t, id, "/R_e", "Resistance of the source, earth-fault loop", "R_e", rq23, rT);
+                Q xE = series(t, id, "/X_e", "Reactance of the source, earth-fault loop", "X_e", xq23, xT);
+                ze = magnitude(t, id, "/Ze", "Z_e", rE, xE);
+            }
         } else {
             Supply.Utility ut = (Supply.Utility) src;
             Q xr = Given.setting(t, id, "/xr", "X/R of the network", "X/R", new Setting<>(ut.xrRatio() == null ? 1.0 : ut.xrRatio(),
@@ -119,8 +155,6 @@ final class FaultPath {
             r = RESISTANCE_FROM_XR.evalAs("R_Q", t, id, "/R_Q", "", bind(Z, zq), bind(XR, xr));
             x = REACTANCE_FROM_XR.evalAs("X_Q", t, id, "/X_Q", "", bind(R, r), bind(XR, xr));
         }
-        Q rN = r;
-        Q xN = x;
         if (!(src instanceof Supply.Transformer)) {
             Q zqLoop = DOUBLE.evalAs("Z_QN", t, id, "/Z_QN", "line-neutral loop of the network",
                     bind(Z, rel(magnitude(t, id, "/ZQ_mag", "Z_Q", r, x), "Z")));
@@ -180,7 +214,12 @@ final class FaultPath {
         return new Conductors(r1, r2);
     }
 
-    CircuitFault circuit(Trace t, Circuit c, ImpedanceResult z, BoardFault at, Q length, Q in, int phases, Q thetaMax) {
+    /**
+     * @param overloadProtected whether the circuit's own checks found the device protecting it
+     *                          against overload (capacity and overload met): the condition of 435.1
+     */
+    CircuitFault circuit(Trace t, Circuit c, ImpedanceResult z, BoardFault at, Q length, Q in, int phases, Q thetaMax,
+                         boolean overloadProtected) {
         String id = c.id() + "/fault";
         Cable cable = c.cable();
         Q n = Given.derived(t, id, "/n", "Conductors in parallel per phase", "n", cable.parallel(), Units.NONE,
@@ -214,11 +253,11 @@ final class FaultPath {
         Disconnection d = disconnection(t, c, id, zs, in);
         checks.add(d.check());
         Q prospective = rel(phases == 3 ? at.ik3() : at.ik1(), phases == 3 ? "I_k3" : "I_k1");
-        checks.add(adiabatic(t, c, id + "/sc", "short-circuit", "Short-circuit withstand of the line conductor", prospective, null, d, in,
-                cable.size().mm2(), thetaMax, false));
-        checks.add(adiabatic(t, c, id + "/pc", "protective-conductor", "Withstand of the protective conductor", null, ief, d, in,
-                cable.cpc().mm2(), thetaMax, true));
-        checks.add(breaking(t, c, id + "/bc", prospective));
+        Withstand.Operation op = new Withstand.Operation(d.ia(), d.time(), d.idn());
+        CheckResult breaking = withstand.breaking(t, c, id + "/bc", prospective);
+        checks.add(withstand.line(t, c, id + "/sc", prospective, op, in, thetaMax, overloadProtected, breaking));
+        checks.add(withstand.protective(t, c, id + "/pc", ief, op, in, thetaMax));
+        checks.add(breaking);
 
         BoardFault downstream = null;
         if (c.isFeeder()) {
@@ -234,21 +273,30 @@ final class FaultPath {
         return new FaultPath.CircuitFault(prospective, zs, d.zsMax(), ief, checks, downstream, List.of());
     }
 
-    record Disconnection(CheckResult check, Q zsMax, Q ia, Q time, boolean instantaneous) {}
+    /**
+     * The disconnection check and what the withstand checks need of it: the current that operates
+     * the overcurrent part within the required time (null where unknown), that time, and I_Δn of an
+     * RCD part (null without one).
+     */
+    record Disconnection(CheckResult check, Q zsMax, Q ia, Q time, Q idn) {}
 
     private Disconnection disconnection(Trace t, Circuit c, String id, Q zs, Q in) {
         Device dev = c.device();
         Basis b = inst.basis();
         boolean socket = c.load() != null && c.load().kind() == LoadKind.SOCKET;
         boolean finalTime = !c.isFeeder() && (in.value() <= (socket ? 63 : 32) + 1e-9);
+        boolean tt = b.earthing().value() == Earthing.TT;
         Setting<Double> ts = finalTime ? b.disconnectionTimeFinalS() : b.disconnectionTimeDistributionS();
+        // The basis defaults are TN's; a TT installation that does not set them takes TT's times.
+        if (tt && !ts.given()) ts = new Setting<>(finalTime ? 0.2 : 1.0, false, ts.path());
         if (t.recording()) Given.decision(t, id + "/t-rule", "Required disconnection time",
-                c.isFeeder() ? "a distribution circuit (feeder)" : (finalTime ? "a final circuit with I_n ≤ " + (socket ? "63 A (socket outlets)" : "32 A")
-                        : "a final circuit with I_n > " + (socket ? "63 A" : "32 A")),
+                (c.isFeeder() ? "a distribution circuit (feeder)" : (finalTime ? "a final circuit with I_n ≤ " + (socket ? "63 A (socket outlets)" : "32 A")
+                        : "a final circuit with I_n > " + (socket ? "63 A" : "32 A"))) + "; " + b.earthing().value().token() + " system",
                 finalTime ? "the final-circuit time applies" : "the distribution-circuit time applies",
-                "IEC 60364-4-41:2005, 411.3.2.2 and 411.3.2.3", in.id());
+                "IEC 60364-4-41:2005+AMD1:2017, 411.3.2.2 to 411.3.2.4 (from memory)", in.id());
         Q time = Given.setting(t, id, "/t", "Maximum disconnection time", "t", ts, Units.S,
-                finalTime ? "IEC 60364-4-41:2005, Table 41.1 (TN, 230 V: 0.4 s)" : "IEC 60364-4-41:2005, 411.3.2.3 (TN: 5 s)");
+                finalTime ? (tt ? "IEC 60364-4-41:2005, Table 41.1 (TT, 230 V: 0.2 s)" : "IEC 60364-4-41:2005, Table 41.1 (TN, 230 V: 0.4 s)")
+                        : (tt ? "IEC 60364-4-41:2005, 411.3.2.4 (TT: 1 s)" : "IEC 60364-4-41:2005, 411.3.2.3 (TN: 5 s)"));
         String name = "disconnection";
         String title = "Automatic disconnection: Z_s ≤ Z_s,max";
         if (b.earthing().value() == Earthing.TT && dev.rcdResidualA() != null) {
@@ -261,8 +309,8 @@ final class FaultPath {
             boolean pass = ul.value() <= 50 + 1e-12;
             if (t.recording()) t.add(new Step.Check(id + "/check", "Fault protection by RCD: R_A · I_Δn ≤ 50 V", name, ul, "≤", limit, pass,
                     "IEC 60364-4-41:2005, 411.5.3"));
-            Q ia = RCD_TRIP.eval(t, id, "/Ia", "RCD", bind(IDN, idn));
-            return new Disconnection(new CheckResult(name, "R_A · I_Δn ≤ 50 V", pass, ul.value(), 50, Units.V, false, id, "/check"), null, ia, time, true);
+            Q ia = tripCurrent(t, c, id, in);
+            return new Disconnection(new CheckResult(name, "R_A · I_Δn ≤ 50 V", pass, ul.value(), 50, Units.V, false, id, "/check"), null, ia, time, idn);
         }
         if (b.earthing().value() == Earthing.TT) {
             if (t.recording()) Given.note(t, id + "/tt-ocpd", "TT system without an RCD", "Fault protection by the overcurrent device: Z_s · I_a ≤ U_0 (IEC 60364-4-41:2005, 411.5.4).", "");
@@ -273,7 +321,8 @@ final class FaultPath {
                     : "device.disconnection_current_a (the fuse's current for disconnection within " + NumberFormatPolicyLite.s(time.value()) + " s, from the manufacturer's curve)";
             if (t.recording()) Given.decision(t, id + "/check", "Automatic disconnection", "the input does not give " + missing,
                     "FAIL: disconnection cannot be shown", "IEC 60364-4-41:2005, 411.4.4");
-            return new Disconnection(CheckResult.undetermined(name, title, Units.OHM, id, "/check"), null, null, time, false);
+            return new Disconnection(CheckResult.undetermined(name, title, Units.OHM, id, "/check", c.where().path() + "." + missing + " is not given"),
+                    null, null, time, null);
         }
         Q zmax = MAX_LOOP.eval(t, id, "/Zs_max", "", bind(C_MIN, cmin), bind(U0, u0), bind(IA, ia));
         boolean pass = zs.value() <= zmax.value() + 1e-12;
@@ -288,10 +337,10 @@ final class FaultPath {
             if (t.recording()) t.add(new Step.Check(id + "/check2", "Automatic disconnection by the RCD: Z_s ≤ Z_s,max(RCD)", name, rel(zs, "Z_s"), "≤",
                     zmaxR, passR, "IEC 60364-4-41:2005, 411.4.5"));
             return new Disconnection(new CheckResult(name, title, passR, zs.value(), zmaxR.value(), Units.OHM, false, id, "/check2"),
-                    zmaxR, iaR, time, true);
+                    zmaxR, ia, time, idn);
         }
         return new Disconnection(new CheckResult(name, title, pass, zs.value(), zmax.value(), Units.OHM, false, id, "/check1"),
-                zmax, ia, time, true);
+                zmax, ia, time, null);
     }
 
     /** The current that operates the device within the required time, or null where the input lacks it. */
@@ -318,109 +367,6 @@ final class FaultPath {
             default:
                 return null;
         }
-    }
-
-    private CheckResult adiabatic(Trace t, Circuit c, String id, String name, String title, Q prospectiveKa, Q currentA,
-                                  Disconnection d, Q in, double size, Q thetaMax, boolean protective) {
-        Cable cable = c.cable();
-        Device dev = c.device();
-        Q current = currentA != null ? currentA
-                : rel(A_FROM_KA.eval(t, id, "/I", "", bind(IK_KA, prospectiveKa)), "I_k");
-        Q i2t;
-        if (dev.letThroughA2s() != null) {
-            i2t = Given.input(t, id, "/I2t", "Let-through energy of the device", "I²t", dev.letThroughA2s(), "A²s", c.where().path(),
-                    ".device.let_through_a2s");
-        } else {
-            boolean instantaneous = d.ia() != null && current.value() >= d.ia().value() - 1e-9;
-            Step.Lookup class3 = (dev.kind() == DeviceKind.MCB || dev.kind() == DeviceKind.RCBO) && instantaneous
-                    ? faults.classThreeLetThrough(id + "/I2t", dev.curve(), in.value(), current.value() / 1000) : null;
-            if (class3 != null) {
-                i2t = Given.lookupUsing(t, class3, current);
-                if (t.recording()) Given.note(t, id + "/class3", "Energy-limiting class", "The circuit-breaker is taken as energy-limiting class 3, the usual class of modern MCBs; confirm with the manufacturer.", "");
-            } else if (dev.kind() == DeviceKind.FUSE && !protective) {
-                if (t.recording()) Given.decision(t, id + "/check", title, "the input gives no let_through_a2s for the fuse",
-                        "FAIL: the let-through energy cannot be shown (give device.let_through_a2s from the manufacturer's data)", "IEC 60364-4-43:2008, 434.5.2");
-                return CheckResult.undetermined(name, title, Units.MM2, id, "/check");
-            } else if (d.ia() == null) {
-                if (t.recording()) Given.decision(t, id + "/check", title, "the operating current of the device is not known", "FAIL: cannot be shown", "IEC 60364-4-43:2008, 434.5.2");
-                return CheckResult.undetermined(name, title, Units.MM2, id, "/check");
-            } else {
-                Q time = instantaneous
-                        ? Given.derived(t, id, "/t", "Operating time", "t", 0.1, Units.S, T_INSTANT)
-                        : Given.alias("t", d.time());
-                if (!instantaneous) {
-                    if (t.recording()) Given.decision(t, id + "/t-basis", "Operating time", "I = " + NumberFormatPolicyLite.a(current.value()) + " A is below I_a = "
-                            + NumberFormatPolicyLite.a(d.ia().value()) + " A", "the device is taken to operate within the required time t", "IEC 60364-4-43:2008, 434.5.2");
-                }
-                i2t = ENERGY.eval(t, id, "/I2t", instantaneous ? "instantaneous region" : "within the required time",
-                        bind(I, current), bind(T, time));
-            }
-        }
-        Q k = kFactor(t, id, cable, thetaMax, protective);
-        Q smin = MIN_SIZE.evalAs(protective ? "S_PE,min" : "S_min", t, id, "/Smin", "", bind(I2T, rel(i2t, "I²t")), bind(KF, k));
-        Q installed = Given.derived(t, id, "/S", protective ? "Protective conductor installed" : "Line conductor installed",
-                protective ? "S_PE" : "S", size * cable.parallel(), Units.MM2,
-                cable.parallel() > 1 ? "design input (" + cable.parallel() + " conductors in parallel share the fault current)" : "design input");
-        boolean pass = installed.value() >= smin.value() - 1e-12;
-        if (t.recording()) t.add(new Step.Check(id + "/check", title, name, installed, "≥", smin, pass,
-                "IEC 60364-4-43:2008, 434.5.2" + (protective ? "; IEC 60364-5-54:2011, 543.1.2" : "")));
-        return new CheckResult(name, title, pass, installed.value(), smin.value(), Units.MM2, true, id, "/check");
-    }
-
-    /** What the k factor depends on: the conductor and insulation materials and the initial temperature. */
-    private record KInputs(Conductor conductor, Insulation insulation, boolean separate, double thetaMax) {
-        // Written out, as the sizing's other lookup keys (see TermFormulas.Key).
-        @Override public boolean equals(Object o) {
-            return o instanceof KInputs k && conductor == k.conductor && insulation == k.insulation && separate == k.separate
-                    && Double.compare(thetaMax, k.thetaMax) == 0;
-        }
-
-        @Override public int hashCode() {
-            return ((conductor.ordinal() * 31 + insulation.ordinal()) * 31 + (separate ? 1 : 0)) * 31 + Double.hashCode(thetaMax);
-        }
-    }
-
-    /** k by its inputs, for the sizing's candidates (the no-op trace): few combinations serve thousands of circuits. */
-    private final Map<KInputs, Double> kValues = new java.util.concurrent.ConcurrentHashMap<>();
-
-    private Q kFactor(Trace t, String id, Cable cable, Q thetaMax, boolean protective) {
-        if (t.recording()) return kFactorSteps(t, id, cable, thetaMax, protective);
-        KInputs key = new KInputs(cable.conductor(), cable.insulation(), protective && cable.type() == CableType.SINGLE_CORE,
-                thetaMax.value());
-        double k = kValues.computeIfAbsent(key, x -> kFactorSteps(t, id, cable, thetaMax, protective).value());
-        return new Q(id, "/k", K_FACTOR.symbol(), k, K_FACTOR.unit());
-    }
-
-    private Q kFactorSteps(Trace t, String id, Cable cable, Q thetaMax, boolean protective) {
-        Q kc = Given.lookup(t, faults.materialConstant(id + "/K", cable.conductor()));
-        Q beta = Given.lookup(t, faults.beta(id + "/beta", cable.conductor()));
-        Q thetaF = Given.lookup(t, faults.finalTemperature(id + "/theta_f", cable.insulation()));
-        Q thetaI;
-        if (protective && cable.type() == CableType.SINGLE_CORE) {
-            thetaI = Given.lookup(t, faults.separateInitialTemperature(id + "/theta_i", cable.insulation()));
-            if (t.recording()) Given.decision(t, id + "/cpc-kind", "Kind of protective conductor", "single-core cables: the protective conductor is a separate insulated conductor",
-                    "initial temperature 30 °C (Table A.54.2)", "IEC 60364-5-54:2011, Table A.54.2", thetaI.id());
-        } else {
-            thetaI = rel(thetaMax, "θ_i");
-            if (t.recording()) Given.decision(t, id + "/theta-i", "Initial conductor temperature", protective ? "the protective conductor is a core of the cable or in its sheath"
-                    : "the line conductor starts at its maximum operating temperature", "θ_i = θ_max", "IEC 60364-5-54:2011, Tables A.54.3 and A.54.4", thetaMax.id());
-        }
-        return K_FACTOR.eval(t, id, "/k", "", bind(K, kc), bind(BETA, beta), bind(THETA_F, thetaF), bind(THETA_I, thetaI));
-    }
-
-    private CheckResult breaking(Trace t, Circuit c, String id, Q prospective) {
-        String title = "Breaking capacity ≥ prospective fault current";
-        if (c.device().breakingCapacityKa() == null) {
-            if (t.recording()) Given.decision(t, id + "/check", title, "the input gives no breaking_capacity_ka for the device",
-                    "FAIL: the device cannot be shown to break " + NumberFormatPolicyLite.ka(prospective.value()) + " kA", "IEC 60364-4-43:2008, 434.5.1");
-            return CheckResult.undetermined("breaking-capacity", title, Units.KA, id, "/check");
-        }
-        Q icu = Given.input(t, id, "/Icu", "Rated breaking capacity of the device", "I_cu", c.device().breakingCapacityKa(), Units.KA,
-                c.where().path(), ".device.breaking_capacity_ka");
-        boolean pass = icu.value() >= prospective.value() - 1e-12;
-        if (t.recording()) t.add(new Step.Check(id + "/check", title, "breaking-capacity", icu, "≥", prospective, pass,
-                "IEC 60364-4-43:2008, 434.5.1"));
-        return new CheckResult("breaking-capacity", title, pass, icu.value(), prospective.value(), Units.KA, true, id, "/check");
     }
 
     /** Plain number text for decisions (the report's policy is not reachable from calc). */

@@ -23,6 +23,11 @@ import org.feedernote.trace.Trace;
  */
 final class Sizing {
     private static final int MAX_STEPS = 10_000;
+    /**
+     * The largest single cable the sizing chooses: beyond it a designer runs cables in parallel
+     * (common practice, no source).
+     */
+    static final double PRACTICAL_LARGEST_MM2 = 300;
 
     private final Engine.Run run;
     private final List<Double> sizes = ReferenceData.standardSizes();
@@ -185,6 +190,10 @@ final class Sizing {
          * from the sizes): read here by every circuit below a feeder each time the feeder grows.
          */
         double limitPct = Double.NaN;
+        /** Whether no enlargement upstream can bring this load within its drop limit (null until asked). */
+        Boolean beyondHelp;
+        /** A feeder whose enlargement would make a device below it unable to break the fault current: it grows no more. */
+        boolean blocked;
         /** A motor whose starting dip is checked: whether the dip exceeds its limit with the current sizes. */
         boolean startingFails;
         /**
@@ -230,7 +239,7 @@ final class Sizing {
         }
 
         boolean canGrow() {
-            return autoSized && !Double.isNaN(next());
+            return autoSized && !blocked && !Double.isNaN(next()) && next() <= PRACTICAL_LARGEST_MM2 + 1e-9;
         }
 
         double ratio() {
@@ -294,7 +303,9 @@ final class Sizing {
     /** Whether a final circuit fails its drop or starting limit with the current sizes. */
     private void track(Slot slot) {
         if (slot.feeder) return;
-        boolean fails = cumulative(slot) > slot.limitPct + 1e-9 || slot.startingChecked && slot.startingFails;
+        boolean dropFails = cumulative(slot) > slot.limitPct + 1e-9;
+        boolean fails = dropFails || slot.startingChecked && slot.startingFails;
+        if (fails && slot.seq < 0 && dropFails && beyondHelp(slot)) return;
         if (fails && slot.seq < 0) {
             failingDrop.add(slot.id);
             slot.seq = nextSeq++;
@@ -335,6 +346,34 @@ final class Sizing {
         for (int i = 0; i < motors.size(); i++) motors.get(i).startingFails = startingFails(done.get(i).get());
         track(slot);
         for (Slot a : slot.below) track(a);
+    }
+
+    /**
+     * Whether a load's own drop alone, at the largest size it may have (its given size, or the
+     * largest size the sizing may choose), exceeds its limit: then no enlargement upstream can
+     * bring it within the limit, and none is made for it. Decided once; noted on the load.
+     */
+    private boolean beyondHelp(Slot slot) {
+        if (slot.beyondHelp == null) {
+            double largest = slot.autoSized ? largestAllowed(slot) : slot.current.cable().size().mm2();
+            double own = Double.isNaN(largest) ? Double.NaN : ownDropAt(slot, largest);
+            slot.beyondHelp = own > slot.limitPct + 1e-9;
+            if (slot.beyondHelp) {
+                note(slot.id, "Voltage drop cannot be met", "its own drop alone is " + Engine.fixed3(own) + " % at "
+                        + mm2(largest) + (slot.autoSized ? " (the largest size the sizing may choose)" : " (the size given)")
+                        + ", above the limit " + Engine.fixed3(slot.limitPct) + " %",
+                        "no enlargement upstream can meet it: no feeder is enlarged for it, and the circuit fails its drop limit");
+                decidedBy.put(slot.id, "voltage-drop");
+            }
+        }
+        return slot.beyondHelp;
+    }
+
+    /** The largest covered size not above the practical largest single cable, or NaN. */
+    private double largestAllowed(Slot slot) {
+        double best = Double.NaN;
+        for (double size : slot.covered) if (size <= PRACTICAL_LARGEST_MM2 + 1e-9) best = size;
+        return best;
     }
 
     private double ownDropAt(Slot k, double size) {
@@ -444,7 +483,7 @@ final class Sizing {
     }
 
     /** Why a candidate fails its own checks, or null when it passes them. */
-    private static Failure ownFailure(CircuitResult r) {
+    private Failure ownFailure(CircuitResult r) {
         CheckResult cap = r.check("capacity");
         if (cap != null && !cap.pass()) {
             return new Failure("I_z " + Engine.trim(r.capacity().value()) + " A < I_n " + Engine.trim(r.rating().value()) + " A"
@@ -463,7 +502,8 @@ final class Sizing {
             return new Failure("S below the adiabatic minimum " + Engine.trim(sc.limit()) + " mm²", "short-circuit");
         }
         CheckResult pc = r.check("protective-conductor");
-        if (pc != null && !pc.pass() && pc.determined() && r.circuit().cable().cpc().mm2() < r.circuit().cable().size().mm2()) {
+        // A larger cable helps its protective conductor only where that conductor follows the cable's size.
+        if (pc != null && !pc.pass() && pc.determined() && run.original(r.id()).cable().cpc().auto()) {
             return new Failure("protective conductor below the adiabatic minimum " + Engine.trim(pc.limit()) + " mm²", "protective-conductor");
         }
         return null;
@@ -589,7 +629,23 @@ final class Sizing {
             }
         }
         weighNextSteps(best, batch);
+        java.util.Set<String> breakingBefore = best.slot().feeder ? breakingMetBelow(best.slot()) : null;
         apply(best.slot(), best.to());
+        if (breakingBefore != null) {
+            java.util.Set<String> lost = new java.util.TreeSet<>(breakingBefore);
+            lost.removeAll(breakingMetBelow(best.slot()));
+            if (!lost.isEmpty()) {
+                Slot f = best.slot();
+                upsized.remove(upsized.size() - 1);
+                resize(f, withCpc(f.original, best.from()), ownDropAt(f, best.from()));
+                changed(f);
+                f.blocked = true;
+                decidedBy.remove(f.id);
+                note(f.id, "Enlargement refused", mm2(best.from()) + " → " + mm2(best.to()) + " would raise the fault level below it so that the device of "
+                        + String.join(", ", lost) + " could no longer break it", "kept at " + mm2(best.from()) + "; it is not enlarged further");
+                return true;
+            }
+        }
         for (Candidate c : batch) {
             note(c.id(), "Enlarged for the cumulative voltage drop", "its own drop limit fails; no feeder step buys more drop per volume",
                     mm2(c.from()) + " → " + mm2(c.to()) + " (" + Engine.fixed3(c.gain()) + " % per " + Engine.fixed3(c.cost()) + " dm³)");
@@ -623,6 +679,24 @@ final class Sizing {
         });
     }
 
+    /**
+     * The circuits below a feeder whose device can break the prospective fault current at its
+     * origin with the sizes as they stand (a device without a breaking capacity is never counted).
+     */
+    private java.util.Set<String> breakingMetBelow(Slot feeder) {
+        java.util.Set<String> ok = new java.util.HashSet<>();
+        for (Slot a : feeder.below) {
+            Double icu = a.current.device().breakingCapacityKa();
+            Circuit upstream = run.feederOf.get(a.current.from());
+            if (icu == null || upstream == null) continue;
+            BoardFault at = results.get(upstream.id()).downstream();
+            boolean three = a.feeder || a.current.load().phases() == 3;
+            double ik = (three ? at.ik3() : at.ik1()).value();
+            if (icu >= ik - 1e-12) ok.add(a.id);
+        }
+        return ok;
+    }
+
     /** Enlarges a circuit chosen by a step; every candidate final circuit was failing when the step began. */
     private void apply(Slot slot, double size) {
         boolean ownDropFails = !slot.feeder && cumulative(slot) > slot.limitPct + 1e-9;
@@ -653,7 +727,8 @@ final class Sizing {
                 resize(slot, k, savedPct);
                 changed(slot);
             } else {
-                note(id, "Enlargement undone", "later enlargements upstream made it unnecessary", mm2(k.cable().size().mm2()) + " → " + mm2(prev));
+                note(id, "Enlargement undone", "the loads it was made for stay within their limits without it, once the other enlargements were made",
+                        mm2(k.cable().size().mm2()) + " → " + mm2(prev));
             }
         }
     }
@@ -669,7 +744,7 @@ final class Sizing {
     void record(Trace ct, Circuit original, Circuit sized) {
         boolean autoSize = original.cable().size().auto();
         boolean autoCpc = original.cable().cpc().auto();
-        if (!autoSize && !autoCpc || !ct.recording()) return;
+        if (!autoSize && !autoCpc && !notes.containsKey(original.id()) || !ct.recording()) return;
         Trace t = ct.section(original.id() + "/size", "Size selection", "size_mm2: " + (autoSize ? "auto" : "given")
                 + ", cpc_mm2: " + (autoCpc ? "auto" : "given"));
         int i = 0;

@@ -82,4 +82,20 @@ public final class FaultData {
     private static String ka(double v) {
         return ReferenceData.sizeKey(Math.round(v * 1000) / 1000.0);
     }
+
+    /**
+     * The maximum break time of an RCD at a residual current of multiple · I_Δn: the time of the
+     * largest tabulated multiple not above it (1, 2 or 5; the slower time, on the safe side), or
+     * null below I_Δn, where the RCD need not operate.
+     */
+    public Step.Lookup rcdBreakTime(String id, boolean delayed, double multiple) {
+        int m = multiple >= 5 - 1e-9 ? 5 : multiple >= 2 - 1e-9 ? 2 : multiple >= 1 - 1e-9 ? 1 : 0;
+        if (m == 0) return null;
+        String type = delayed ? "S" : "general";
+        ReferenceTable t = data.table("rcd-break-times.csv");
+        Step.Lookup s = t.lookup(id, "Maximum break time of the RCD", "t_RCD", "s", type + " " + m, "max_break_s",
+                (delayed ? "time-delayed type S" : "general type") + ", " + m + " I_Δn", "maximum break time");
+        return new Step.Lookup(s.q(), s.title(), s.table(), s.row() + " (residual current " + ReferenceData.sizeKey(Math.round(multiple * 100) / 100.0)
+                + " I_Δn)", s.column(), "the largest tabulated multiple not above the current", List.of());
+    }
 }

@@ -22,7 +22,8 @@ public final class ReferenceData {
             "insulation-temperatures.csv", "insulation-thickness.csv", "capacity-pvc-2.csv", "capacity-pvc-3.csv",
             "capacity-xlpe-2.csv", "capacity-xlpe-3.csv", "capacity-pvc-efg.csv", "capacity-xlpe-efg.csv",
             "ambient-air.csv", "ambient-ground.csv", "grouping.csv", "grouping-ground.csv", "soil-resistivity.csv",
-            "thermal-insulation.csv", "harmonics.csv", "devices.csv", "adiabatic.csv", "energy-limiting.csv");
+            "thermal-insulation.csv", "harmonics.csv", "devices.csv", "adiabatic.csv", "energy-limiting.csv",
+            "rcd-break-times.csv");
 
     private final java.util.Map<String, ReferenceTable> byFile = new java.util.LinkedHashMap<>();
     private final ReferenceTable resistance;

@@ -118,6 +118,39 @@ public final class FaultFormulas {
     public static final Formula MIN_SIZE = new Formula("s-min", "Minimum cross-section for the let-through energy", "S_min", MM2,
             div(sqrt(v(I2T)), v(KF)), "IEC 60364-4-43:2008, 434.5.2 and IEC 60364-5-54:2011, 543.1.2 (S ≥ √(I²t) / k)");
 
+    // ---- the MV network behind a transformer, and the transformer's correction factor ----
+
+    public static final Var SKQ = var("SkQ", "S″_kQ", "MVA");
+    public static final Var ZQ = var("ZQ", "Z_Qt", OHM);
+    public static final Var XQ = var("XQ", "X_Qt", OHM);
+    public static final Var XT = var("XT", "X_T", OHM);
+    public static final Var XT_REL = var("xT", "x_T", NONE);
+    public static final Var KT = var("KT", "K_T", NONE);
+
+    public static final Formula NETWORK_FROM_POWER = new Formula("z-network-power", "MV network impedance referred to the LV side", "Z_Qt", OHM,
+            div(mul(v(C_MAX), sq(v(U))), mul(n(1000000), v(SKQ))),
+            IEC_60909 + ", 6.2, eq. (1) referred to the LV side through the rated voltage ratio (S″_kQ in MVA; from memory)");
+
+    public static final Formula NETWORK_REACTANCE = new Formula("x-network", "MV network reactance", "X_Qt", OHM,
+            mul(new Expr.Num(0.995, "0.995"), v(ZQ)), IEC_60909 + ", 6.2: X_Q = 0.995 Z_Q where R_Q is not known (from memory)");
+
+    public static final Formula NETWORK_RESISTANCE = new Formula("r-network", "MV network resistance", "R_Qt", OHM,
+            mul(new Expr.Num(0.1, "0.1"), v(XQ)), IEC_60909 + ", 6.2: R_Q = 0.1 X_Q where R_Q is not known (from memory)");
+
+    public static final Formula RELATIVE_REACTANCE = new Formula("x-t-relative", "Relative reactance of the transformer", "x_T", NONE,
+            div(mul(v(XT), n(1000), v(SR)), sq(v(U))), IEC_60909 + ", 6.3.3: x_T = X_T / (U_rT² / S_rT)");
+
+    public static final Formula TRANSFORMER_CORRECTION = new Formula("k-t", "Impedance correction factor of the transformer", "K_T", NONE,
+            div(mul(new Expr.Num(0.95, "0.95"), v(C_MAX)), add(n(1), mul(new Expr.Num(0.6, "0.6"), v(XT_REL)))),
+            IEC_60909 + ", 6.3.3, eq. (12a) (network transformer; from memory)");
+
+    public static final Formula CORRECTED = new Formula("z-corrected", "Corrected transformer impedance component", "Z_TK", OHM,
+            mul(v(KT), v(Z)), IEC_60909 + ", 6.3.3: Z_TK = K_T · Z_T (for the maximum short-circuit currents)");
+
+    public static final Formula TWO_THIRDS = new Formula("two-thirds", "Network share of the single-phase loop", "Z", OHM,
+            div(mul(n(2), v(Z)), n(3)),
+            "Dyn transformer: the network enters the positive and negative sequences only, the loop (2Z_1 + Z_0)/3 takes 2/3 of it (IEC 60909-0:2016, 7.1.2; from memory)");
+
     public static final Var IK_KA = var("Ik_kA", "I_k", KA);
 
     public static final Formula A_FROM_KA = new Formula("a-from-ka", "Fault current in A", "I", A, mul(n(1000), v(IK_KA)), "1 kA = 1000 A");

@@ -274,7 +274,7 @@ public final class InputReader {
         if (t instanceof Node.Obj) {
             Double kva = num(t, "rating_kva");
             Double z = num(t, "impedance_percent");
-            src = new Supply.Transformer(kva == null ? 0 : kva, z == null ? 0 : z, num(t, "x_r_ratio"));
+            src = new Supply.Transformer(kva == null ? 0 : kva, z == null ? 0 : z, num(t, "x_r_ratio"), num(t, "network_fault_level_mva"));
         } else if (u instanceof Node.Obj) {
             Double fl = num(u, "fault_level_ka");
             Double ze = num(u, "loop_impedance_ohm");
@@ -413,7 +413,9 @@ public final class InputReader {
         Double ratingA = num(rating);
         if (kind == null || (rating == null)) return null;
         return new Device(kind, ratingA, curve, num(d, "instantaneous_a"), num(d, "breaking_capacity_ka"),
-                num(d, "disconnection_current_a"), num(d, "residual_current_a"), num(d, "let_through_a2s"));
+                num(d, "disconnection_current_a"), num(d, "residual_current_a"), num(d, "let_through_a2s"),
+                word(d, "protection", Protection.class, Protection.OVERLOAD_AND_FAULT),
+                word(d, "residual_type", ResidualType.class, ResidualType.GENERAL));
     }
 
     private Load load(Node l, String path, Cable cable, Basis basis) {

@@ -86,7 +86,8 @@ public final class InputSchema {
         Spec.Obj transformer = obj("a transformer at the origin",
                 req("rating_kva", positive("rated power in kVA")),
                 req("impedance_percent", range("short-circuit impedance in per cent", 0, true, 100, true)),
-                opt("x_r_ratio", positive("X/R ratio of the transformer"), "5 (assumption, common practice)"));
+                opt("x_r_ratio", positive("X/R ratio of the transformer"), "5 (assumption, common practice)"),
+                opt("network_fault_level_mva", range("short-circuit power of the MV network at the transformer's primary in MVA", 0, true, 100000, false), "infinite (the network's impedance neglected)"));
         Spec.Obj utility = obj("a supply from the distribution network",
                 opt("fault_level_ka", positive("prospective fault current at the origin in kA"), "none"),
                 opt("loop_impedance_ohm", positive("external earth-fault loop impedance Ze in Ω"), "none"),
@@ -140,7 +141,9 @@ public final class InputSchema {
                 opt("breaking_capacity_ka", positive("rated breaking capacity in kA"), "none"),
                 opt("disconnection_current_a", positive("current that operates the device within the required disconnection time, from the manufacturer's curve, in A (required for fuses; for circuit-breakers it replaces the instantaneous basis)"), "none"),
                 opt("residual_current_a", positive("rated residual operating current IΔn of an RCD or RCBO in A"), "none"),
-                opt("let_through_a2s", positive("let-through energy I²t from the manufacturer's data in A²s"), "none"));
+                opt("let_through_a2s", positive("let-through energy I²t from the manufacturer's data in A²s"), "none"),
+                opt("protection", word("what the device protects against: overload-and-fault, or fault-only where a separate overload relay protects the circuit against overload", Protection.class), "overload-and-fault"),
+                opt("residual_type", word("break-time type of an RCD or RCBO: general, or S (time-delayed)", ResidualType.class), "general"));
         Spec.Obj circuit = objOne("a circuit", List.of(List.of("load", "to")),
                 req("id", id("circuit id, unique across boards and circuits")),
                 opt("description", text("what the circuit is"), "empty"),

@@ -2,4 +2,28 @@ package org.feedernote.model;
 
 /** The protective device at the origin of a circuit. ratingA is null for 'auto'. */
 public record Device(DeviceKind kind, Double ratingA, Curve curve, Double instantaneousA, Double breakingCapacityKa,
-                     Double disconnectionCurrentA, Double rcdResidualA, Double letThroughA2s) {}
+                     Double disconnectionCurrentA, Double rcdResidualA, Double letThroughA2s, Protection protection,
+                     ResidualType residualType) {
+
+    /** As the design input gives it without the optional protection and residual type: the usual device. */
+    public Device(DeviceKind kind, Double ratingA, Curve curve, Double instantaneousA, Double breakingCapacityKa,
+                  Double disconnectionCurrentA, Double rcdResidualA, Double letThroughA2s) {
+        this(kind, ratingA, curve, instantaneousA, breakingCapacityKa, disconnectionCurrentA, rcdResidualA, letThroughA2s,
+                Protection.OVERLOAD_AND_FAULT, ResidualType.GENERAL);
+    }
+
+    /** True where the device protects against fault only (a separate overload relay protects against overload). */
+    public boolean faultProtectionOnly() {
+        return protection == Protection.FAULT_ONLY;
+    }
+
+    /** True for a time-delayed (type S) residual-current part. */
+    public boolean rcdTimeDelayed() {
+        return residualType == ResidualType.S;
+    }
+
+    public Device withRating(double rating) {
+        return new Device(kind, rating, curve, instantaneousA, breakingCapacityKa, disconnectionCurrentA, rcdResidualA, letThroughA2s,
+                protection, residualType);
+    }
+}

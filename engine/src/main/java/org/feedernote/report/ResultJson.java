@@ -127,7 +127,7 @@ public final class ResultJson {
             } else {
                 cn.putNull("value");
                 cn.putNull("limit");
-                cn.put("note", "not determined: the input lacks data this check needs (see the trace)");
+                cn.put("note", k.remark());
             }
             cn.put("unit", k.unit());
         }

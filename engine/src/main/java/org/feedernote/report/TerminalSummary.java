@@ -42,6 +42,18 @@ public final class TerminalSummary {
                  .append(k.unit()).append(")\n");
             }
         }
+        List<String> undetermined = new ArrayList<>();
+        for (var c : result.circuits()) {
+            for (CheckResult k : c.checks()) {
+                if (!k.determined() && !k.pass()) undetermined.add(c.id() + " " + k.name() + ": " + k.remark());
+            }
+        }
+        if (!undetermined.isEmpty()) {
+            b.append('\n').append("Checks not determined (each fails until the input gives what it lacks):\n");
+            int shown = Math.min(undetermined.size(), 40);
+            for (int i = 0; i < shown; i++) b.append("  ").append(undetermined.get(i)).append('\n');
+            if (shown < undetermined.size()) b.append("  … and ").append(undetermined.size() - shown).append(" more (see --json or the note)\n");
+        }
         b.append('\n');
         if (failing == 0) {
             b.append(result.notPerformed().isEmpty() ? "PASS: every check passes (" : "PASS: every check made passes (")

@@ -130,8 +130,7 @@ public final class SyntheticInstallation {
             Circuit c = r.circuit();
             Device d = c.device();
             if (d.ratingA() == null) {
-                d = new Device(d.kind(), r.rating().value(), d.curve(), d.instantaneousA(), d.breakingCapacityKa(),
-                        d.disconnectionCurrentA(), d.rcdResidualA(), d.letThroughA2s());
+                d = d.withRating(r.rating().value());
             }
             fixed.add(new Circuit(c.id(), c.description(), c.from(), c.to(), c.load(), c.phase(), c.lengthM(), c.cable(),
                     c.conditions(), d, c.designCurrentA(), c.where()));

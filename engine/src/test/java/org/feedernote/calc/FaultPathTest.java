@@ -50,10 +50,28 @@ class FaultPathTest {
     @Test
     void transformerFaultLevelByIec60909() {
         // Hand calculation, IEC 60909-0:2016 eq. (29) with c_max = 1.10 (Table 1) and an infinite
-        // MV network: Z_T = 0.06 × 400² / 1 000 000 = 0.0096 Ω; I_k3 = 1.1 × 400 / (√3 × 0.0096) = 26.46 kA.
+        // MV network: Z_T = 0.06 × 400² / 1 000 000 = 0.0096 Ω; x_T = 0.06 × 6/√37 = 0.05918;
+        // K_T = 0.95 × 1.10 / (1 + 0.6 × 0.05918) = 1.00917 (6.3.3, eq. (12a), from memory);
+        // I_k3 = 1.1 × 400 / (√3 × 1.00917 × 0.0096) = 26.22 kA.
         Result r = Fixtures.run(install("transformer: {rating_kva: 1000, impedance_percent: 6, x_r_ratio: 6}", "",
                 finalCircuit("{kind: mcb, curve: B, rating_a: 16, breaking_capacity_ka: 10}", CABLE, 10)));
-        assertEquals(26.46, r.boards().get(0).faultKa().value(), 0.01);
+        assertEquals(26.22, r.boards().get(0).faultKa().value(), 0.01);
+    }
+
+    @Test
+    void theMvNetworkAtThePrimaryLowersTheFaultLevel() {
+        // Hand calculation, IEC 60909-0:2016, 6.2 (from memory): S″_kQ = 250 MVA referred to 400 V,
+        // Z_Qt = 1.1 × 400² / 250·10⁶ = 0.000704 Ω, X_Qt = 0.995 Z_Qt, R_Qt = 0.1 X_Qt; the
+        // transformer as above with K_T = 1.00917; I_k3 = 1.1 × 400 / (√3 × |Z_Qt + K_T Z_T|) = 24.45 kA.
+        Result r = Fixtures.run(install("transformer: {rating_kva: 1000, impedance_percent: 6, x_r_ratio: 6, network_fault_level_mva: 250}", "",
+                finalCircuit("{kind: mcb, curve: B, rating_a: 16, breaking_capacity_ka: 10}", CABLE, 10)));
+        double zq = 1.1 * 400 * 400 / 250e6;
+        double xq = 0.995 * zq;
+        double kt = 0.95 * 1.1 / (1 + 0.6 * 0.06 * 6 / Math.sqrt(37));
+        double rt = 0.0096 / Math.sqrt(37);
+        double ik = 1.1 * 400 / (Math.sqrt(3) * Math.hypot(0.1 * xq + kt * rt, xq + kt * 6 * rt)) / 1000;
+        assertEquals(24.45, ik, 0.01);
+        assertEquals(ik, r.boards().get(0).faultKa().value(), 1e-9);
     }
 
     @Test
@@ -71,7 +89,8 @@ class FaultPathTest {
         CircuitResult feeder = r.circuits().get(0);
         double zt = 0.06 * 400 * 400 / 1e6;
         double rt = zt / Math.sqrt(37);
-        Complex source = new Complex(rt, 6 * rt);
+        double kt = 0.95 * 1.1 / (1 + 0.6 * 0.06 * 6 / Math.sqrt(37));
+        Complex source = new Complex(kt * rt, kt * 6 * rt);
         // IEC 60228 Table 2, 95 mm² copper: 0.193 Ω/km at 20 °C (from memory); the reactance is the engine's derived value.
         Complex cable = new Complex(0.193 * 50 / 1000, feeder.impedance().reactance().value() * 50 / 1000);
         double expected = 1.1 * 400 / (Math.sqrt(3) * source.add(cable).abs()) / 1000;
