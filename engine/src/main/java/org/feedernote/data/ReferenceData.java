@@ -25,6 +25,16 @@ public final class ReferenceData {
             "thermal-insulation.csv", "harmonics.csv", "devices.csv", "adiabatic.csv", "energy-limiting.csv",
             "rcd-break-times.csv");
 
+    /**
+     * Tables read and looked up ({@link DeviceData}, {@link CableBuildData}) but not yet used by the
+     * calculation. They are left out of {@link #version()} so that adding them changes no note's
+     * fingerprint; when the calculation starts citing one, move it to {@link #TABLE_FILES} (a
+     * deliberate change of the fingerprint and of the golden files).
+     */
+    static final List<String> NOT_YET_CALCULATED_FILES = List.of("mcb-time-current.csv", "mcb-let-through.csv",
+            "gg-fuse-disconnection.csv", "gg-fuse-gates.csv", "mccb-releases.csv", "rcd-operating-times.csv",
+            "twin-earth-cpc.csv", "armour-steel-wire.csv", "k-protective-layers.csv");
+
     private final java.util.Map<String, ReferenceTable> byFile = new java.util.LinkedHashMap<>();
     private final ReferenceTable resistance;
     private final ReferenceTable materials;
@@ -34,11 +44,12 @@ public final class ReferenceData {
 
     private ReferenceData() {
         for (String f : TABLE_FILES) byFile.put(f, ReferenceTable.resource(f));
+        all = List.copyOf(byFile.values());
+        for (String f : NOT_YET_CALCULATED_FILES) byFile.put(f, ReferenceTable.resource(f));
         resistance = byFile.get("conductor-resistance.csv");
         materials = byFile.get("conductor-materials.csv");
         temperatures = byFile.get("insulation-temperatures.csv");
         thickness = byFile.get("insulation-thickness.csv");
-        all = List.copyOf(byFile.values());
     }
 
     ReferenceTable table(String file) {
@@ -56,7 +67,13 @@ public final class ReferenceData {
         return Holder.INSTANCE;
     }
 
+    /** The tables the calculation uses, which {@link #version()} hashes. */
     public List<ReferenceTable> tables() { return all; }
+
+    /** The tables read for lookups the calculation does not make yet (not in {@link #version()}). */
+    public List<ReferenceTable> notYetCalculatedTables() {
+        return NOT_YET_CALCULATED_FILES.stream().map(byFile::get).toList();
+    }
 
     public List<TableRef> refs() { return all.stream().map(ReferenceTable::ref).toList(); }
 
