@@ -8,7 +8,9 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 
+import org.feedernote.data.DeviceData;
 import org.feedernote.data.FaultData;
+import org.feedernote.data.FuseSystem;
 import org.feedernote.formula.TermFormulas;
 import org.feedernote.data.ReferenceData;
 import org.feedernote.expr.Var;
@@ -31,6 +33,7 @@ final class FaultPath {
     private final ReferenceData data;
     private final FaultData faults;
     private final Withstand withstand;
+    private final DeviceData devices;
     private final Q u;
     private final Q u0;
     private Q cmax;
@@ -42,7 +45,8 @@ final class FaultPath {
         this.inst = inst;
         this.data = data;
         this.faults = new FaultData(data);
-        this.withstand = new Withstand(faults);
+        this.devices = new DeviceData(data);
+        this.withstand = new Withstand(faults, devices);
         this.u = u;
         this.u0 = u0;
     }
@@ -309,13 +313,13 @@ final class FaultPath {
             boolean pass = ul.value() <= 50 + 1e-12;
             if (t.recording()) t.add(new Step.Check(id + "/check", "Fault protection by RCD: R_A · I_Δn ≤ 50 V", name, ul, "≤", limit, pass,
                     "IEC 60364-4-41:2005, 411.5.3"));
-            Q ia = tripCurrent(t, c, id, in);
+            Q ia = tripCurrent(t, c, id, in, time);
             return new Disconnection(new CheckResult(name, "R_A · I_Δn ≤ 50 V", pass, ul.value(), 50, Units.V, false, id, "/check"), null, ia, time, idn);
         }
         if (b.earthing().value() == Earthing.TT) {
             if (t.recording()) Given.note(t, id + "/tt-ocpd", "TT system without an RCD", "Fault protection by the overcurrent device: Z_s · I_a ≤ U_0 (IEC 60364-4-41:2005, 411.5.4).", "");
         }
-        Q ia = tripCurrent(t, c, id, in);
+        Q ia = tripCurrent(t, c, id, in, time);
         if (ia == null) {
             String missing = dev.kind() == DeviceKind.MCCB ? "device.instantaneous_a (the MCCB's instantaneous setting)"
                     : "device.disconnection_current_a (the fuse's current for disconnection within " + NumberFormatPolicyLite.s(time.value()) + " s, from the manufacturer's curve)";
@@ -344,7 +348,7 @@ final class FaultPath {
     }
 
     /** The current that operates the device within the required time, or null where the input lacks it. */
-    private Q tripCurrent(Trace t, Circuit c, String id, Q in) {
+    private Q tripCurrent(Trace t, Circuit c, String id, Q in, Q time) {
         Device dev = c.device();
         if (dev.disconnectionCurrentA() != null) {
             return Given.input(t, id, "/Ia", "Current that operates the device within the time (manufacturer's curve)", "I_a",
@@ -353,10 +357,16 @@ final class FaultPath {
         switch (dev.kind()) {
             case MCB:
             case RCBO: {
-                double m = dev.curve() == Curve.B ? 5 : dev.curve() == Curve.C ? 10 : 20;
-                Q mq = Given.derived(t, id, "/m", t.recording() ? "Instantaneous tripping multiple, type " + dev.curve().token() : "", "m", m,
-                        Units.NONE, "IEC 60898-1:2015, Table 7 (upper limit: B 5 I_n, C 10 I_n, D 20 I_n), from memory");
+                Q mq = Given.lookup(t, devices.instantaneousUpperMultiple(id + "/m", dev.curve()));
                 return TRIP_MULTIPLE.eval(t, id, "/Ia", t.recording() ? "type " + dev.curve().token() : "", bind(MULT, mq), bind(IN, in));
+            }
+            case FUSE: {
+                Step.Lookup ia = devices.fuseOperatingCurrent(id + "/Ia", FuseSystem.BS88_2, in.value(), time.value());
+                if (ia == null) return null;
+                if (t.recording()) Given.decision(t, id + "/fuse-basis", "Characteristic of the fuse",
+                        "the input gives no disconnection_current_a", "the fuse is taken as a gG fuse to IEC 60269-2 (BS 88-2, systems E and G): "
+                                + "the current that operates it within t follows from the published maximum Z_s", "BS 7671:2008+A1:2011, Tables 41.2 and 41.4");
+                return Given.lookup(t, ia);
             }
             case MCCB: {
                 if (dev.instantaneousA() == null) return null;

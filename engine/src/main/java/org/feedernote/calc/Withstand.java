@@ -5,6 +5,7 @@ import static org.feedernote.formula.Formula.bind;
 
 import java.util.Map;
 
+import org.feedernote.data.DeviceData;
 import org.feedernote.data.FaultData;
 import org.feedernote.formula.Units;
 import org.feedernote.model.Cable;
@@ -30,9 +31,11 @@ final class Withstand {
     private static final String CLAUSE_435 = "IEC 60364-4-43:2008, 435.1";
 
     private final FaultData faults;
+    private final DeviceData devices;
 
-    Withstand(FaultData faults) {
+    Withstand(FaultData faults, DeviceData devices) {
         this.faults = faults;
+        this.devices = devices;
     }
 
     /**
@@ -153,7 +156,7 @@ final class Withstand {
                 return new LetThrough(ENERGY.eval(t, id, "/I2t", "within the required time", bind(I, current), bind(T, Given.alias("t", op.time()))), null);
             }
             if (dev.kind() == DeviceKind.MCB || dev.kind() == DeviceKind.RCBO) {
-                Step.Lookup class3 = faults.classThreeLetThrough(id + "/I2t_cl3", dev.curve(), in.value(), i / 1000);
+                Step.Lookup class3 = devices.classThreeLetThrough(id + "/I2t_cl3", dev.curve(), in.value(), i);
                 Q t01 = Given.derived(t, id, "/t", "Operating time", "t", 0.1, Units.S, T_INSTANT);
                 if (class3 == null) {
                     return new LetThrough(ENERGY.eval(t, id, "/I2t", "instantaneous region", bind(I, current), bind(T, t01)), null);
@@ -178,7 +181,11 @@ final class Withstand {
             return new LetThrough(ENERGY.eval(t, id, "/I2t", "instantaneous region", bind(I, current), bind(T, t01)), null);
         }
         if (op.idn() != null && i >= op.idn().value() - 1e-12) {
-            Step.Lookup tr = faults.rcdBreakTime(id + "/t_rcd", dev.rcdTimeDelayed(), i / op.idn().value());
+            double multiple = i / op.idn().value();
+            DeviceData.Residual at = multiple >= 5 - 1e-9 ? DeviceData.Residual.FIVE : multiple >= 2 - 1e-9 ? DeviceData.Residual.TWO
+                    : DeviceData.Residual.ONE;
+            // Between the tabulated multiples the slower time of the lower one applies (on the safe side).
+            Step.Lookup tr = devices.rcdMaximumBreakTime(id + "/t_rcd", dev.rcdTimeDelayed(), at);
             if (t.recording()) Given.decision(t, id + "/t-basis", "Part of the device that operates",
                     "I = " + FaultPath.NumberFormatPolicyLite.a(i) + " A is " + (op.ia() == null ? "" : "below the current that operates the overcurrent part ("
                             + FaultPath.NumberFormatPolicyLite.a(op.ia().value()) + " A) and ") + "not below I_Δn",

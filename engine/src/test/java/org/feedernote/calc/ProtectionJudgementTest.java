@@ -1,0 +1,212 @@
+package org.feedernote.calc;
+
+import static org.junit.jupiter.api.Assertions.*;
+
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Collectors;
+
+import org.junit.jupiter.api.Test;
+
+import org.feedernote.Fixtures;
+
+/**
+ * The rules that decide whether a circuit's protection is adequate, each against the clause or
+ * table that sets it, on small invented circuits (the inputs are ours; the rules and values are the
+ * standards').
+ */
+class ProtectionJudgementTest {
+
+    private static final String TWIN_25 = "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 2.5, cpc_mm2: 1.5}";
+
+    private static String circuit(String id, String load, double length, String cable, String device) {
+        return """
+                - id: %s
+                  from: B0
+                  load: %s
+                  length_m: %s
+                  cable: %s
+                  installation: {method: C}
+                  device: %s
+                """.formatted(id, load, length, cable, device);
+    }
+
+    private static CircuitResult only(Result r) {
+        return r.circuits().get(0);
+    }
+
+    @Test
+    void theOverloadDeviceThatCanBreakTheFaultCurrentProtectsTheLineConductorsAgainstShortCircuit() {
+        // IEC 60364-4-43:2008, 435.1 (BS 7671:2018, 435.1): a device that meets 433 and whose rated
+        // breaking capacity is not less than the prospective fault current at its point also protects
+        // the conductors on its load side against short circuit (clause numbers from memory).
+        Result r = Fixtures.run(Fixtures.oneBoard("", circuit("C1", "{kind: other, current_a: 12, power_factor: 0.9, phases: 1}", 20,
+                "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: auto, cpc_mm2: auto}",
+                "{kind: mcb, curve: B, rating_a: 16, breaking_capacity_ka: 10}")));
+        CheckResult sc = only(r).check("short-circuit");
+        assertTrue(sc.pass());
+        assertTrue(sc.deemed());
+        assertTrue(sc.remark().contains("435.1"), sc.remark());
+        // The size is the capacity's, not the adiabatic check's at 10 kA: 1.5 mm² carries 16 A on method C
+        // (IEC 60364-5-52:2009, Table B.52.4, PVC, two loaded conductors, method C: 19.5 A).
+        assertEquals(1.5, only(r).circuit().cable().size().mm2());
+    }
+
+    @Test
+    void aDeviceThatCannotBreakTheFaultCurrentLeavesTheLineWithstandNotDeterminedAndTheCableUnenlarged() {
+        // The board's three-phase prospective fault current is 10 kA; a 6 kA MCB cannot break it (IEC 60364-4-43, 434.5.1).
+        Result r = Fixtures.run(Fixtures.oneBoard("", circuit("C1", "{kind: other, current_a: 12, power_factor: 0.9, phases: 3}", 20,
+                "{conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}",
+                "{kind: mcb, curve: B, rating_a: 16, breaking_capacity_ka: 6}")));
+        CircuitResult c = only(r);
+        assertFalse(c.check("breaking-capacity").pass());
+        CheckResult sc = c.check("short-circuit");
+        assertFalse(sc.pass());
+        assertFalse(sc.determined());
+        assertTrue(sc.remark().contains("device.breaking_capacity_ka"), sc.remark());
+        assertEquals(1.5, c.circuit().cable().size().mm2(), "no cable size can mend a device that cannot break the current");
+    }
+
+    @Test
+    void aDeviceGivingFaultProtectionOnlyKeepsTheAdiabaticCheckOfTheLineConductors() {
+        Result r = Fixtures.run(Fixtures.oneBoard("", circuit("C1", "{kind: other, current_a: 12, power_factor: 0.9, phases: 1}", 20,
+                TWIN_25, "{kind: mcb, curve: B, rating_a: 16, breaking_capacity_ka: 10, protection: fault-only}")));
+        CheckResult sc = only(r).check("short-circuit");
+        assertTrue(sc.determined(), "the adiabatic check is made");
+    }
+
+    @Test
+    void anRcboOnTwinAndEarthInTtPassesItsProtectiveConductorCheckAtTheEarthFaultCurrentActuallyCalculated() {
+        // TT, R_A = 200 Ω and a network loop of 21 Ω: the earth-fault current is some 10 A. At 10 A /
+        // 0.03 A = 333 I_Δn the RCBO's RCD part breaks within 0.04 s (IEC 61009-1:2010, Table 1, 5 I_Δn),
+        // I²t ≈ 10² × 0.04 = 4 A²s, far below k²S² = 115² × 1.5² (IEC 60364-5-54:2011, Table A.54.3: k = 115
+        // for a 70 °C PVC cable core).
+        String yaml = Fixtures.head("earthing: TT, earth_electrode_resistance_ohm: 200", "utility: {fault_level_ka: 3, loop_impedance_ohm: 21}") + """
+                boards:
+                  - id: B0
+                circuits:
+                """ + circuit("C1", "{kind: socket, current_a: 16, power_factor: 0.9, phases: 1}", 25, TWIN_25,
+                "{kind: rcbo, curve: B, rating_a: 20, residual_current_a: 0.03, breaking_capacity_ka: 6}").indent(2);
+        CircuitResult c = only(Fixtures.run(yaml));
+        CheckResult pc = c.check("protective-conductor");
+        assertTrue(pc.pass(), "S_PE,min = " + pc.limit());
+        assertTrue(pc.limit() < 0.1, "the let-through is the RCD's at about 10 A, not a value at another current: " + pc.limit());
+    }
+
+    @Test
+    void ttFinalCircuitsMustDisconnectWithinTwoTenthsOfASecond() {
+        // IEC 60364-4-41:2005, Table 41.1: TT, 230 V, final circuits up to 32 A: 0.2 s.
+        String yaml = Fixtures.head("earthing: TT, earth_electrode_resistance_ohm: 20", "utility: {fault_level_ka: 3, loop_impedance_ohm: 21}") + """
+                boards:
+                  - id: B0
+                circuits:
+                """ + circuit("C1", "{kind: socket, current_a: 16, power_factor: 0.9, phases: 1}", 25, TWIN_25,
+                "{kind: rcbo, curve: B, rating_a: 20, residual_current_a: 0.03, breaking_capacity_ka: 6}").indent(2);
+        Result r = Fixtures.run(yaml);
+        double t = org.feedernote.trace.TraceWalk.steps(r.trace()).stream().filter(s -> s.id().equals("C1/fault/t"))
+                .mapToDouble(s -> ((org.feedernote.trace.Step.Input) s).result().value()).findFirst().orElseThrow();
+        assertEquals(0.2, t, 1e-12);
+    }
+
+    @Test
+    void aGgFuseWithoutManufacturersDataDisconnectsAtTheCurrentThePublishedMaximumZsImplies() {
+        // BS 7671:2008+A1:2011, Table 41.2: a 32 A BS 88-2 fuse, Z_s,max 1.04 Ω at 0.4 s with U_0 = 230 V,
+        // so I_a = 230 / 1.04 = 221.2 A; with c_min = 0.95, Z_s,max = 0.95 × 230 / 221.2 = 0.988 Ω.
+        Result r = Fixtures.run(Fixtures.oneBoard("", circuit("C1", "{kind: socket, current_a: 25, power_factor: 0.9, phases: 1}", 20,
+                "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 6, cpc_mm2: 2.5}",
+                "{kind: fuse, rating_a: 32, breaking_capacity_ka: 80}")));
+        CheckResult d = only(r).check("disconnection");
+        assertTrue(d.determined());
+        assertEquals(0.95 * 230 / 221.2, d.limit(), 1e-3);
+    }
+
+    @Test
+    void noFeederGrowsForALoadWhoseOwnDropAloneExceedsItsLimit() {
+        // A 2.5 mm² cable of 150 m at 16 A has an own drop above 5 % whatever the feeder (IEC 60364-5-52, Annex G
+        // limits; the drop is r·cos φ·I·L: 18 mV/A/m × 16 A × 150 m ≈ 43 V, some 19 %): the feeder keeps the
+        // size it has without that load, and the load fails with the reason noted.
+        String without = subMain("");
+        String with = subMain(circuitOn("B1", "FAR", "{kind: other, current_a: 16, power_factor: 0.9, phases: 1}", 150, TWIN_25,
+                "{kind: mcb, curve: B, rating_a: 20, breaking_capacity_ka: 10}"));
+        Map<String, Double> a = sizes(Fixtures.run(without));
+        Result r = Fixtures.run(with);
+        Map<String, Double> b = sizes(r);
+        b.remove("FAR");
+        assertEquals(a, b, "removing a load no enlargement can help changes no other size");
+        CircuitResult far = r.circuits().stream().filter(c -> c.id().equals("FAR")).findFirst().orElseThrow();
+        assertFalse(far.check("voltage-drop").pass());
+    }
+
+    private static Map<String, Double> sizes(Result r) {
+        return r.circuits().stream().collect(Collectors.toMap(CircuitResult::id, c -> c.circuit().cable().size().mm2()));
+    }
+
+    private static String circuitOn(String board, String id, String load, double length, String cable, String device) {
+        return circuit(id, load, length, cable, device).replace("from: B0", "from: " + board);
+    }
+
+    private static String subMain(String extra) {
+        StringBuilder finals = new StringBuilder();
+        for (int i = 1; i <= 6; i++) {
+            finals.append(circuitOn("B1", "L" + i, "{kind: other, current_a: 9, power_factor: 0.9, phases: 1}", 20 + 5 * i,
+                    "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: auto, cpc_mm2: auto}",
+                    "{kind: mcb, curve: B, rating_a: 16, breaking_capacity_ka: 10}"));
+        }
+        return Fixtures.head("", "transformer: {rating_kva: 500, impedance_percent: 5}") + """
+                boards:
+                  - id: B0
+                  - id: B1
+                circuits:
+                  - id: F1
+                    from: B0
+                    to: B1
+                    length_m: 40
+                    cable: {conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}
+                    installation: {method: E}
+                    device: {kind: mccb, rating_a: 63, instantaneous_a: 630, breaking_capacity_ka: 25}
+                """ + (finals + extra).indent(2);
+    }
+
+    @Test
+    void aSmallerLoadNeverGetsALargerCable() {
+        // Property: the sizes chosen are monotonic in the load (common practice, no source).
+        double previous = 0;
+        for (double amps = 2; amps <= 60; amps += 2) {
+            String yaml = Fixtures.oneBoard("", circuit("C1", "{kind: other, current_a: " + amps + ", power_factor: 0.9, phases: 1}", 30,
+                    "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: auto, cpc_mm2: auto}",
+                    "{kind: mcb, curve: C, rating_a: auto, breaking_capacity_ka: 10}"));
+            double size = only(Fixtures.run(yaml)).circuit().cable().size().mm2();
+            assertTrue(size >= previous, amps + " A got " + size + " mm² after " + previous + " mm²");
+            previous = size;
+        }
+    }
+
+    @Test
+    void aFeederIsNotEnlargedWhereThatWouldLeaveADeviceBelowUnableToBreakTheFaultCurrent() {
+        // Invented: a long sub-main whose lighting loads fail their 3 % drop; its board's devices are
+        // rated 6 kA. Whatever the sizing does, no device that could break the fault current with the
+        // first sizes may fail breaking capacity with the final ones.
+        StringBuilder finals = new StringBuilder();
+        for (int i = 1; i <= 4; i++) {
+            finals.append(circuitOn("B1", "L" + i, "{kind: lighting, power_kw: 1.8, power_factor: 0.95, phases: 1}", 40,
+                    "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: auto, cpc_mm2: auto}",
+                    "{kind: mcb, curve: B, rating_a: 10, breaking_capacity_ka: 6}"));
+        }
+        String yaml = Fixtures.head("voltage_drop_limits_percent: {lighting: 3, other: 5}", "transformer: {rating_kva: 1000, impedance_percent: 5}") + """
+                boards:
+                  - id: B0
+                  - id: B1
+                circuits:
+                  - id: F1
+                    from: B0
+                    to: B1
+                    length_m: 120
+                    cable: {conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}
+                    installation: {method: E}
+                    device: {kind: mccb, rating_a: 63, instantaneous_a: 630, breaking_capacity_ka: 36}
+                """ + finals.toString().indent(2);
+        Result r = Fixtures.run(yaml);
+        List<CircuitResult> lights = r.circuits().stream().filter(c -> c.id().startsWith("L")).toList();
+        for (CircuitResult c : lights) assertTrue(c.check("breaking-capacity").pass(), c.id() + " at " + c.check("breaking-capacity").limit() + " kA");
+    }
+}
