@@ -381,7 +381,7 @@ final class FaultPath {
 
     /** Plain number text for decisions (the report's policy is not reachable from calc). */
     static final class NumberFormatPolicyLite {
-        static String s(double v) { return Engine.trim(v); }
+        static String s(double v) { return Decimals.trim(v); }
         static String a(double v) { return String.format(Locale.ROOT, "%.1f", v); }
         static String ka(double v) { return String.format(Locale.ROOT, "%.2f", v); }
     }

@@ -359,9 +359,9 @@ final class Sizing {
             double own = Double.isNaN(largest) ? Double.NaN : ownDropAt(slot, largest);
             slot.beyondHelp = own > slot.limitPct + 1e-9;
             if (slot.beyondHelp) {
-                note(slot.id, "Voltage drop cannot be met", "its own drop alone is " + Engine.fixed3(own) + " % at "
+                note(slot.id, "Voltage drop cannot be met", "its own drop alone is " + Decimals.fixed3(own) + " % at "
                         + mm2(largest) + (slot.autoSized ? " (the largest size the sizing may choose)" : " (the size given)")
-                        + ", above the limit " + Engine.fixed3(slot.limitPct) + " %",
+                        + ", above the limit " + Decimals.fixed3(slot.limitPct) + " %",
                         "no enlargement upstream can meet it: no feeder is enlarged for it, and the circuit fails its drop limit");
                 decidedBy.put(slot.id, "voltage-drop");
             }
@@ -434,7 +434,7 @@ final class Sizing {
         for (double size : sizes) {
             if (!covered.contains(size)) continue;
             Circuit candidate = withCpc(c, size);
-            Engine.Run.Probe probe = run.probe(candidate);
+            CapacityCalc.Probe probe = run.capacityCalc.probe(candidate);
             String quick = probe.shortfall();
             if (quick != null && size < sizes.get(sizes.size() - 1)) {
                 notes.add(new String[] {"Size rejected", quick, mm2(size) + " rejected"});
@@ -460,7 +460,7 @@ final class Sizing {
         if (last == null) {
             String why;
             try {
-                run.capacityShortfall(withCpc(c, 25));
+                run.capacityCalc.capacityShortfall(withCpc(c, 25));
                 why = "the packaged tables cover no standard size of this cable for this method";
             } catch (org.feedernote.data.DataGapException e) {
                 why = e.getMessage();
@@ -486,25 +486,25 @@ final class Sizing {
     private Failure ownFailure(CircuitResult r) {
         CheckResult cap = r.check("capacity");
         if (cap != null && !cap.pass()) {
-            return new Failure("I_z " + Engine.trim(r.capacity().value()) + " A < I_n " + Engine.trim(r.rating().value()) + " A"
+            return new Failure("I_z " + Decimals.trim(r.capacity().value()) + " A < I_n " + Decimals.trim(r.rating().value()) + " A"
                     + (r.rating().value() < r.designCurrent().value() ? " (and I_n < I_b)" : ""), "capacity");
         }
         CheckResult ol = r.check("overload");
         if (ol != null && !ol.pass()) {
-            return new Failure("I_2 " + Engine.trim(ol.value()) + " A > 1.45 · I_z = " + Engine.trim(ol.limit()) + " A", "overload");
+            return new Failure("I_2 " + Decimals.trim(ol.value()) + " A > 1.45 · I_z = " + Decimals.trim(ol.limit()) + " A", "overload");
         }
         CheckResult dc = r.check("disconnection");
         if (dc != null && !dc.pass() && dc.determined()) {
-            return new Failure("Z_s " + Engine.trim(dc.value()) + " Ω > Z_s,max " + Engine.trim(dc.limit()) + " Ω", "disconnection");
+            return new Failure("Z_s " + Decimals.trim(dc.value()) + " Ω > Z_s,max " + Decimals.trim(dc.limit()) + " Ω", "disconnection");
         }
         CheckResult sc = r.check("short-circuit");
         if (sc != null && !sc.pass() && sc.determined()) {
-            return new Failure("S below the adiabatic minimum " + Engine.trim(sc.limit()) + " mm²", "short-circuit");
+            return new Failure("S below the adiabatic minimum " + Decimals.trim(sc.limit()) + " mm²", "short-circuit");
         }
         CheckResult pc = r.check("protective-conductor");
         // A larger cable helps its protective conductor only where that conductor follows the cable's size.
         if (pc != null && !pc.pass() && pc.determined() && run.original(r.id()).cable().cpc().auto()) {
-            return new Failure("protective conductor below the adiabatic minimum " + Engine.trim(pc.limit()) + " mm²", "protective-conductor");
+            return new Failure("protective conductor below the adiabatic minimum " + Decimals.trim(pc.limit()) + " mm²", "protective-conductor");
         }
         return null;
     }
@@ -606,14 +606,14 @@ final class Sizing {
         for (Candidate c : top) {
             if (others.length() > 0) others.append("; ");
             others.append(c.id()).append(' ').append(mm2(c.from())).append(" → ").append(mm2(c.to())).append(": ")
-                    .append(Engine.fixed3(c.gain())).append(" %·load per ").append(Engine.fixed3(c.cost())).append(" dm³");
+                    .append(Decimals.fixed3(c.gain())).append(" %·load per ").append(Decimals.fixed3(c.cost())).append(" dm³");
         }
         int failing = failingDrop.size();
         String failingList = failingDrop.stream().limit(5).reduce((x, y) -> x + ", " + y).orElse("")
                 + (failing > 5 ? " and " + (failing - 5) + " more" : "");
         note(best.id(), "Enlarged for the cumulative voltage drop", "the drop limit fails at " + failingList + "; best candidates: " + others,
-                mm2(best.from()) + " → " + mm2(best.to()) + ", the most drop per added conductor volume (" + Engine.fixed3(best.gain())
-                        + " % per " + Engine.fixed3(best.cost()) + " dm³)");
+                mm2(best.from()) + " → " + mm2(best.to()) + ", the most drop per added conductor volume (" + Decimals.fixed3(best.gain())
+                        + " % per " + Decimals.fixed3(best.cost()) + " dm³)");
         // Circuits of their own (no circuit below them) whose step buys at least as much as the best
         // feeder step would be chosen next anyway, one after another: a final circuit's gain does
         // not change when another final circuit grows, and a feeder's only falls. Take them now
@@ -648,7 +648,7 @@ final class Sizing {
         }
         for (Candidate c : batch) {
             note(c.id(), "Enlarged for the cumulative voltage drop", "its own drop limit fails; no feeder step buys more drop per volume",
-                    mm2(c.from()) + " → " + mm2(c.to()) + " (" + Engine.fixed3(c.gain()) + " % per " + Engine.fixed3(c.cost()) + " dm³)");
+                    mm2(c.from()) + " → " + mm2(c.to()) + " (" + Decimals.fixed3(c.gain()) + " % per " + Decimals.fixed3(c.cost()) + " dm³)");
             apply(c.slot(), c.to());
         }
         return true;

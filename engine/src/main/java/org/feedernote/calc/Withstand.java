@@ -165,8 +165,8 @@ final class Withstand {
                 // instantaneous region, and its class limits the energy at the tabulated current.
                 double bound = i * i * 0.1;
                 if (bound <= class3.q().value()) {
-                    if (t.recording()) Given.decision(t, id + "/I2t-basis", "Let-through energy", "I² · 0.1 s = " + Engine.trim(Math.round(bound))
-                            + " A²s is below the energy-limiting class 3 limit " + Engine.trim(Math.round(class3.q().value())) + " A²s",
+                    if (t.recording()) Given.decision(t, id + "/I2t-basis", "Let-through energy", "I² · 0.1 s = " + Decimals.trim(Math.round(bound))
+                            + " A²s is below the energy-limiting class 3 limit " + Decimals.trim(Math.round(class3.q().value())) + " A²s",
                             "the smaller upper bound is used: I² · t with t = 0.1 s", "IEC 60898-1:2015, Table 7 and Annex ZA");
                     return new LetThrough(ENERGY.eval(t, id, "/I2t", "instantaneous region", bind(I, current), bind(T, t01)), null);
                 }

@@ -1,0 +1,259 @@
+package org.feedernote.calc;
+
+import static org.feedernote.formula.Formula.bind;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import org.feedernote.data.ReferenceData;
+import org.feedernote.formula.DemandFormulas;
+import org.feedernote.formula.DesignCurrentFormulas;
+import org.feedernote.formula.ImpedanceFormulas;
+import org.feedernote.formula.TermFormulas;
+import org.feedernote.formula.Units;
+import org.feedernote.formula.VoltageDropFormulas;
+import org.feedernote.model.*;
+import org.feedernote.trace.Q;
+import org.feedernote.trace.Trace;
+
+/**
+ * The voltage drop: the conductor temperature and impedance, a circuit's own drop (approximate and
+ * exact forms), the cumulative drop from the origin and its limit, and a motor's starting dip,
+ * with the voltage-drop and motor-starting checks.
+ */
+final class DropCalc {
+    private final Engine.Run run;
+    private final ReferenceData data;
+    private final ImpedanceCalc impedance;
+    private final TermFormulas termFormulas;
+
+    DropCalc(Engine.Run run, ReferenceData data, ImpedanceCalc impedance, TermFormulas termFormulas) {
+        this.run = run;
+        this.data = data;
+        this.impedance = impedance;
+        this.termFormulas = termFormulas;
+    }
+
+    /** A circuit's impedance and own voltage drop (sections z and vd), the part of its own figures its drop needs. */
+    record OwnDrop(ImpedanceResult z, Trace vt, String vid, Q length, Q un, Q dropV, Q dropPct, Q dropExactPct, Q own) {}
+
+    /** @param iz the circuit's current-carrying capacity, read only where the conductor temperature is estimated from it */
+    OwnDrop ownDrop(Trace ct, Circuit c, int phases, Q ib, Q pf, Q iz) {
+        String id = c.id();
+        Trace zt = ct.recording() ? ct.section(id + "/z", "Cable impedance", describeCable(c.cable())) : ct;
+        Q theta = temperature(zt, c, ib, iz);
+        ImpedanceResult z = impedance.impedance(zt, id + "/z", c.cable(), theta, run.f, phases);
+
+        Trace vt = !ct.recording() ? ct : ct.section(id + "/vd", "Voltage drop", phases == 3 ? "three-phase, referred to U" : "single-phase, referred to U_0");
+        String vid = id + "/vd";
+        Q length = Given.input(vt, vid, "/L", "Route length", "L", c.lengthM(), Units.M, c.where().path(), ".length_m");
+        Q un = Given.alias("U_n", phases == 3 ? run.u : run.u0);
+        Q dropV;
+        Q sin = null;
+        if (pf != null) {
+            sin = VoltageDropFormulas.SIN_FROM_COS.eval(vt, vid, "/sin_phi", "", bind(VoltageDropFormulas.COS_PHI, pf));
+            dropV = VoltageDropFormulas.APPROXIMATE.eval(vt, vid, "/dU", "power factor known", bind(VoltageDropFormulas.R, z.r()),
+                    bind(VoltageDropFormulas.X, z.x()), bind(VoltageDropFormulas.COS_PHI, pf), bind(VoltageDropFormulas.SIN_PHI, sin),
+                    bind(VoltageDropFormulas.I, ib), bind(VoltageDropFormulas.L, length));
+        } else {
+            dropV = VoltageDropFormulas.UNKNOWN_POWER_FACTOR.eval(vt, vid, "/dU", "power factor unknown",
+                    bind(VoltageDropFormulas.Z, z.z()), bind(VoltageDropFormulas.I, ib), bind(VoltageDropFormulas.L, length));
+        }
+        Q dropPct = VoltageDropFormulas.PERCENT_OF_NOMINAL.eval(vt, vid, "/dU_pct", "", bind(VoltageDropFormulas.DU, dropV),
+                bind(VoltageDropFormulas.U_N, un));
+        Q dropExactPct = null;
+        double quadrature = pf == null ? 0
+                : ib.value() * length.value() * (z.x().value() * pf.value() - z.r().value() * sin.value()) / 1000;
+        boolean exactSolvable = pf != null && Math.abs(quadrature) < un.value();
+        if (pf != null && !exactSolvable) {
+            if (vt.recording()) Given.decision(vt, vid + "/exact-none", "Voltage drop, exact phasor form",
+                    "the quadrature drop I_b·L·(x·cos φ − r·sin φ) exceeds U_n",
+                    "the exact form has no solution: the cable cannot deliver I_b over this length", "circuit theory", dropPct.id());
+        }
+        if (exactSolvable) {
+            Q dropExact = VoltageDropFormulas.EXACT.evalAs("ΔU_exact", vt, vid, "/dU_exact", "phasor form",
+                    bind(VoltageDropFormulas.U_N, un), bind(VoltageDropFormulas.R, z.r()), bind(VoltageDropFormulas.X, z.x()),
+                    bind(VoltageDropFormulas.COS_PHI, pf), bind(VoltageDropFormulas.SIN_PHI, sin), bind(VoltageDropFormulas.I, ib),
+                    bind(VoltageDropFormulas.L, length));
+            dropExactPct = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.evalAs("ΔU_exact", vt, vid, "/dU_exact_pct", "exact form",
+                    bind(VoltageDropFormulas.DU, dropExact), bind(VoltageDropFormulas.U_N, un)), "ΔU_exact");
+        }
+        boolean exactGoverns = run.inst.basis().voltageDropMethod().value() == DropMethod.EXACT && dropExactPct != null;
+        if (run.inst.basis().voltageDropMethod().value() == DropMethod.EXACT) {
+            if (vt.recording()) Given.decision(vt, vid + "/method", "Voltage-drop form checked", "basis.voltage_drop_method = exact"
+                            + (dropExactPct == null ? ", but the exact form is not available" : ""),
+                    dropExactPct == null ? "the approximate form governs" : "the exact phasor form governs",
+                    "design input", (dropExactPct == null ? dropPct : dropExactPct).id());
+        } else {
+            if (vt.recording()) Given.decision(vt, vid + "/method", "Voltage-drop form checked",
+                    "basis.voltage_drop_method = approximate" + (run.inst.basis().voltageDropMethod().given() ? "" : " (default)"),
+                    "the approximate form governs" + (dropExactPct != null ? "; the exact form is shown for comparison" : ""),
+                    "IEC 60364-5-52:2009, Annex G", dropPct.id());
+        }
+        Q own = relabel(exactGoverns ? dropExactPct : dropPct, "ΔU(" + id + ")");
+        return new OwnDrop(z, vt, vid, length, un, dropV, dropPct, dropExactPct, own);
+    }
+
+    /**
+     * A circuit's own voltage drop with the no-op trace, for the sizing's weighing of a larger
+     * size: the device and the capacity checks are not made, and the capacity only where the
+     * conductor temperature is estimated from it.
+     */
+    Q ownDrop(Circuit c) {
+        int phases = c.isFeeder() ? 3 : c.load().phases();
+        Q ib = run.designCurrent.get(c.id());
+        Q iz = run.inst.basis().conductorTemperature().value() == ConductorTemperature.MAXIMUM ? null
+                : run.capacityCalc.capacity(Trace.noop(), c, phases, ib).iz();
+        return ownDrop(Trace.noop(), c, phases, ib, run.powerFactor.get(c.id()), iz).own();
+    }
+
+    Q temperature(Trace t, Circuit c, Q ib, Q iz) {
+        String id = c.id() + "/z";
+        Q thetaMax = data.maxTemperature(t, id, "/theta_max", c.cable().insulation());
+        Setting<ConductorTemperature> setting = run.inst.basis().conductorTemperature();
+        if (setting.value() == ConductorTemperature.MAXIMUM || ib.value() >= iz.value()) {
+            String because = setting.value() == ConductorTemperature.MAXIMUM
+                    ? "basis.conductor_temperature = maximum" + (setting.given() ? "" : " (default)")
+                    : "basis.conductor_temperature = estimated, but I_b ≥ I_z";
+            if (t.recording()) Given.decision(t, id + "/theta", "Conductor temperature for the voltage drop", because,
+                    "θ = θ_max of " + c.cable().insulation().token().toUpperCase(Locale.ROOT) + " = " + Decimals.trim(thetaMax.value()) + " °C",
+                    "IEC 60364-5-52:2009, Table 52.1", thetaMax.id());
+            return relabel(thetaMax, "θ");
+        }
+        boolean ground = c.conditions().method() == Method.D1 || c.conditions().method() == Method.D2;
+        Setting<Double> amb = c.conditions().ambientC().given() ? c.conditions().ambientC()
+                : (ground ? run.inst.basis().ambientGroundC() : run.inst.basis().ambientAirC());
+        Q thetaA = Given.setting(t, id, "/theta_a", ground ? "Ground temperature" : "Ambient air temperature", "θ_a", amb, Units.DEG_C,
+                "IEC 60364-5-52:2009, reference ambient");
+        return ImpedanceFormulas.ESTIMATED_TEMPERATURE.eval(t, id, "/theta", "estimated", bind(ImpedanceFormulas.THETA_A, thetaA),
+                bind(ImpedanceFormulas.THETA_MAX, thetaMax), bind(ImpedanceFormulas.I_B, ib),
+                bind(ImpedanceFormulas.I_REF, iz));
+    }
+
+    /** What the drop from the origin gives a circuit: the cumulative drop, a final circuit's limit and a motor's starting dip (else null). */
+    record PathDrop(Q cumulative, Q limit, Q dip) {}
+
+    /**
+     * The cumulative drop of c, and for a final circuit its limit and, for a motor, the starting
+     * dip, their checks added to checks.
+     */
+    PathDrop pathDrop(Trace ct, Circuit c, Engine.Run.OwnFigures o, Map<String, CircuitResult> done, List<CheckResult> checks) {
+        String id = c.id();
+        Trace vt = o.vt();
+        Q cumulative = cumulative(vt, c, o.own(), done);
+        Q limit = null;
+        Q dip = null;
+        if (c.isFeeder()) {
+            if (vt.recording()) Given.note(vt, o.vid() + "/board", "Cumulative drop at board " + c.to(),
+                    "Checked against the limit at the terminals of each load supplied from " + c.to() + ".", "");
+        } else {
+            limit = limit(vt, c);
+            checks.add(Checks.check(vt, o.vid(), "/check", "voltage-drop", "Voltage drop, origin to terminals", cumulative, limit,
+                    "IEC 60364-5-52:2009, 525 and Annex G"));
+            if (c.load().kind() == LoadKind.MOTOR && c.load().startingCurrentMultiple() != null) {
+                Trace st = !ct.recording() ? ct : ct.section(id + "/st", "Motor starting", "voltage dip at the motor terminals while it starts");
+                MotorStart start = motorStart(st, c, o, done);
+                dip = start.dip();
+                checks.add(start.check());
+            } else if (c.load().kind() == LoadKind.MOTOR) {
+                if (vt.recording()) Given.note(vt, id + "/st/none", "Motor starting",
+                        "No starting_current_multiple is given: the starting dip is not checked.", "");
+            }
+        }
+        return new PathDrop(cumulative, limit, dip);
+    }
+
+    Q cumulative(Trace t, Circuit c, Q own, Map<String, CircuitResult> done) {
+        List<Q> terms = new ArrayList<>();
+        for (Circuit f : run.feederPath(c.from())) {
+            CircuitResult r = done.get(f.id());
+            Q used = r.dropExactPercent() != null && run.inst.basis().voltageDropMethod().value() == DropMethod.EXACT
+                    ? r.dropExactPercent() : r.dropPercent();
+            // Shown by the feeder's name; a candidate's sum (no-op trace) reads only the value.
+            terms.add(t.recording() ? relabel(used, "ΔU(" + f.id() + ")") : used);
+        }
+        terms.add(own);
+        if (terms.size() == 1) {
+            return relabel(own, "ΔU_total");
+        }
+        return termFormulas.eval(t, c.id(), "/vd/dU_total", "", "cumulative-drop", "ΔU_total", "d", Units.PERCENT, terms,
+                vars -> DemandFormulas.sum("cumulative-drop", "Voltage drop, origin to " + (c.isFeeder() ? "board " + c.to() : "terminals"),
+                        "ΔU_total", Units.PERCENT, vars, "Drops add along the path from the origin (each feeder's percentage plus the circuit's own)"));
+    }
+
+    Q limit(Trace t, Circuit c) {
+        Basis basis = run.inst.basis();
+        if (basis.limitsByKind()) {
+            String kind = c.load().kind().token();
+            boolean own = basis.voltageDropLimitsByKind().containsKey(kind);
+            String key = own ? kind : LoadKind.OTHER.token();
+            double limit = basis.voltageDropLimitsByKind().get(key);
+            // The texts of the step are written only where it is recorded (not for sizing candidates).
+            if (!t.recording()) return new Q(c.id(), "/vd/limit", "ΔU_max", limit, Units.PERCENT);
+            return Given.input(t, c.id() + "/vd/limit", "Voltage-drop limit for " + kind + " loads", "ΔU_max", limit, Units.PERCENT,
+                    basis.voltageDropLimitsPath() + "." + key);
+        }
+        return Given.setting(t, c.id(), "/vd/limit", "Voltage-drop limit, origin to terminals", "ΔU_max", basis.voltageDropLimitPercent(),
+                Units.PERCENT, "default of this program: 4 % (IEC 60364-5-52:2009, Annex G, Table G.52.1, other uses, public supply)");
+    }
+
+    Q starting(Trace t, Circuit c, ImpedanceResult z, Q ib, Q length, Q un, Map<String, CircuitResult> done) {
+        String id = c.id() + "/st";
+        Q k = Given.input(t, id, "/k_st", "Starting current multiple", "k_st", c.load().startingCurrentMultiple(), Units.NONE,
+                c.where().path(), ".load.starting_current_multiple");
+        Q ist = DesignCurrentFormulas.STARTING_CURRENT.eval(t, id, "/I_st", "", bind(DesignCurrentFormulas.K_ST, k),
+                bind(DesignCurrentFormulas.I_B, ib));
+        Q cosSt = Given.setting(t, id, "/cos_phi_st", "Power factor while starting", "cos φ_st", c.load().startingPowerFactor(),
+                Units.NONE, "default of this program: 0.3 (common practice, no source)");
+        Q sinSt = VoltageDropFormulas.SIN_FROM_COS_STARTING.eval(t, id, "/sin_phi_st", "", bind(VoltageDropFormulas.COS_ST, cosSt));
+        Q du = VoltageDropFormulas.MOTOR_STARTING.eval(t, id, "/dU", "", bind(VoltageDropFormulas.R, z.r()),
+                bind(VoltageDropFormulas.X, z.x()), bind(VoltageDropFormulas.COS_ST, cosSt), bind(VoltageDropFormulas.SIN_ST, sinSt),
+                bind(VoltageDropFormulas.I_ST, ist), bind(VoltageDropFormulas.L, length));
+        Q own = relabel(VoltageDropFormulas.PERCENT_OF_NOMINAL.evalAs("ΔU_st", t, id, "/dU_pct", "",
+                bind(VoltageDropFormulas.DU, du), bind(VoltageDropFormulas.U_N, un)), "ΔU_st(" + c.id() + ")");
+        List<Q> terms = new ArrayList<>();
+        int phases = c.load().phases();
+        for (Circuit f : run.feederPath(c.from())) {
+            CircuitResult fr = done.get(f.id());
+            ImpedanceResult fz = phases == 3 ? fr.impedance()
+                    : impedance.mvPerAm(t, id + "/" + f.id() + "/z", fr.impedance().theta(), fr.impedance().resistance(),
+                    fr.impedance().reactance(), 1);
+            Q inc = VoltageDropFormulas.STARTING_INCREMENT.eval(t, id + "/" + f.id() + "/inc", "feeder " + f.id(),
+                    bind(VoltageDropFormulas.R, fz.r()), bind(VoltageDropFormulas.X, fz.x()), bind(VoltageDropFormulas.COS_ST, cosSt),
+                    bind(VoltageDropFormulas.SIN_ST, sinSt), bind(VoltageDropFormulas.I_ST, ist), bind(VoltageDropFormulas.I_B, ib),
+                    bind(VoltageDropFormulas.L, fr.length()), bind(VoltageDropFormulas.U_N, un));
+            terms.add(relabel(fr.dropPercent(), "ΔU(" + f.id() + ")"));
+            terms.add(relabel(inc, "ΔU_st(" + f.id() + ")"));
+        }
+        terms.add(own);
+        if (terms.size() == 1) return relabel(own, "ΔU_st,total");
+        return termFormulas.eval(t, id + "/dU_total", "", "starting-dip-total", "ΔU_st,total", "d", Units.PERCENT, terms,
+                vars -> DemandFormulas.sum("starting-dip-total", "Voltage dip at the motor terminals while it starts", "ΔU_st,total",
+                        Units.PERCENT, vars, "Running drop of each upstream feeder, its added drop from the starting current, and the motor circuit's drop at starting current"));
+    }
+
+    /** A motor's dip while it starts and its check against the limit. */
+    record MotorStart(Q dip, CheckResult check) {}
+
+    MotorStart motorStart(Trace st, Circuit c, Engine.Run.OwnFigures o, Map<String, CircuitResult> done) {
+        String id = c.id();
+        Q dip = starting(st, c, o.z(), o.ib(), o.length(), o.un(), done);
+        Q stLimit = Given.setting(st, id, "/st/limit", "Limit of the starting dip", "ΔU_st,max",
+                run.inst.basis().motorStartingLimitPercent(), Units.PERCENT,
+                "default of this program (common practice, no source)");
+        return new MotorStart(dip, Checks.check(st, id, "/st/check", "motor-starting", "Voltage dip while the motor starts", dip, stLimit,
+                "common practice, no source"));
+    }
+
+    String describeCable(Cable cable) {
+        String size = (cable.parallel() > 1 ? cable.parallel() + " × " : "") + ReferenceData.sizeKey(cable.size().mm2()) + " mm²";
+        String kind = cable.type() == CableType.MULTICORE ? cable.cores() + "-core" : "single-core, " + cable.formation().token();
+        return size + " " + cable.conductor().token() + ", " + cable.insulation().token().toUpperCase(Locale.ROOT) + ", " + kind;
+    }
+
+    private static Q relabel(Q q, String symbol) {
+        return q.as(symbol);
+    }
+}
