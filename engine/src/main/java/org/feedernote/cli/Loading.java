@@ -11,6 +11,7 @@ import org.feedernote.data.ReferenceData;
 import org.feedernote.input.InputError;
 import org.feedernote.input.InputException;
 import org.feedernote.input.InputReader;
+import org.feedernote.model.InputWarning;
 import org.feedernote.model.Installation;
 
 /** Reads a design input for a command, printing every error to standard error. */
@@ -40,7 +41,7 @@ final class Loading {
         try {
             if (Files.isRegularFile(file) && org.feedernote.archive.NoteArchive.looksLikePdf(file)) {
                 org.feedernote.archive.NoteArchive note = org.feedernote.archive.NoteArchive.read(file);
-                return InputReader.parse(file + " (embedded input)", note.canonicalInput(), true);
+                return warned(InputReader.parse(file + " (embedded input)", note.canonicalInput(), true), err);
             }
         } catch (org.feedernote.archive.NoteArchive.NotANote e) {
             err.println("feedernote: " + e.getMessage());
@@ -55,6 +56,12 @@ final class Loading {
         return load(file, err);
     }
 
+    /** Prints the input's warnings (legal but unusual values); they change nothing else. */
+    private static Installation warned(Installation inst, PrintWriter err) {
+        for (InputWarning w : inst.warnings()) err.println(w.text());
+        return inst;
+    }
+
     /** The installation, or null after the errors were printed. */
     static Installation load(Path input, PrintWriter err) {
         if (!Files.isRegularFile(input)) {
@@ -62,7 +69,7 @@ final class Loading {
             return null;
         }
         try {
-            return InputReader.read(input);
+            return warned(InputReader.read(input), err);
         } catch (InputException e) {
             for (InputError error : e.errors()) err.println(error.text());
             err.println(e.errors().size() + (e.errors().size() == 1 ? " error" : " errors") + "; nothing was written.");

@@ -280,6 +280,11 @@ public final class CapacityData {
         });
     }
 
+    /** The standard the table's ratings of a device kind come from (IEC 60898-1, …). */
+    public String ratingsStandard(DeviceKind kind) {
+        return devices.text(kind.token(), "standard");
+    }
+
     /** The smallest standard rating at least the current, as a lookup step; a gap above the largest. */
     public Step.Lookup ratingAtLeast(String id, DeviceKind kind, double current) {
         List<Double> r = ratings(kind);

@@ -11,6 +11,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+import org.feedernote.data.CapacityData;
 import org.feedernote.data.ReferenceData;
 import org.feedernote.model.*;
 
@@ -21,6 +22,7 @@ import org.feedernote.model.*;
 public final class InputReader {
     private final String file;
     private final List<InputError> errors = new ArrayList<>();
+    private final List<InputWarning> warnings = new ArrayList<>();
 
     private InputReader(String file) {
         this.file = file;
@@ -205,15 +207,21 @@ public final class InputReader {
             String path = "circuits[" + i + "]";
             String id = str(at(c, "id"));
             if (id != null) unique(id, at(c, "id"), path + ".id", idNodes, idPaths);
-            Circuit circuit = circuit(c, path, basis);
+            Circuit circuit = circuit(c, path, basis, supply);
             if (circuit != null) circuits.add(circuit);
         }
         topology(boards, circuits, circuitNodes);
         voltages(at(root, "supply"), supply);
         return errors.isEmpty()
                 ? new Installation(file, project, basis, supply, List.copyOf(boards), List.copyOf(circuits), Canonical.lazy(() -> reread(text, json)),
-                        text)
+                        text, sortedWarnings())
                 : null;
+    }
+
+    private List<InputWarning> sortedWarnings() {
+        List<InputWarning> sorted = new ArrayList<>(warnings);
+        sorted.sort(java.util.Comparator.comparingInt((InputWarning w) -> w.where().line()).thenComparingInt(w -> w.where().column()));
+        return List.copyOf(sorted);
     }
 
     private void unique(String id, Node node, String path, Map<String, Node> seen, Map<String, String> paths) {
@@ -299,7 +307,7 @@ public final class InputReader {
         }
     }
 
-    private Circuit circuit(Node c, String path, Basis basis) {
+    private Circuit circuit(Node c, String path, Basis basis, Supply supply) {
         String id = str(at(c, "id"));
         String from = str(at(c, "from"));
         String to = str(at(c, "to"));
@@ -333,9 +341,82 @@ public final class InputReader {
                 || (load == null && to == null)) {
             return null;
         }
-        return new Circuit(id, str(c, "description", ""), from, to, load, phase, length, cable, conditions, device,
+        Circuit circuit = new Circuit(id, str(c, "description", ""), from, to, load, phase, length, cable, conditions, device,
                 num(c, "design_current_a"), where(c, path));
+        unusual(c, path, circuit, supply);
+        return circuit;
     }
+
+    // ---- warnings: legal but unusual values ----
+
+    /**
+     * A design current this many times the device rating is no design but a slip (kW typed for
+     * W, say): far past what any overload check would weigh. Common practice, no source.
+     */
+    static final double FAR_ABOVE_RATING = 10;
+    /**
+     * A lighting or socket-outlet final circuit carrying more than this (kW or kVA) is unusual:
+     * such circuits carry some kW. Common practice, no source.
+     */
+    static final double MOST_FOR_LIGHTING_OR_SOCKETS_KW = 50;
+
+    private CapacityData devices;
+
+    private void warn(Node node, String path, String message) {
+        warnings.add(new InputWarning(where(node, path), message));
+    }
+
+    private void unusual(Node c, String path, Circuit circuit, Supply supply) {
+        Device device = circuit.device();
+        Node deviceNode = at(c, "device");
+        if (device.ratingA() != null) {
+            if (devices == null) devices = new CapacityData(ReferenceData.standard());
+            List<Double> standard = devices.ratings(device.kind());
+            if (!standard.contains(device.ratingA())) {
+                warn(at(deviceNode, "rating_a"), path + ".device.rating_a", StructureValidator.num(device.ratingA())
+                        + " A is not a standard " + device.kind().token() + " rating (" + devices.ratingsStandard(device.kind())
+                        + ": " + String.join(", ", standard.stream().map(StructureValidator::num).toList())
+                        + " A); check it against the device's data");
+            }
+        }
+        Load load = circuit.load();
+        if (load == null) return;
+        String key = load.powerKw() != null ? "power_kw" : load.apparentKva() != null ? "apparent_kva" : "current_a";
+        Node loadNode = at(c, "load");
+        List<String> why = new ArrayList<>();
+        double current = roughCurrent(load, supply);
+        if (circuit.designCurrentA() != null) current = circuit.designCurrentA();
+        if (device.ratingA() != null && current > FAR_ABOVE_RATING * device.ratingA()) {
+            why.add(String.format(java.util.Locale.ROOT, "its current, about %s A, is more than %s times the device rating of %s A",
+                    StructureValidator.num(Math.round(current)), StructureValidator.num(FAR_ABOVE_RATING),
+                    StructureValidator.num(device.ratingA())));
+        }
+        if (load.kind() == LoadKind.LIGHTING || load.kind() == LoadKind.SOCKET) {
+            double kw = load.powerKw() != null ? load.powerKw() : load.apparentKva() != null ? load.apparentKva()
+                    : current * (load.phases() == 3 ? Math.sqrt(3) * supply.lineVoltageV() : supply.phaseVoltageV()) / 1000;
+            if (kw > MOST_FOR_LIGHTING_OR_SOCKETS_KW) {
+                why.add(String.format(java.util.Locale.ROOT, "%s %s of %s on one circuit is unusual (such a circuit carries some kW)",
+                        StructureValidator.num(Math.round(kw)), load.powerKw() != null ? "kW" : "kVA",
+                        load.kind() == LoadKind.LIGHTING ? "lighting" : "socket outlets"));
+            }
+        }
+        if (!why.isEmpty()) {
+            warn(at(loadNode, key), path + ".load." + key, String.join("; ", why)
+                    + ": check the figure and its unit (" + key + " is in " + ("current_a".equals(key) ? "A" : key.endsWith("kw") ? "kW, not W" : "kVA, not VA") + ")");
+        }
+    }
+
+    /** The load's current as the engine will derive it, near enough for a warning (no trace). */
+    private static double roughCurrent(Load load, Supply supply) {
+        if (load.currentA() != null) return load.currentA();
+        double volts = load.phases() == 3 ? Math.sqrt(3) * supply.lineVoltageV() : supply.phaseVoltageV();
+        if (volts <= 0 || load.phases() == 0) return 0;
+        if (load.apparentKva() != null) return load.apparentKva() * 1000 / volts;
+        if (load.powerKw() == null || load.powerFactor() == null) return 0;
+        double efficiency = load.kind() == LoadKind.MOTOR && load.efficiency() != null ? load.efficiency() : 1;
+        return load.powerKw() * 1000 / efficiency / (volts * load.powerFactor());
+    }
+
 
     private void methodSuitsCable(Node installation, String path, Method method, Cable cable) {
         Node at = at(installation, "method");
@@ -457,6 +538,50 @@ public final class InputReader {
                 eff, phases, num(l, "starting_current_multiple"), setting(l, path, "starting_power_factor", 0.3));
     }
 
+    /**
+     * Every loop of boards, once each (a board that reaches a loop it is not part of belongs to
+     * none), written from the board first in the input back round to it.
+     */
+    private static List<List<String>> loops(List<String> boardIds, Map<String, List<String>> feeds) {
+        Map<String, Integer> order = new HashMap<>();
+        for (int i = 0; i < boardIds.size(); i++) order.putIfAbsent(boardIds.get(i), i);
+        java.util.Set<String> done = new java.util.HashSet<>();
+        List<List<String>> found = new ArrayList<>();
+        for (String start : boardIds) {
+            if (done.contains(start)) continue;
+            // Up from the board, one feeding board at a time, every way once (a board fed twice has
+            // two ways up), among boards written after it: each loop is found from its first board.
+            Map<String, String> reachedFrom = new HashMap<>();
+            java.util.Deque<String> open = new java.util.ArrayDeque<>();
+            open.push(start);
+            String closing = null;
+            while (!open.isEmpty() && closing == null) {
+                String board = open.pop();
+                for (String up : feeds.getOrDefault(board, List.of())) {
+                    if (up.equals(start)) {
+                        closing = board;
+                        break;
+                    }
+                    if (!done.contains(up) && order.get(up) > order.get(start) && !reachedFrom.containsKey(up)) {
+                        reachedFrom.put(up, board);
+                        open.push(up);
+                    }
+                }
+            }
+            if (closing != null) {
+                List<String> chain = new ArrayList<>();
+                for (String b = closing; b != null; b = reachedFrom.get(b)) chain.add(0, b);
+                // start ← its feeding board ← … ← the board start feeds ← start
+                List<String> loop = new ArrayList<>(chain);
+                loop.add(start);
+                found.add(loop);
+                done.addAll(chain);
+            }
+            done.add(start);
+        }
+        return found;
+    }
+
     private void topology(List<Board> boards, List<Circuit> circuits, List<Node> circuitNodes) {
         Map<String, Board> byId = new HashMap<>();
         boards.forEach(b -> byId.put(b.id(), b));
@@ -491,27 +616,25 @@ public final class InputReader {
                 }
             }
         }
-        if (!errors.isEmpty()) return;
-        List<String> origins = boardIds.stream().filter(b -> !fedBy.containsKey(b)).toList();
-        Map<String, String> parentOf = new HashMap<>();
-        for (Circuit c : circuits) if (c.isFeeder()) parentOf.put(c.to(), c.from());
-        for (String b : boardIds) {
-            List<String> chain = new ArrayList<>();
-            String cur = b;
-            while (cur != null && !chain.contains(cur)) {
-                chain.add(cur);
-                cur = parentOf.get(cur);
-            }
-            if (cur != null) {
-                int start = chain.indexOf(cur);
-                List<String> loop = new ArrayList<>(chain.subList(start, chain.size()));
-                loop.add(cur);
-                Board first = byId.get(cur);
-                errors.add(new InputError(file, first.where().line(), first.where().column(), first.where().path(),
-                        "the boards form a loop: " + String.join(" ← ", loop) + "; every board must trace back to the origin"));
-                return;
+        // Loops are looked for over every feeder whose ends are boards, a board fed twice included:
+        // a loop is a mistake of its own and is told beside the other.
+        Map<String, List<String>> feeds = new LinkedHashMap<>();
+        for (Node c : circuitNodes) {
+            String from = str(at(c, "from"));
+            String to = str(at(c, "to"));
+            if (from != null && to != null && !from.equals(to) && byId.containsKey(from) && byId.containsKey(to)) {
+                feeds.computeIfAbsent(to, k -> new ArrayList<>()).add(from);
             }
         }
+        boolean looped = false;
+        for (List<String> loop : loops(boardIds, feeds)) {
+            looped = true;
+            Board first = byId.get(loop.get(0));
+            errors.add(new InputError(file, first.where().line(), first.where().column(), first.where().path(),
+                    "the boards form a loop: " + String.join(" ← ", loop) + "; every board must trace back to the origin"));
+        }
+        if (looped || !errors.isEmpty()) return;
+        List<String> origins = boardIds.stream().filter(b -> !fedBy.containsKey(b)).toList();
         if (origins.size() > 1) {
             Board second = byId.get(origins.get(1));
             errors.add(new InputError(file, second.where().line(), second.where().column(), second.where().path(),

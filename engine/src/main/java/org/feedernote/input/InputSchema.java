@@ -29,8 +29,13 @@ public final class InputSchema {
     private static <E extends Enum<E> & Token> Spec.Str word(String description, Class<E> type) {
         return new Spec.Str(description, Token.tokens(type), null, null, false);
     }
-    private static Spec.Num positive(String description) {
-        return new Spec.Num(description, 0.0, true, null, false, false, List.of(), null, false);
+    /** Above 0 and at most max: a quantity that cannot be zero, with a plausible ceiling. */
+    private static Spec.Num upTo(String description, double max) {
+        return new Spec.Num(description, 0.0, true, max, false, false, List.of(), null, false);
+    }
+    /** From min to max, both included. */
+    private static Spec.Num between(String description, double min, double max) {
+        return new Spec.Num(description, min, false, max, false, false, List.of(), null, false);
     }
     private static Spec.Num range(String description, double min, boolean minEx, double max, boolean maxEx) {
         return new Spec.Num(description, min, minEx, max, maxEx, false, List.of(), null, false);
@@ -81,41 +86,54 @@ public final class InputSchema {
                 opt("voltage_drop_method", word("which voltage-drop form is checked against the limit", DropMethod.class), "approximate"),
                 opt("voltage_factor_max", range("IEC 60909 voltage factor c_max for maximum fault currents", 1, false, 1.2, false), "1.10"),
                 opt("voltage_factor_min", range("IEC 60909 voltage factor c_min for minimum fault currents and maximum Zs", 0.8, false, 1, false), "0.95"),
-                opt("earth_electrode_resistance_ohm", positive("resistance R_A of the installation's earth electrode (TT systems) in Ω"), "none (required for TT)"));
+                // R_A · IΔn ≤ 50 V (IEC 60364-4-41, 411.5.3) with the smallest common IΔn of 6 mA allows some 8 kΩ.
+                opt("earth_electrode_resistance_ohm", upTo("resistance R_A of the installation's earth electrode (TT systems) in Ω", 10_000), "none (required for TT)"));
 
         Spec.Obj transformer = obj("a transformer at the origin",
-                req("rating_kva", positive("rated power in kVA")),
-                req("impedance_percent", range("short-circuit impedance in per cent", 0, true, 100, true)),
-                opt("x_r_ratio", positive("X/R ratio of the transformer"), "5 (assumption, common practice)"),
-                opt("network_fault_level_mva", range("short-circuit power of the MV network at the transformer's primary in MVA", 0, true, 100000, false), "infinite (the network's impedance neglected)"));
+                // Distribution transformers feeding an LV switchboard: some kVA to a few MVA (the
+                // largest LV units are 3 150–4 000 kVA; common practice, no source).
+                req("rating_kva", between("rated power in kVA", 1, 5_000)),
+                // IEC 60076-5, Table 1 (from memory): 4 % up to 630 kVA, 5–6.25 % above; special units go higher.
+                req("impedance_percent", between("short-circuit impedance in per cent", 1, 25)),
+                // X/R of LV sources, from a few tenths (long overhead lines) to some tens (large transformers); common practice, no source.
+                opt("x_r_ratio", between("X/R ratio of the transformer", 0.1, 50), "5 (assumption, common practice)"),
+                // MV networks at the primary: some tens to some thousands of MVA; common practice, no source.
+                opt("network_fault_level_mva", between("short-circuit power of the MV network at the transformer's primary in MVA", 1, 100_000), "infinite (the network's impedance neglected)"));
         Spec.Obj utility = obj("a supply from the distribution network",
-                opt("fault_level_ka", positive("prospective fault current at the origin in kA"), "none"),
-                opt("loop_impedance_ohm", positive("external earth-fault loop impedance Ze in Ω"), "none"),
-                opt("x_r_ratio", positive("X/R ratio of the network"), "1 (assumption, common practice)"));
+                // LV switchgear is rated up to 100–150 kA (IEC 60947-2 frames); common practice, no source.
+                opt("fault_level_ka", between("prospective fault current at the origin in kA", 0.1, 200), "none"),
+                // From about 1 mΩ (next to a large transformer) to the 200 Ω of a TT supply's electrode; common practice, no source.
+                opt("loop_impedance_ohm", between("external earth-fault loop impedance Ze in Ω", 0.001, 200), "none"),
+                opt("x_r_ratio", between("X/R ratio of the network", 0.1, 50), "1 (assumption, common practice)"));
         Spec.Obj source = objOne("the source at the origin", List.of(List.of("transformer", "utility")),
                 opt("transformer", transformer, null),
                 opt("utility", utility, null));
         Spec.Obj supply = obj("the supply at the origin",
-                req("line_voltage_v", positive("nominal line-to-line voltage in V")),
-                req("phase_voltage_v", positive("nominal line-to-neutral voltage in V")),
+                // Low voltage: a.c. systems up to 1 000 V (IEC 60038, Table 1 and clause 1); from 100 V
+                // (100/200 V and 120/208 V systems) upward, so the phase voltage is that range / √3.
+                req("line_voltage_v", between("nominal line-to-line voltage in V", 100, 1_000)),
+                req("phase_voltage_v", between("nominal line-to-neutral voltage in V", 57, 600)),
                 req("source", source));
 
         Spec.Obj board = obj("a distribution board",
                 req("id", id("board id, unique across boards and circuits")),
                 opt("description", text("what the board is"), "empty"),
                 opt("diversity", range("diversity factor applied to the sum of the board's circuits", 0, true, 1, false), "1"),
-                opt("fault_rating_ka", positive("rated short-circuit withstand of the board in kA"), "none"));
+                opt("fault_rating_ka", upTo("rated short-circuit withstand of the board in kA", 200), "none"));
 
         Spec.Obj load = objOne("what the circuit supplies", List.of(List.of("power_kw", "apparent_kva", "current_a")),
                 req("kind", word("load kind", LoadKind.class)),
-                opt("power_kw", positive("active input power in kW (motors: rated shaft output)"), null),
-                opt("apparent_kva", positive("apparent power in kVA"), null),
-                opt("current_a", positive("load current in A"), null),
-                opt("power_factor", range("power factor", 0, true, 1, false), "unknown (voltage drop then uses z)"),
-                opt("efficiency", range("motor efficiency", 0, true, 1, false), "1 (motors: give it)"),
+                // One LV circuit carries at most some MW: 5 MW is about 7 kA at 400 V; common practice, no source.
+                opt("power_kw", upTo("active input power in kW (motors: rated shaft output)", 5_000), null),
+                opt("apparent_kva", upTo("apparent power in kVA", 5_000), null),
+                opt("current_a", upTo("load current in A", 10_000), null),
+                // Below 0.1 no load is run (even a starting motor is about 0.2); common practice, no source.
+                opt("power_factor", between("power factor", 0.1, 1), "unknown (voltage drop then uses z)"),
+                // IEC 60034-30-1 (from memory): the smallest motors are about 50 % efficient.
+                opt("efficiency", between("motor efficiency", 0.3, 1), "1 (motors: give it)"),
                 opt("phases", oneOf("number of phases", 1, 3), "1 for a 2-core cable, 3 for 4- and 5-core cables and single-core cables; else required"),
                 opt("starting_current_multiple", range("motor starting current as a multiple of full-load current", 1, false, 20, false), "none (starting dip not checked)"),
-                opt("starting_power_factor", range("power factor while starting", 0, true, 1, false), "0.3"));
+                opt("starting_power_factor", between("power factor while starting", 0.05, 1), "0.3"));
         Spec.Obj cable = obj("the cable",
                 req("conductor", word("conductor material", Conductor.class)),
                 req("insulation", word("insulation (pvc 70 °C thermoplastic, xlpe 90 °C thermosetting)", Insulation.class)),
@@ -135,13 +153,18 @@ public final class InputSchema {
                 opt("third_harmonic_percent", range("third-harmonic content of the line current in per cent", 0, false, 100, false), "0"));
         Spec.Obj device = obj("the protective device at the origin of the circuit",
                 req("kind", word("device kind", DeviceKind.class)),
-                req("rating_a", new Spec.Num("rated current In in A, or auto", 0.0, true, null, false, false, List.of(), null, true)),
+                // From the smallest miniature breakers and fuses (0.5 A) to the largest air circuit-breakers
+                // (6 300 A, IEC 60947-2 frames); common practice, no source.
+                req("rating_a", new Spec.Num("rated current In in A, or auto", 0.5, false, 6_300.0, false, false, List.of(), null, true)),
                 opt("curve", word("MCB/RCBO instantaneous tripping type", Curve.class), "required for mcb and rcbo"),
-                opt("instantaneous_a", positive("MCCB instantaneous (magnetic) trip setting in A"), "none"),
-                opt("breaking_capacity_ka", positive("rated breaking capacity in kA"), "none"),
-                opt("disconnection_current_a", positive("current that operates the device within the required disconnection time, from the manufacturer's curve, in A (required for fuses; for circuit-breakers it replaces the instantaneous basis)"), "none"),
-                opt("residual_current_a", positive("rated residual operating current IΔn of an RCD or RCBO in A"), "none"),
-                opt("let_through_a2s", positive("let-through energy I²t from the manufacturer's data in A²s"), "none"),
+                // Up to some tens of In of the largest breakers; common practice, no source.
+                opt("instantaneous_a", between("MCCB instantaneous (magnetic) trip setting in A", 1, 200_000), "none"),
+                opt("breaking_capacity_ka", upTo("rated breaking capacity in kA", 200), "none"),
+                opt("disconnection_current_a", between("current that operates the device within the required disconnection time, from the manufacturer's curve, in A (required for fuses; for circuit-breakers it replaces the instantaneous basis)", 1, 200_000), "none"),
+                // IEC 61008-1 / 61009-1 (from memory): IΔn from 6 mA; industrial relays go to 30 A.
+                opt("residual_current_a", between("rated residual operating current IΔn of an RCD or RCBO in A", 0.006, 30), "none"),
+                // k²S² of the largest conductors (143² × 630² × 12 parallel) is about 1e11 A²s; common practice, no source.
+                opt("let_through_a2s", upTo("let-through energy I²t from the manufacturer's data in A²s", 1e11), "none"),
                 opt("protection", word("what the device protects against: overload-and-fault, or fault-only where a separate overload relay protects the circuit against overload", Protection.class), "overload-and-fault"),
                 opt("residual_type", word("break-time type of an RCD or RCBO: general, or S (time-delayed)", ResidualType.class), "general"));
         Spec.Obj circuit = objOne("a circuit", List.of(List.of("load", "to")),
@@ -151,11 +174,12 @@ public final class InputSchema {
                 opt("to", id("id of the board a feeder supplies"), null),
                 opt("phase", word("phase of a single-phase circuit", Phase.class), "auto"),
                 opt("load", load, null),
-                req("length_m", positive("route length in m")),
+                // An LV circuit runs some hundreds of metres, rarely a few km; common practice, no source.
+                req("length_m", upTo("route length in m", 10_000)),
                 req("cable", cable),
                 req("installation", installation),
                 req("device", device),
-                opt("design_current_a", positive("design current given by the designer, overriding the derived value, in A"), "derived"));
+                opt("design_current_a", upTo("design current given by the designer, overriding the derived value, in A", 10_000), "derived"));
 
         return obj("a feedernote design input, format 1",
                 req("format", oneOf("input format version", 1)),
@@ -166,7 +190,7 @@ public final class InputSchema {
                 req("circuits", new Spec.Arr("the circuits", circuit, 1)));
     }
 
-    private static Spec.Str isoDate(String description) {
-        return new Spec.Str(description, List.of(), "\\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\\d|3[01])", "an ISO date YYYY-MM-DD", false);
+    private static Spec.Date isoDate(String description) {
+        return new Spec.Date(description);
     }
 }

@@ -69,6 +69,10 @@ public final class JsonSchemaWriter {
                 str.allowed().forEach(e::add);
             }
             if (str.pattern() != null) n.put("pattern", "^(" + str.pattern() + ")$");
+        } else if (spec instanceof Spec.Date) {
+            n.put("type", "string");
+            n.put("format", "date");
+            n.put("pattern", "^(" + Spec.Date.PATTERN + ")$");
         } else if (spec instanceof Spec.Num num) {
             ObjectNode target = n;
             if (num.auto()) {

@@ -37,6 +37,12 @@ public sealed interface Spec {
     record Num(String description, Double min, boolean minExclusive, Double max, boolean maxExclusive,
                boolean integer, List<Double> allowed, String allowedName, boolean auto) implements Spec {}
 
+    /** A calendar date written YYYY-MM-DD that exists (no 30 February). */
+    record Date(String description) implements Spec {
+        /** The form; whether the day exists in its month is checked beside it. */
+        public static final String PATTERN = "\\d{4}-(0[1-9]|1[0-2])-(0[1-9]|[12]\\d|3[01])";
+    }
+
     /** A field of a mapping. defaultText states the default where the field is optional. */
     record Field(String name, Spec spec, boolean required, String defaultText) {}
 }

@@ -54,6 +54,29 @@ final class StructureValidator {
         else if (spec instanceof Spec.Arr arr) checkArr(node, arr, path);
         else if (spec instanceof Spec.Str str) checkStr(node, str, path);
         else if (spec instanceof Spec.Num num) checkNum(node, num, path);
+        else if (spec instanceof Spec.Date date) checkDate(node, date, path);
+    }
+
+    private static final String DATE_EXPECTED = "a date YYYY-MM-DD";
+
+    private void checkDate(Node node, Spec.Date spec, Path path) {
+        if (!(node instanceof Node.Scalar s) || !(s.value() instanceof String text)) {
+            error(node.pos(), path, "expected " + DATE_EXPECTED + " (" + spec.description() + "), found " + describe(node));
+            return;
+        }
+        if (!patterns.computeIfAbsent(Spec.Date.PATTERN, Pattern::compile).matcher(text).matches()) {
+            error(node.pos(), path, "expected " + DATE_EXPECTED + " (" + spec.description() + "), found '" + text + "'");
+            return;
+        }
+        try {
+            java.time.LocalDate.parse(text, java.time.format.DateTimeFormatter.ofPattern("uuuu-MM-dd")
+                    .withResolverStyle(java.time.format.ResolverStyle.STRICT));
+        } catch (java.time.format.DateTimeParseException e) {
+            java.time.YearMonth month = java.time.YearMonth.parse(text.substring(0, 7));
+            error(node.pos(), path, "expected a date that exists, found '" + text + "': "
+                    + month.getMonth().getDisplayName(java.time.format.TextStyle.FULL, Locale.ENGLISH) + " " + month.getYear()
+                    + " has " + month.lengthOfMonth() + " days");
+        }
     }
 
     private void error(Node.Pos pos, Path path, String message) {
@@ -70,30 +93,55 @@ final class StructureValidator {
             for (Spec.Field f : s.fields()) m.putIfAbsent(f.name(), f);
             return m;
         });
+        // A misspelt key that stands for a missing one is one mistake, told once at the misspelling.
+        java.util.Set<String> misspelt = null;
         for (Node.Entry e : obj.entries().values()) {
             Spec.Field f = byName.get(e.key());
             if (f == null) {
                 List<String> names = spec.fields().stream().map(Spec.Field::name).toList();
-                error(e.keyPos(), path.key(e.key()), "unknown key '" + e.key() + "'" + Suggest.hint(e.key(), names)
-                        + "; expected one of: " + String.join(", ", names));
+                String meant = Suggest.nearest(e.key(), names);
+                String need = meant == null || obj.entries().containsKey(meant) ? null : need(spec, byName.get(meant), obj.entries());
+                if (need != null && (misspelt == null || !misspelt.contains(meant))) {
+                    if (misspelt == null) misspelt = new java.util.HashSet<>();
+                    misspelt.add(meant);
+                    error(e.keyPos(), path.key(e.key()), "'" + e.key() + "' is not a key: did you mean '" + meant + "', which "
+                            + need + "? (expected one of: " + String.join(", ", names) + ")");
+                } else {
+                    error(e.keyPos(), path.key(e.key()), "unknown key '" + e.key() + "'" + Suggest.hint(e.key(), names)
+                            + "; expected one of: " + String.join(", ", names));
+                }
             } else {
                 check(e.value(), f.spec(), path.key(e.key()));
             }
         }
         for (Spec.Field f : spec.fields()) {
-            if (f.required() && !obj.entries().containsKey(f.name())) {
+            if (f.required() && !obj.entries().containsKey(f.name()) && (misspelt == null || !misspelt.contains(f.name()))) {
                 error(obj.pos(), path.key(f.name()), "missing required key '" + f.name() + "' (" + f.spec().description() + ")");
             }
         }
         for (List<String> group : spec.exactlyOne()) {
             List<String> present = new ArrayList<>(2);
             for (String key : group) if (obj.entries().containsKey(key)) present.add(key);
+            if (present.isEmpty() && misspelt != null && group.stream().anyMatch(misspelt::contains)) continue;
             if (present.size() != 1) {
                 error(obj.pos(), path, present.isEmpty()
                         ? "give exactly one of " + String.join(", ", group) + "; none is given"
                         : "give exactly one of " + String.join(", ", group) + "; found " + String.join(" and ", present));
             }
         }
+    }
+
+    /** Why a missing field is needed ("is required", "is required unless 'to' is given"), or null if it may be left out. */
+    private static String need(Spec.Obj spec, Spec.Field field, java.util.Map<String, Node.Entry> given) {
+        if (field == null) return null;
+        if (field.required()) return "is required";
+        for (List<String> group : spec.exactlyOne()) {
+            if (group.contains(field.name()) && group.stream().noneMatch(given::containsKey)) {
+                List<String> others = group.stream().filter(k -> !k.equals(field.name())).map(k -> "'" + k + "'").toList();
+                return "is required unless " + String.join(" or ", others) + " is given";
+            }
+        }
+        return null;
     }
 
     private void checkMap(Node node, Spec.Map spec, Path path) {
@@ -148,6 +196,12 @@ final class StructureValidator {
             return;
         }
         double v = s.number();
+        if (!Double.isFinite(v)) {
+            // YAML's .inf and .nan, or a number beyond the largest double (1e400): never a quantity.
+            error(node.pos(), path, "expected " + expected(spec) + ", found " + (Double.isNaN(v) ? "not-a-number (" + s.describe() + ")"
+                    : "a number too large to hold (" + s.describe() + ")"));
+            return;
+        }
         if (spec.integer() && v != Math.rint(v)) {
             error(node.pos(), path, "expected a whole number, found " + s.describe());
             return;

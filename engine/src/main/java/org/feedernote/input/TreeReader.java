@@ -44,6 +44,11 @@ final class TreeReader {
             }
             return root;
         } catch (JsonProcessingException e) {
+            InputError explained = json ? null : YamlSyntax.explain(file, e);
+            if (explained != null) {
+                errors.add(explained);
+                return null;
+            }
             JsonLocation loc = e.getLocation();
             int line = loc == null ? 1 : Math.max(1, loc.getLineNr());
             int col = loc == null ? 1 : Math.max(1, loc.getColumnNr());
@@ -93,6 +98,21 @@ final class TreeReader {
         }
     }
 
+    /**
+     * A YAML float. The parser marks YAML's .nan and .inf as floats it then cannot read: they are
+     * kept as the non-finite values they spell, for the structure check to refuse with the key path.
+     */
+    private static Double floating(JsonParser p) throws IOException {
+        try {
+            return p.getDoubleValue();
+        } catch (com.fasterxml.jackson.core.exc.StreamReadException e) {
+            String text = p.getText().toLowerCase(java.util.Locale.ROOT);
+            if (text.endsWith(".nan")) return Double.NaN;
+            if (text.endsWith(".inf")) return text.startsWith("-") ? Double.NEGATIVE_INFINITY : Double.POSITIVE_INFINITY;
+            throw e;
+        }
+    }
+
     private Node value(JsonParser p, Where path) throws IOException {
         JsonToken t = p.currentToken();
         long pos = pos(p);
@@ -130,7 +150,7 @@ final class TreeReader {
                 return new Node.Scalar(pos, p.getNumberType() == JsonParser.NumberType.BIG_INTEGER
                         ? (Object) p.getDoubleValue() : (Object) p.getLongValue());
             case VALUE_NUMBER_FLOAT:
-                return new Node.Scalar(pos, p.getDoubleValue());
+                return new Node.Scalar(pos, floating(p));
             case VALUE_TRUE:
                 return new Node.Scalar(pos, Boolean.TRUE);
             case VALUE_FALSE:

@@ -132,4 +132,16 @@ class CommandLineTest {
         assertTrue(run("--help").out().contains("check"));
         assertTrue(run("check", "--help").out().contains("--json"));
     }
+
+    @Test
+    void aWarningGoesToStandardErrorAndLeavesTheExitStatus(@TempDir Path dir) throws Exception {
+        // L-SHOP's 10 A breaker written as 11 A: not a standard rating, but a legal one.
+        String text = Files.readString(Fixtures.inputs().resolve("bakery-small.yaml"))
+                .replace("device: {kind: mcb, curve: B, rating_a: 10,", "device: {kind: mcb, curve: B, rating_a: 11,");
+        Path input = dir.resolve("odd.yaml");
+        Files.writeString(input, text);
+        Run r = run("check", input.toString());
+        assertEquals(0, r.status(), r.err());
+        assertTrue(r.err().startsWith(input + ":48:45: warning: circuits[1].device.rating_a: 11 A is not a standard mcb rating"), r.err());
+    }
 }

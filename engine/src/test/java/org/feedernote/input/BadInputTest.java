@@ -68,7 +68,7 @@ class BadInputTest {
     void powerFactorOutsideZeroToOneIsRefused() {
         InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("power_factor: 0.9", "power_factor: 1.2")));
         assertEquals("circuits[0].load.power_factor", e.path());
-        assertTrue(e.message().contains("greater than 0 and at most 1"), e.message());
+        assertTrue(e.message().contains("from 0.1 to 1"), e.message());
         assertEquals(12, e.line());
     }
 
@@ -202,5 +202,153 @@ class BadInputTest {
         InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("type: multicore, cores: 2", "type: single-core")
                 .replace("phases: 1", "phases: 3")));
         assertEquals("circuits[0].cable.formation", e.path());
+    }
+
+    // ---- numbers: every one has a plausible range, and nothing beyond a double gets through ----
+
+    @Test
+    void aLengthOfAMillionKilometresIsRefusedWithItsRange() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("length_m: 20", "length_m: 1e12")));
+        assertEquals("circuits[0].length_m", e.path());
+        assertEquals(13, e.line());
+        assertEquals(15, e.column());
+        assertTrue(e.message().startsWith("expected a number greater than 0 and at most 10000, found"), e.message());
+    }
+
+    @org.junit.jupiter.params.ParameterizedTest(name = "{0}: {1}")
+    @org.junit.jupiter.params.provider.CsvSource({
+            "length_m: 20, circuits[0].length_m",
+            "power_kw: 1.0, circuits[0].load.power_kw",
+            "rating_a: 6, circuits[0].device.rating_a",
+            "fault_level_ka: 10, supply.source.utility.fault_level_ka",
+            "line_voltage_v: 400, supply.line_voltage_v",
+            "power_factor: 0.9, circuits[0].load.power_factor"})
+    void theLargestDoubleIsRefusedWhereverANumberIsRead(String written, String path) {
+        String key = written.substring(0, written.indexOf(':'));
+        InputError e = errors(doc("  - id: B0", GOOD_CIRCUIT).replace(written, key + ": 1e308")).stream()
+                .filter(x -> x.path().equals(path)).findFirst().orElseThrow();
+        assertTrue(e.message().startsWith("expected a number"), e.message());
+        assertTrue(e.message().endsWith("found 1.0E308"), e.message());
+    }
+
+    @Test
+    void yamlNotANumberAndInfinityAreRefusedWithTheKeyPath() {
+        InputError nan = only(doc("  - id: B0", GOOD_CIRCUIT.replace("length_m: 20", "length_m: .nan")));
+        assertEquals("circuits[0].length_m", nan.path());
+        assertTrue(nan.message().contains("found not-a-number"), nan.message());
+        InputError inf = only(doc("  - id: B0", GOOD_CIRCUIT.replace("length_m: 20", "length_m: 1e400")));
+        assertEquals("circuits[0].length_m", inf.path());
+        assertTrue(inf.message().contains("found a number too large to hold"), inf.message());
+    }
+
+    @Test
+    void aSupplyOutsideLowVoltageIsRefused() {
+        // IEC 60038, Table 1: low-voltage a.c. systems go up to 1 000 V between lines.
+        List<InputError> both = errors(doc("  - id: B0", GOOD_CIRCUIT).replace("line_voltage_v: 400", "line_voltage_v: 11000"));
+        assertEquals("supply.line_voltage_v", both.get(0).path());
+        assertTrue(both.get(0).message().contains("from 100 to 1000"), both.toString());
+    }
+
+    // ---- dates exist ----
+
+    @Test
+    void aDateThatDoesNotExistIsRefused() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT).replace("date: 2026-01-01", "date: 2026-02-30"));
+        assertEquals("project.date", e.path());
+        assertEquals(2, e.line());
+        assertTrue(e.message().contains("'2026-02-30'") && e.message().contains("February 2026 has 28 days"), e.message());
+    }
+
+    @Test
+    void aRevisionDateIsCheckedAlikeAndTheTwentyNinthOfFebruaryOfALeapYearExists() {
+        String text = doc("  - id: B0", GOOD_CIRCUIT).replace("date: 2026-01-01}",
+                "date: 2028-02-29, revisions: [{revision: 0, date: 2025-04-31}]}");
+        InputError e = only(text);
+        assertEquals("project.revisions[0].date", e.path());
+        assertTrue(e.message().contains("April 2025 has 30 days"), e.message());
+    }
+
+    // ---- one mistake, one message ----
+
+    @Test
+    void aMisspeltRequiredKeyIsOneMessageThatSaysBoth() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("length_m: 20", "lenght_m: 20")));
+        assertEquals("circuits[0].lenght_m", e.path());
+        assertEquals(13, e.line());
+        assertEquals(5, e.column());
+        assertTrue(e.message().startsWith("'lenght_m' is not a key: did you mean 'length_m', which is required?"), e.message());
+    }
+
+    @Test
+    void aMisspeltLoadOfACircuitWithoutToIsOneMessage() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("load:", "laod:")));
+        assertEquals("circuits[0].laod", e.path());
+        assertTrue(e.message().contains("did you mean 'load', which is required unless 'to' is given?"), e.message());
+    }
+
+    @Test
+    void aLoopAndABoardFedTwiceAreBothReported() {
+        String feeder = """
+                  - id: %s
+                    from: %s
+                    to: %s
+                    length_m: 10
+                    cable: {conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: 16, cpc_mm2: 16}
+                    installation: {method: C}
+                    device: {kind: mcb, curve: C, rating_a: 63}
+                """;
+        // B1 is fed by F1 from B0 and by F3 from B2, which B1 itself feeds through F2.
+        List<InputError> errors = errors(doc("  - id: B0\n  - id: B1\n  - id: B2", feeder.formatted("F1", "B0", "B1")
+                + feeder.formatted("F2", "B1", "B2") + feeder.formatted("F3", "B2", "B1") + GOOD_CIRCUIT));
+        assertEquals(2, errors.size(), errors.toString());
+        assertTrue(errors.stream().anyMatch(e -> e.message().contains("fed twice: by 'F1' and by 'F3'")), errors.toString());
+        assertTrue(errors.stream().anyMatch(e -> e.message().contains("the boards form a loop: B1 ← B2 ← B1")), errors.toString());
+    }
+
+    // ---- YAML syntax errors in plain words ----
+
+    private static InputError syntax(String yaml) {
+        InputError e = only(yaml);
+        assertTrue(e.message().startsWith("the file is not valid YAML: "), e.message());
+        assertFalse(e.message().contains("while parsing") || e.message().contains("while scanning"), e.message());
+        return e;
+    }
+
+    @Test
+    void aBadlyIndentedLineIsNamedWithItsPosition() {
+        InputError e = syntax(doc("  - id: B0\n   description: x", GOOD_CIRCUIT));
+        assertEquals(9, e.line());
+        assertEquals(4, e.column());
+        assertTrue(e.message().contains("indented differently"), e.message());
+    }
+
+    @Test
+    void aTabIsNamedAsATab() {
+        InputError e = syntax("format: 1\nproject:\n\ttitle: T\n");
+        assertEquals(3, e.line());
+        assertEquals(1, e.column());
+        assertTrue(e.message().contains("a tab character") && e.message().contains("spaces"), e.message());
+    }
+
+    @Test
+    void aKeyWithoutItsColonIsNamedOnItsLine() {
+        InputError e = syntax("format: 1\nproject\nsupply: {}\n");
+        assertEquals(2, e.line());
+        assertEquals(1, e.column());
+        assertTrue(e.message().contains("without ':'"), e.message());
+    }
+
+    @Test
+    void anUnclosedQuoteIsNamedWhereItOpens() {
+        InputError e = syntax("format: 1\nproject: {title: \"Bakery, reference: R}\nsupply: {}\n");
+        assertEquals(2, e.line());
+        assertEquals(18, e.column());
+        assertTrue(e.message().contains("quote opened here is never closed"), e.message());
+    }
+
+    @Test
+    void anUnclosedBracketNamesWhereItOpened() {
+        InputError e = syntax("format: 1\nboards: [{id: B0}\ncircuits: []\n");
+        assertTrue(e.message().contains("the list opened with '[' at line 2, column 9 is not closed"), e.message());
     }
 }

@@ -38,4 +38,16 @@ class SchemaSyncTest {
             assertTrue(schema.contains("\"" + key + "\""), key);
         }
     }
+
+    @Test
+    void theSchemaCarriesTheRangeOfEveryNumber() throws Exception {
+        com.fasterxml.jackson.databind.JsonNode circuit = new com.fasterxml.jackson.databind.ObjectMapper()
+                .readTree(JsonSchemaWriter.schema()).at("/properties/circuits/items/properties");
+        assertEquals(0, circuit.at("/length_m/exclusiveMinimum").asDouble());
+        assertEquals(10_000, circuit.at("/length_m/maximum").asDouble());
+        assertEquals(5_000, circuit.at("/load/properties/power_kw/maximum").asDouble());
+        assertEquals(6_300, circuit.at("/device/properties/rating_a/anyOf/1/maximum").asDouble());
+        assertEquals("date", new com.fasterxml.jackson.databind.ObjectMapper().readTree(JsonSchemaWriter.schema())
+                .at("/properties/project/properties/date/format").asText());
+    }
 }
