@@ -73,7 +73,7 @@ final class CapacityCalc {
 
     Probe probe(Circuit c) {
         Trace t = Trace.noop();
-        int phases = c.isFeeder() ? 3 : c.load().phases();
+        int phases = c.phases();
         Q ib = run.designCurrent.get(c.id());
         double in = c.device().ratingA() != null ? c.device().ratingA()
                 : capacityData.ratingAtLeast("probe", c.device().kind(), ib.value()).value();

@@ -162,7 +162,7 @@ private static Formula phaseSumFormula(String title, String symbol, String unit,
             }
             run.designCurrent.put(feeder.id(), ib);
             if (pfs.get(worst) != null) run.powerFactor.put(feeder.id(), pfs.get(worst));
-            run.connection.put(feeder.id(), "L1 L2 L3");
+            if (!feeder.singlePhaseFeeder()) run.connection.put(feeder.id(), "L1 L2 L3");
         }
     }
 

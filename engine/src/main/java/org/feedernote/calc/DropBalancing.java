@@ -288,7 +288,7 @@ final class DropBalancing {
     }
 
     private int conductors(Circuit c) {
-        if (c.isFeeder() || c.load().phases() == 3) {
+        if (c.phases() == 3) {
             return c.cable().type() == CableType.MULTICORE && c.cable().cores() >= 4 ? 4 : 3;
         }
         return 2;
@@ -447,7 +447,7 @@ final class DropBalancing {
             Circuit upstream = run.feederOf.get(a.current.from());
             if (icu == null || upstream == null) continue;
             BoardFault at = sizing.results.get(upstream.id()).downstream();
-            boolean three = a.feeder || a.current.load().phases() == 3;
+            boolean three = a.current.phases() == 3;
             double ik = (three ? at.ik3() : at.ik1()).value();
             if (icu >= ik - 1e-12) ok.add(a.id);
         }

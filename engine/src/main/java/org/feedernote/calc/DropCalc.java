@@ -102,7 +102,7 @@ final class DropCalc {
      * conductor temperature is estimated from it.
      */
     Q ownDrop(Circuit c) {
-        int phases = c.isFeeder() ? 3 : c.load().phases();
+        int phases = c.phases();
         Q ib = run.designCurrent.get(c.id());
         Q iz = run.inst.basis().conductorTemperature().value() == ConductorTemperature.MAXIMUM ? null
                 : run.capacityCalc.capacity(Trace.noop(), c, phases, ib).iz();

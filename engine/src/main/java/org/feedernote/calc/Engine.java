@@ -79,6 +79,8 @@ public final class Engine {
         final Map<String, Q> neutral = new HashMap<>();
         final Map<String, List<Q>> phaseCurrents = new HashMap<>();
         final Map<String, String> connection;
+        /** The phase (0, 1, 2) of each feeder to a single-phase board. */
+        final Map<String, Integer> feederPhase = new HashMap<>();
         final Map<String, Q> boardDrop = new HashMap<>();
         final Map<String, CircuitResult> results;
         final Map<String, Circuit> originals;
@@ -360,7 +362,7 @@ public final class Engine {
 
         /** @param known the circuit's capacity with the no-op trace where a probe has made it, else null */
         private OwnFigures ownFigures(Circuit c, Trace ct, CapacityCalc.Capacity known) {
-            int phases = c.isFeeder() ? 3 : c.load().phases();
+            int phases = c.phases();
             Q ib = designCurrent.get(c.id());
             Q pf = powerFactor.get(c.id());
             CapacityCalc.OwnCapacity k = capacityCalc.ownCapacity(ct, c, phases, ib, known);

@@ -273,6 +273,14 @@ final class FaultPath {
                     rel(at.rN(), "R_N(" + c.from() + ")"), rel(r1_20, "R_1,20"), rel(r1_20, "R_neutral,20"));
             Q xN = series(bt, bid, "/XN", "Line-neutral loop reactance to board " + c.to(), "X_N", rel(at.xN(), "X_N(" + c.from() + ")"), xLoop);
             downstream = atBoard(bt, bid, c.to(), r3, x3, rN, xN, zs, zsf);
+            if (c.singlePhaseFeeder()) {
+                // A single-phase board has no three-phase fault: its prospective current is the line-to-neutral one.
+                if (bt.recording()) Given.decision(bt, bid + "/one-phase", "Fault level of a single-phase board",
+                        "board " + c.to() + " is fed by a single-phase circuit", "its prospective fault current is I_k1, the line-to-neutral value",
+                        "IEC 60909-0:2016, 7.1.2", downstream.ik1().id());
+                downstream = new BoardFault(downstream.r3(), downstream.x3(), downstream.rN(), downstream.xN(), downstream.ze(),
+                        downstream.zeF(), downstream.ik1(), downstream.ik1());
+            }
         }
         return new FaultPath.CircuitFault(prospective, zs, d.zsMax(), ief, checks, downstream, List.of());
     }

@@ -96,40 +96,70 @@ final class LoadCalc {
     // ---------------- phase allocation ----------------
 
     void allocatePhases(String board) {
+        Circuit boardFeeder = run.feederOf.get(board);
+        if (boardFeeder != null && boardFeeder.singlePhaseFeeder()) {
+            onePhaseBoard(board, run.feederPhase.get(boardFeeder.id()));
+            return;
+        }
         double[] load = new double[3];
         List<Circuit> auto = new ArrayList<>();
         for (Circuit c : run.outgoing.getOrDefault(board, List.of())) {
-            if (c.isFeeder()) continue;
-            LoadDemand d = run.demand.get(c.id());
-            if (d.phases() == 3) {
+            if (c.isFeeder() && !c.singlePhaseFeeder()) continue;
+            if (c.phases() == 3) {
+                LoadDemand d = run.demand.get(c.id());
                 for (int k = 0; k < 3; k++) load[k] += d.apparentKva() / 3;
                 run.connection.put(c.id(), "L1 L2 L3");
             } else if (c.phase() == Phase.AUTO) {
                 auto.add(c);
             } else {
                 int k = c.phase().ordinal();
-                load[k] += d.apparentKva();
-                run.demand.put(c.id(), withPhase(d, k + 1));
-                run.connection.put(c.id(), c.phase().token());
+                load[k] += apparentKva(c);
+                connect(c, k);
                 Given.decision(run.circuitTrace.get(c.id()), c.id() + "/phase", "Phase", "phase given in the design input",
                         "connected to " + c.phase().token(), "design input");
             }
         }
-        auto.sort(Comparator.comparingDouble((Circuit c) -> -run.demand.get(c.id()).apparentKva()));
+        auto.sort(Comparator.comparingDouble((Circuit c) -> -apparentKva(c)));
         for (Circuit c : auto) {
             int best = 0;
             for (int k = 1; k < 3; k++) if (load[k] < load[best] - 1e-12) best = k;
             Trace t = run.circuitTrace.get(c.id());
             String before = !t.recording() ? "" : "phase loads before allocation L1 " + Decimals.trim(load[0]) + " kVA, L2 " + Decimals.trim(load[1])
                     + " kVA, L3 " + Decimals.trim(load[2]) + " kVA";
-            LoadDemand d = run.demand.get(c.id());
-            load[best] += d.apparentKva();
-            run.demand.put(c.id(), withPhase(d, best + 1));
-            run.connection.put(c.id(), "L" + (best + 1));
+            load[best] += apparentKva(c);
+            connect(c, best);
             if (t.recording()) Given.decision(t, c.id() + "/phase", "Phase (allocated)",
-                    "phase: auto; " + before + " (largest single-phase loads first, each to the least-loaded phase)",
+                    "phase: auto; " + before + " (largest single-phase loads first, each to the least-loaded phase"
+                            + (c.isFeeder() ? "; a single-phase board counts with the apparent power of its loads times its diversity" : "") + ")",
                     "connected to L" + (best + 1), "common practice, no source");
         }
+    }
+
+    /** A single-phase board: every circuit it supplies is on its feeder's phase. */
+    private void onePhaseBoard(String board, int k) {
+        for (Circuit c : run.outgoing.getOrDefault(board, List.of())) {
+            connect(c, k);
+            Trace t = run.circuitTrace.get(c.id());
+            if (t.recording()) Given.decision(t, c.id() + "/phase", "Phase", "board " + board + " is single-phase, fed on L" + (k + 1),
+                    "connected to L" + (k + 1), "design input");
+        }
+    }
+
+    private void connect(Circuit c, int k) {
+        if (c.isFeeder()) {
+            run.feederPhase.put(c.id(), k);
+        } else {
+            run.demand.put(c.id(), withPhase(run.demand.get(c.id()), k + 1));
+        }
+        run.connection.put(c.id(), "L" + (k + 1));
+    }
+
+    /** A single-phase circuit's apparent power for balancing the phases; a single-phase board's, its loads' times its diversity. */
+    private double apparentKva(Circuit c) {
+        if (!c.isFeeder()) return run.demand.get(c.id()).apparentKva();
+        double sum = 0;
+        for (Circuit below : run.outgoing.getOrDefault(c.to(), List.of())) sum += apparentKva(below);
+        return run.boards.get(c.to()).diversity().value() * sum;
     }
 
     LoadDemand withPhase(LoadDemand d, int phase) {

@@ -147,14 +147,14 @@ final class Sizing {
     /** What the covered sizes depend on (insulation, conductor, method, loaded conductors, formation) as one number. */
     private static long coverageKey(Circuit c) {
         Cable cable = c.cable();
-        int loaded = (c.isFeeder() || c.load().phases() == 3) ? 3 : 2;
+        int loaded = c.phases() == 3 ? 3 : 2;
         int formation = cable.formation() == null ? 0 : cable.formation().ordinal() + 1;
         return ((((long) cable.insulation().ordinal() * 64 + cable.conductor().ordinal()) * 64 + c.conditions().method().ordinal()) * 8
                 + loaded) * 64 + formation;
     }
 
     private boolean covered(Circuit c, double size) {
-        int loaded = (c.isFeeder() || c.load().phases() == 3) ? 3 : 2;
+        int loaded = c.phases() == 3 ? 3 : 2;
         return run.capacityData().covers(c.cable().insulation(), c.cable().conductor(), c.conditions().method(), loaded,
                 c.cable().formation(), size) && ReferenceData.standard().hasResistance(c.cable().conductor(), size);
     }

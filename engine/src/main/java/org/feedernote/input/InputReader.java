@@ -211,11 +211,35 @@ public final class InputReader {
             if (circuit != null) circuits.add(circuit);
         }
         topology(boards, circuits, circuitNodes);
+        if (errors.isEmpty()) singlePhaseBoards(circuits);
         voltages(at(root, "supply"), supply);
         return errors.isEmpty()
                 ? new Installation(file, project, basis, supply, List.copyOf(boards), List.copyOf(circuits), Canonical.lazy(() -> reread(text, json)),
                         text, sortedWarnings())
                 : null;
+    }
+
+    /**
+     * A single-phase board supplies single-phase circuits only, all on its feeder's phase: a
+     * three-phase load or feeder below it, or a phase other than its feeder's, is an error.
+     */
+    private void singlePhaseBoards(List<Circuit> circuits) {
+        Map<String, Circuit> feederOf = new HashMap<>();
+        for (Circuit c : circuits) if (c.isFeeder()) feederOf.put(c.to(), c);
+        for (Circuit c : circuits) {
+            Circuit feeder = feederOf.get(c.from());
+            if (feeder == null || !feeder.singlePhaseFeeder()) continue;
+            Where w = c.where();
+            if (c.phases() == 3) {
+                errors.add(new InputError(w.file(), w.line(), w.column(), w.path(), "board '" + c.from() + "' is single-phase (fed by '"
+                        + feeder.id() + "', a " + feeder.cable().cores() + "-core cable): it cannot supply the three-phase "
+                        + (c.isFeeder() ? "board '" + c.to() + "'" : "load of '" + c.id() + "'")));
+            } else if (c.phase() != Phase.AUTO && feeder.phase() != Phase.AUTO && c.phase() != feeder.phase()) {
+                errors.add(new InputError(w.file(), w.line(), w.column(), w.path() + ".phase", "board '" + c.from()
+                        + "' is fed on " + feeder.phase().token() + " by '" + feeder.id() + "'; a circuit on it cannot be on " + c.phase().token()
+                        + " (give " + feeder.phase().token() + " or leave phase out)"));
+            }
+        }
     }
 
     private List<InputWarning> sortedWarnings() {
@@ -319,13 +343,17 @@ public final class InputReader {
         Load load = null;
         if (loadNode instanceof Node.Obj) load = load(loadNode, path + ".load", cable, basis);
         Phase phase = word(c, "phase", Phase.class, Phase.AUTO);
-        if (at(c, "phase") != null && (to != null || (load != null && load.phases() == 3))) {
-            error(at(c, "phase"), path + ".phase", "phase applies to single-phase circuits only; remove it for "
-                    + (to != null ? "a feeder" : "a three-phase load"));
-        }
-        if (to != null && cable != null && cable.type() == CableType.MULTICORE && cable.cores() == 2) {
-            error(at(at(c, "cable"), "cores"), path + ".cable.cores",
-                    "a feeder supplies a three-phase board: give a cable of 3, 4 or 5 cores or single-core cables (single-phase sub-boards are not supported yet)");
+        boolean multicore = cable != null && cable.type() == CableType.MULTICORE;
+        if (to != null) {
+            // A feeder of a 2-core cable, or of a 3-core one with its phase given, supplies a single-phase board.
+            boolean onePhase = multicore && (cable.cores() == 2 || cable.cores() == 3 && at(c, "phase") != null);
+            if (at(c, "phase") != null && !onePhase) {
+                error(at(c, "phase"), path + ".phase", "phase applies to a feeder only where it supplies a single-phase board "
+                        + "(a 2- or 3-core cable); remove it for a three-phase feeder");
+            }
+            phase = onePhase ? phase : null;
+        } else if (at(c, "phase") != null && load != null && load.phases() == 3) {
+            error(at(c, "phase"), path + ".phase", "phase applies to single-phase circuits only; remove it for a three-phase load");
         }
         if (cable != null && conditions != null) methodSuitsCable(at(c, "installation"), path + ".installation.method", conditions.method(), cable);
         if (conditions != null) {

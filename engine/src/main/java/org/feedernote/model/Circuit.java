@@ -4,6 +4,12 @@ package org.feedernote.model;
 public record Circuit(String id, String description, String from, String to, Load load, Phase phase, double lengthM,
                       Cable cable, Conditions conditions, Device device, Double designCurrentA, Where where) {
     public boolean isFeeder() { return to != null; }
+
+    /** A feeder to a single-phase board (a 2-core cable, or a 3-core one with its phase given): its phase is L1, L2, L3 or auto. */
+    public boolean singlePhaseFeeder() { return to != null && phase != null; }
+
+    /** 1 or 3: a final circuit's load's, a feeder's by its board (null phase: three-phase). */
+    public int phases() { return to != null ? (phase != null ? 1 : 3) : load.phases(); }
     public Circuit withCable(Cable c) { return new Circuit(id, description, from, to, load, phase, lengthM, c, conditions, device, designCurrentA, where); }
 
     /**
