@@ -53,6 +53,16 @@ public final class InputSchema {
                 "a standard size in mm²", true);
     }
 
+    /*
+     * Where the ranges come from. Every number has one, so that no value a double cannot carry
+     * through the calculation (1e308, .nan) reaches it and a slip of units (m for km) is refused
+     * with its place. Those of the design basis and the installation conditions: voltage-drop and
+     * starting limits, ambient and ground temperatures, soil resistivity, thermal insulation and
+     * disconnection times bound what a design basis sets in practice (common practice, no source;
+     * the tables themselves then say where they end); c_max 1.0–1.2 and c_min 0.8–1.0 bracket
+     * IEC 60909-0, Table 1 (from memory); grouping to 100 and 12 conductors in parallel are
+     * common practice, no source. The others are stated beside their keys below.
+     */
     private static Spec.Obj build() {
         Spec.Obj revision = obj("an entry of the revision history",
                 req("revision", text("revision letter or number")),

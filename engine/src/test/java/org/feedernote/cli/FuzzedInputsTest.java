@@ -20,7 +20,7 @@ import org.feedernote.synthetic.InputFuzz;
  * wrong type, lines deleted, repeated or indented, characters inserted); bench/fuzz runs 100 000.
  */
 class FuzzedInputsTest {
-    private static final int MUTATIONS_PER_EXAMPLE = 1_000;
+    private static final int MUTATIONS_PER_EXAMPLE = 750;
     private static final long SEED = 20_261_203L;
 
     @Test
