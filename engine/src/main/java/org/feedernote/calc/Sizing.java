@@ -187,12 +187,18 @@ final class Sizing {
         String lastReason = null;
         String lastReasonCheck = "capacity";
         List<Double> covered = sizesFor(c);
+        double largest = 0;
+        for (double size : covered) if (size <= DropBalancing.PRACTICAL_LARGEST_MM2 + 1e-9) largest = size;
+        CapacityCalc.Probe lastProbe = null;
+        Map<Double, Double> izBySize = new java.util.TreeMap<>();
         for (double size : sizes) {
-            if (!covered.contains(size)) continue;
+            if (!covered.contains(size) || size > largest + 1e-9) continue;
             Circuit candidate = withCpc(c, size);
             CapacityCalc.Probe probe = run.capacityCalc.probe(candidate);
+            lastProbe = probe;
+            izBySize.put(size, probe.capacity().iz().value());
             String quick = probe.shortfall();
-            if (quick != null && size < sizes.get(sizes.size() - 1)) {
+            if (quick != null && size < largest - 1e-9) {
                 notes.add(new String[] {"Size rejected", quick, mm2(size) + " rejected"});
                 lastReason = quick;
                 lastReasonCheck = "capacity";
@@ -231,8 +237,23 @@ final class Sizing {
                     + mm2(firstCoordinated.cable().size().mm2()) + ", is used and the circuit fails"});
             chosen = firstCoordinated;
         } else {
-            notes.add(new String[] {"No size passes", "no standard size up to " + mm2(last.cable().size().mm2()) + " passes",
-                    "the largest is used and the circuit fails"});
+            String parallel = "";
+            if (lastProbe != null && lastProbe.shortfall() != null && c.cable().parallel() == 1) {
+                double iz = lastProbe.capacity().iz().value();
+                double need = c.device().ratingA() != null ? c.device().ratingA() : run.designCurrent.get(c.id()).value();
+                int n = (int) Math.ceil(need / iz - 1e-9);
+                double each = last.cable().size().mm2();
+                for (Map.Entry<Double, Double> e : izBySize.entrySet()) {
+                    if (n * e.getValue() >= need - 1e-9) {
+                        each = e.getKey();
+                        break;
+                    }
+                }
+                if (n > 1) parallel = "; " + n + " cables of " + mm2(each) + " in parallel would carry " + Decimals.trim(need)
+                        + " A before the derating for their own grouping (give cable.parallel: " + n + " and check again)";
+            }
+            notes.add(new String[] {"No size passes", "no single cable up to " + mm2(last.cable().size().mm2()) + " (the largest the sizing chooses) passes"
+                    + parallel, "the largest is used and the circuit fails"});
             chosen = last;
         }
         return new FirstChoice(chosen, run.evaluate(chosen, Trace.noop(), working), notes, null, null);

@@ -209,4 +209,33 @@ class ProtectionJudgementTest {
         List<CircuitResult> lights = r.circuits().stream().filter(c -> c.id().startsWith("L")).toList();
         for (CircuitResult c : lights) assertTrue(c.check("breaking-capacity").pass(), c.id() + " at " + c.check("breaking-capacity").limit() + " kA");
     }
+
+    @Test
+    void beyondThePracticalLargestSizeTheSizingProposesCablesInParallel() {
+        // A 630 A MCCB on a 4-core XLPE cable in free air: 300 mm² carries 621 A (IEC 60364-5-52:2009,
+        // Table B.52.13, method E, from memory), below I_n; the sizing stops at 300 mm² (common practice,
+        // no source) and says how many in parallel would do.
+        String yaml = Fixtures.head("", "transformer: {rating_kva: 1000, impedance_percent: 6}") + """
+                boards:
+                  - id: B0
+                  - id: B1
+                circuits:
+                  - id: F1
+                    from: B0
+                    to: B1
+                    length_m: 40
+                    cable: {conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}
+                    installation: {method: E}
+                    device: {kind: mccb, rating_a: 630, instantaneous_a: 6300, breaking_capacity_ka: 50}
+                """ + circuit("L1", "{kind: other, current_a: 500, power_factor: 0.9, phases: 3}", 10,
+                "{conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: 240, cpc_mm2: 120}",
+                "{kind: mccb, rating_a: 500, instantaneous_a: 5000, breaking_capacity_ka: 50}").replace("from: B0", "from: B1").indent(2);
+        Result r = Fixtures.run(yaml);
+        CircuitResult f = r.circuits().get(0);
+        assertEquals(300, f.circuit().cable().size().mm2());
+        String decisions = org.feedernote.trace.TraceWalk.steps(r.trace()).stream()
+                .filter(st -> st.id().startsWith("F1/size/") && st instanceof org.feedernote.trace.Step.Decision)
+                .map(st -> ((org.feedernote.trace.Step.Decision) st).because()).reduce("", String::concat);
+        assertTrue(decisions.contains("in parallel"), decisions);
+    }
 }
