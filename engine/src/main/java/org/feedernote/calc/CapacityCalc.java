@@ -44,6 +44,16 @@ final class CapacityCalc {
                 ? Given.input(dt, id, "/dev/I_n", "Rated current of the device", "I_n", c.device().ratingA(), Units.A, c.where().path(),
                         ".device.rating_a")
                 : Given.lookupUsing(dt, capacityData.ratingAtLeast(id + "/dev/I_n", c.device().kind(), ib.value()), ib);
+        if (c.device().longTimeA() != null) {
+            Q frame = in;
+            in = Given.input(dt, id, "/dev/I_r", "Long-time (overload) setting of the release", "I_r", c.device().longTimeA(), Units.A,
+                    c.where().path(), ".device.long_time_a");
+            if (dt.recording()) Given.decision(dt, id + "/dev/setting", "Current of the overload rule",
+                    "an adjustable release: frame I_n = " + Decimals.trim(frame.value()) + " A, set to I_r = " + Decimals.trim(in.value()) + " A",
+                    "I_r takes the place of I_n in I_b ≤ I_n ≤ I_z and I_2 = k_2 · I_n", "IEC 60364-4-43:2008, 433.1 (adjustable devices: the current setting)",
+                    frame.id(), in.id());
+            in = in.as("I_n");
+        }
         Q k2 = Given.lookup(dt, capacityData.k2(id + "/dev/k2", c.device().kind()));
         Q i2 = CapacityFormulas.CONVENTIONAL_TRIPPING.eval(dt, id, "/dev/I_2", "", bind(CapacityFormulas.K2, k2),
                 bind(CapacityFormulas.I_N, in));
@@ -75,7 +85,7 @@ final class CapacityCalc {
         Trace t = Trace.noop();
         int phases = c.phases();
         Q ib = run.designCurrent.get(c.id());
-        double in = c.device().ratingA() != null ? c.device().ratingA()
+        double in = c.device().overloadSettingA() != null ? c.device().overloadSettingA()
                 : capacityData.ratingAtLeast("probe", c.device().kind(), ib.value()).value();
         Capacity cap = capacity(t, c, phases, ib);
         double need = cap.neutralDesign() != null ? Math.max(in, cap.neutralDesign().value()) : in;

@@ -329,7 +329,7 @@ final class FaultPath {
         }
         Q ia = tripCurrent(t, c, id, in, time);
         if (ia == null) {
-            String missing = dev.kind() == DeviceKind.MCCB ? "device.instantaneous_a (the MCCB's instantaneous setting)"
+            String missing = dev.kind() == DeviceKind.MCCB ? "device.instantaneous_a (the MCCB's instantaneous setting; or short_time_a with a delay within the time)"
                     : "device.disconnection_current_a (the fuse's current for disconnection within " + NumberFormatPolicyLite.s(time.value()) + " s, from the manufacturer's curve)";
             if (t.recording()) Given.decision(t, id + "/check", "Automatic disconnection", "the input does not give " + missing,
                     "FAIL: disconnection cannot be shown", "IEC 60364-4-41:2005, 411.4.4");
@@ -377,10 +377,25 @@ final class FaultPath {
                 return Given.lookup(t, ia);
             }
             case MCCB: {
-                if (dev.instantaneousA() == null) return null;
-                Q ii = Given.input(t, id, "/Ii", "Instantaneous trip setting", "I_i", dev.instantaneousA(), Units.A, c.where().path(),
-                        ".device.instantaneous_a");
-                return MCCB_TRIP.eval(t, id, "/Ia", "MCCB", bind(I_INST, ii));
+                Q ia = null;
+                if (dev.instantaneousA() != null) {
+                    Q ii = Given.input(t, id, "/Ii", "Instantaneous trip setting", "I_i", dev.instantaneousA(), Units.A, c.where().path(),
+                            ".device.instantaneous_a");
+                    ia = MCCB_TRIP.eval(t, id, "/Ia", "MCCB", bind(I_INST, ii));
+                }
+                if (dev.shortTimeA() != null && dev.shortTimeDelayS() <= time.value() + 1e-12) {
+                    Q isd = Given.input(t, id, "/Isd", "Short-time pick-up setting", "I_sd", dev.shortTimeA(), Units.A, c.where().path(),
+                            ".device.short_time_a");
+                    Q iaSd = MCCB_SHORT_TIME_TRIP.evalAs("I_a,sd", t, id, "/Ia_sd", "short-time release", bind(I_SD, isd));
+                    if (t.recording()) Given.decision(t, id + "/Ia-basis", "Release that disconnects within t",
+                            "the short-time delay t_sd = " + Decimals.trim(dev.shortTimeDelayS()) + " s is within t = " + Decimals.trim(time.value())
+                                    + " s" + (ia == null ? "" : "; I_a,sd = " + Decimals.trim(iaSd.value()) + " A against I_a = " + Decimals.trim(ia.value())
+                                    + " A of the instantaneous release"),
+                            ia == null || iaSd.value() < ia.value() ? "the short-time release, the lower current" : "the instantaneous release, the lower current",
+                            "IEC 60364-4-41:2005, 411.4.4", iaSd.id());
+                    if (ia == null || iaSd.value() < ia.value()) ia = iaSd.as("I_a");
+                }
+                return ia;
             }
             default:
                 return null;

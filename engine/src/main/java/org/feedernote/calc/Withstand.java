@@ -175,7 +175,16 @@ final class Withstand {
                         "The circuit-breaker is taken as energy-limiting class 3, the usual class of modern MCBs; confirm with the manufacturer (device.let_through_a2s replaces it).", "");
                 return new LetThrough(Given.alias("I²t", v), null);
             }
-            // MCCB: the instantaneous release, within 0.1 s.
+            // MCCB: the instantaneous release within 0.1 s where the current reaches it, else the short-time release after its delay.
+            boolean instantaneous = dev.instantaneousA() != null && i >= 1.2 * dev.instantaneousA() - 1e-9;
+            if (!instantaneous && dev.shortTimeDelayS() != null) {
+                Q tsd = Given.input(t, id, "/t_sd", "Short-time delay of the release", "t_sd", dev.shortTimeDelayS(), Units.S, c.where().path(),
+                        ".device.short_time_delay_s");
+                if (t.recording()) Given.decision(t, id + "/t-basis", "Operating time", "I = " + FaultPath.NumberFormatPolicyLite.a(i)
+                                + " A reaches the short-time release" + (dev.instantaneousA() == null ? "" : " but not 1.2 × I_i"),
+                        "the release operates after its delay t_sd (the manufacturer's let_through_a2s replaces this)", "IEC 60947-2:2016, 8.3.3 (from memory)");
+                return new LetThrough(ENERGY.eval(t, id, "/I2t", "short-time region", bind(I, current), bind(T, tsd.as("t"))), null);
+            }
             Q t01 = Given.derived(t, id, "/t", "Operating time", "t", 0.1, Units.S,
                     "instantaneous release: operation within 0.1 s (IEC 60364-4-43:2008, 434.5.2; common practice, no source)");
             return new LetThrough(ENERGY.eval(t, id, "/I2t", "instantaneous region", bind(I, current), bind(T, t01)), null);

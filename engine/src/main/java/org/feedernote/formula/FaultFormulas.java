@@ -102,6 +102,11 @@ public final class FaultFormulas {
     public static final Formula MCCB_TRIP = new Formula("ia-mccb", "Current that operates the device within the time", "I_a", A,
             mul(new Expr.Num(1.2, "1.2"), v(I_INST)), "IEC 60947-2:2016, 8.3.3.1.2 (instantaneous setting, tolerance +20 %)");
 
+    public static final Var I_SD = var("Isd", "I_sd", A);
+
+    public static final Formula MCCB_SHORT_TIME_TRIP = new Formula("ia-mccb-sd", "Current that operates the short-time release within its delay", "I_a", A,
+            mul(new Expr.Num(1.2, "1.2"), v(I_SD)), "IEC 60947-2:2016, 8.3.3.1.2 (short-time pick-up, tolerance +20 %; from memory)");
+
     public static final Formula RCD_TRIP = new Formula("ia-rcd", "Current that operates the RCD within 40 ms", "I_a", A,
             mul(n(5), v(IDN)), "IEC 61008-1 / IEC 61009-1 (operation at 5 I_Δn)");
 

@@ -520,11 +520,31 @@ public final class InputReader {
         }
         Node rating = at(d, "rating_a");
         Double ratingA = num(rating);
+        for (String key : List.of("long_time_a", "short_time_a", "short_time_delay_s")) {
+            if (kind != null && kind != DeviceKind.MCCB && at(d, key) != null) {
+                error(at(d, key), join(path, key), key + " is a setting of an mccb's release; " + kind.token() + " has none");
+            }
+        }
+        if ((at(d, "short_time_a") == null) != (at(d, "short_time_delay_s") == null)) {
+            Node given = at(d, "short_time_a") != null ? at(d, "short_time_a") : at(d, "short_time_delay_s");
+            error(given, join(path, at(d, "short_time_a") != null ? "short_time_a" : "short_time_delay_s"),
+                    "give short_time_a and short_time_delay_s together (the short-time pick-up and its delay)");
+        }
+        Double longTime = num(d, "long_time_a");
+        if (longTime != null && at(d, "long_time_a") != null) {
+            if (ratingA == null) {
+                error(at(d, "long_time_a"), join(path, "long_time_a"), "long_time_a needs the frame's rating_a (not auto)");
+            } else if (longTime > ratingA + 1e-9) {
+                error(at(d, "long_time_a"), join(path, "long_time_a"), "the long-time setting " + StructureValidator.num(longTime)
+                        + " A is above the rating " + StructureValidator.num(ratingA) + " A");
+            }
+        }
         if (kind == null || (rating == null)) return null;
         return new Device(kind, ratingA, curve, num(d, "instantaneous_a"), num(d, "breaking_capacity_ka"),
                 num(d, "disconnection_current_a"), num(d, "residual_current_a"), num(d, "let_through_a2s"),
                 word(d, "protection", Protection.class, Protection.OVERLOAD_AND_FAULT),
-                word(d, "residual_type", ResidualType.class, ResidualType.GENERAL));
+                word(d, "residual_type", ResidualType.class, ResidualType.GENERAL),
+                num(d, "long_time_a"), num(d, "short_time_a"), num(d, "short_time_delay_s"));
     }
 
     private Load load(Node l, String path, Cable cable, Basis basis) {

@@ -176,7 +176,11 @@ public final class InputSchema {
                 // k²S² of the largest conductors (143² × 630² × 12 parallel) is about 1e11 A²s; common practice, no source.
                 opt("let_through_a2s", upTo("let-through energy I²t from the manufacturer's data in A²s", 1e11), "none"),
                 opt("protection", word("what the device protects against: overload-and-fault, or fault-only where a separate overload relay protects the circuit against overload", Protection.class), "overload-and-fault"),
-                opt("residual_type", word("break-time type of an RCD or RCBO: general, or S (time-delayed)", ResidualType.class), "general"));
+                opt("residual_type", word("break-time type of an RCD or RCBO: general, or S (time-delayed)", ResidualType.class), "general"),
+                // MCCB release settings: up to the largest frames; a delay up to the 1 s of selective breakers (common practice, no source).
+                opt("long_time_a", between("MCCB long-time (overload) current setting I_r in A, at most rating_a", 0.5, 6_300), "rating_a"),
+                opt("short_time_a", between("MCCB short-time pick-up current I_sd in A", 1, 200_000), "none"),
+                opt("short_time_delay_s", between("MCCB short-time delay t_sd in s", 0.01, 1), "none"));
         Spec.Obj circuit = objOne("a circuit", List.of(List.of("load", "to")),
                 req("id", id("circuit id, unique across boards and circuits")),
                 opt("description", text("what the circuit is"), "empty"),

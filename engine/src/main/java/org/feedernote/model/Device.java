@@ -3,13 +3,13 @@ package org.feedernote.model;
 /** The protective device at the origin of a circuit. ratingA is null for 'auto'. */
 public record Device(DeviceKind kind, Double ratingA, Curve curve, Double instantaneousA, Double breakingCapacityKa,
                      Double disconnectionCurrentA, Double rcdResidualA, Double letThroughA2s, Protection protection,
-                     ResidualType residualType) {
+                     ResidualType residualType, Double longTimeA, Double shortTimeA, Double shortTimeDelayS) {
 
     /** As the design input gives it without the optional protection and residual type: the usual device. */
     public Device(DeviceKind kind, Double ratingA, Curve curve, Double instantaneousA, Double breakingCapacityKa,
                   Double disconnectionCurrentA, Double rcdResidualA, Double letThroughA2s) {
         this(kind, ratingA, curve, instantaneousA, breakingCapacityKa, disconnectionCurrentA, rcdResidualA, letThroughA2s,
-                Protection.OVERLOAD_AND_FAULT, ResidualType.GENERAL);
+                Protection.OVERLOAD_AND_FAULT, ResidualType.GENERAL, null, null, null);
     }
 
     /** True where the device protects against fault only (a separate overload relay protects against overload). */
@@ -24,6 +24,11 @@ public record Device(DeviceKind kind, Double ratingA, Curve curve, Double instan
 
     public Device withRating(double rating) {
         return new Device(kind, rating, curve, instantaneousA, breakingCapacityKa, disconnectionCurrentA, rcdResidualA, letThroughA2s,
-                protection, residualType);
+                protection, residualType, longTimeA, shortTimeA, shortTimeDelayS);
+    }
+
+    /** The current setting of the overload release: an MCCB's long-time setting where given, else the rated current (null for auto). */
+    public Double overloadSettingA() {
+        return longTimeA != null ? longTimeA : ratingA;
     }
 }

@@ -238,4 +238,30 @@ class ProtectionJudgementTest {
                 .map(st -> ((org.feedernote.trace.Step.Decision) st).because()).reduce("", String::concat);
         assertTrue(decisions.contains("in parallel"), decisions);
     }
+
+    @Test
+    void anMccbIsJudgedByItsSettings() {
+        // IEC 60364-4-43:2008, 433.1: for an adjustable device I_n is the current setting; IEC 60947-2:2016,
+        // 8.3.3.1.2 (from memory): the short-time pick-up within +20 %, so I_a = 1.2 × 600 A = 720 A, and
+        // Z_s,max = 0.95 × 230 / 720 = 0.3035 Ω (IEC 60364-4-41:2005, 411.4.4, c_min = 0.95).
+        String yaml = Fixtures.head("", "transformer: {rating_kva: 630, impedance_percent: 5}") + """
+                boards:
+                  - id: B0
+                  - id: B1
+                circuits:
+                  - id: F1
+                    from: B0
+                    to: B1
+                    length_m: 30
+                    cable: {conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: 25, cpc_mm2: 16}
+                    installation: {method: E}
+                    device: {kind: mccb, rating_a: 160, long_time_a: 100, short_time_a: 600, short_time_delay_s: 0.2, breaking_capacity_ka: 36}
+                """ + circuit("L1", "{kind: other, current_a: 60, power_factor: 0.9, phases: 3}", 10,
+                "{conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: 16, cpc_mm2: 16}",
+                "{kind: mcb, curve: C, rating_a: 63, breaking_capacity_ka: 10}").replace("from: B0", "from: B1").indent(2);
+        CircuitResult f = Fixtures.run(yaml).circuits().get(0);
+        assertEquals(100, f.rating().value(), 1e-12, "the long-time setting is the I_n of the overload rule");
+        assertEquals(100, f.check("capacity").limit(), 1e-12);
+        assertEquals(0.95 * 230 / 720, f.check("disconnection").limit(), 1e-9);
+    }
 }
