@@ -397,6 +397,7 @@ final class DropBalancing {
                 changed(f);
                 f.blocked = true;
                 sizing.decidedBy.remove(f.id);
+                sizing.withdrawLastNote(f.id);
                 sizing.note(f.id, "Enlargement refused", Sizing.mm2(best.from()) + " → " + Sizing.mm2(best.to())
                         + " would raise the fault level below it so that the device of " + String.join(", ", lost) + " could no longer break it",
                         "kept at " + Sizing.mm2(best.from()) + "; it is not enlarged further");

@@ -41,6 +41,12 @@ final class Sizing {
         return c.cable().size().auto();
     }
 
+    /** Takes back the latest decision noted for a circuit (a step that was undone at once). */
+    void withdrawLastNote(String circuit) {
+        List<String[]> list = notes.get(circuit);
+        if (list != null && !list.isEmpty()) list.remove(list.size() - 1);
+    }
+
     void note(String circuit, String title, String because, String outcome) {
         notes.computeIfAbsent(circuit, k -> new ArrayList<>()).add(new String[] {title, because, outcome});
     }
