@@ -152,6 +152,11 @@ public final class DeviceData {
     }
 
     /** A gate current of a gG fuse-link of 16 A to 630 A (A); a rating the table lacks is a {@link DataGapException}. */
+    /** Whether the gates table has the rating. */
+    public boolean hasFuseGates(double ratingA) {
+        return fuseGates.value(ReferenceData.sizeKey(ratingA), Gate.MAX_01S.column) != null;
+    }
+
     public Step.Lookup fuseGate(String id, double ratingA, Gate gate) {
         return Provenance.lookup(fuseGates, id, "Gate current of the gG pre-arcing characteristic (" + gate.meaning + ")", gate.symbol, "A",
                 ReferenceData.sizeKey(ratingA), gate.column, ReferenceData.sizeKey(ratingA) + " A gG", gate.symbol);

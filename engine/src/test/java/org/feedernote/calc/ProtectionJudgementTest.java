@@ -268,4 +268,20 @@ class ProtectionJudgementTest {
         assertEquals(100, f.check("capacity").limit(), 1e-12);
         assertEquals(0.95 * 230 / 720, f.check("disconnection").limit(), 1e-9);
     }
+
+    @Test
+    void aGgFuseAboveItsPointOneSecondGateLetsThroughAtMostTheEnergyOfAPointOneSecondMelting() {
+        // IEC 60269-1, Table 3 (from memory): a 32 A gG fuse-link melts within 0.1 s at 350 A or more. At the
+        // earth-fault current of this circuit (some 600 A) I²t ≤ I² · 0.1 s, well below k²S² of a 2.5 mm² core
+        // (k = 115, IEC 60364-5-54:2011, Table A.54.3); I² · 0.4 s, the bound of the disconnection time alone,
+        // would not be (√(600² × 0.4) / 115 ≈ 3.3 mm²).
+        Result r = Fixtures.run(Fixtures.oneBoard("", circuit("C1", "{kind: socket, current_a: 25, power_factor: 0.9, phases: 1}", 20,
+                "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 6, cpc_mm2: 2.5}",
+                "{kind: fuse, rating_a: 32, breaking_capacity_ka: 80}")).replace("loop_impedance_ohm: 0.3", "loop_impedance_ohm: 0.1"));
+        CircuitResult c = only(r);
+        assertTrue(c.minEarthFault().value() > 350, "earth-fault current " + c.minEarthFault().value());
+        CheckResult pc = c.check("protective-conductor");
+        assertTrue(pc.pass(), "S_PE,min = " + pc.limit());
+        assertEquals(Math.sqrt(c.minEarthFault().value() * c.minEarthFault().value() * 0.1) / 115, pc.limit(), 0.02);
+    }
 }
