@@ -6,7 +6,7 @@ import java.util.List;
 import org.feedernote.data.ReferenceData;
 import org.feedernote.model.*;
 
-/** Design input format 1, described once (see ../shared/design/input-format.md). */
+/** Design input format 1, described once (documented for users in docs/input-format.md, which InputFormatDocTest keeps in step). */
 public final class InputSchema {
     private InputSchema() {}
 
