@@ -161,7 +161,7 @@ class ProtectionJudgementTest {
                     from: B0
                     to: B1
                     length_m: 40
-                    cable: {conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}
+                    cable: {conductor: copper, insulation: xlpe, type: multicore, cores: 5, size_mm2: auto, cpc_mm2: auto}
                     installation: {method: E}
                     device: {kind: mccb, rating_a: 63, instantaneous_a: 630, breaking_capacity_ka: 25}
                 """ + (finals + extra).indent(2);
