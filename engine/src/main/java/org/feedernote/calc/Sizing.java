@@ -6,8 +6,10 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+import org.feedernote.data.CableBuildData;
 import org.feedernote.data.ReferenceData;
 import org.feedernote.model.Cable;
+import org.feedernote.model.CpcKind;
 import org.feedernote.model.Circuit;
 import org.feedernote.trace.Step;
 import org.feedernote.trace.Trace;
@@ -104,8 +106,11 @@ final class Sizing {
      * loop of every circuit below them. Not below 1.5 mm² in a multicore cable, 4 mm² separate.
      */
     private void smallestProtectiveConductors() {
+        // Only a separate conductor can be chosen apart from the cable: a core and the cpc of a
+        // twin-and-earth cable follow the cable's size.
         List<Circuit> finals = run.order().stream()
-                .filter(c -> !run.original(c.id()).isFeeder() && run.original(c.id()).cable().cpc().auto()).toList();
+                .filter(c -> !run.original(c.id()).isFeeder() && run.original(c.id()).cable().cpc().auto()
+                        && run.original(c.id()).cable().separateCpc()).toList();
         // Each final circuit's search depends only on the feeders above it (fixed by now): side by side.
         List<SideBySide.Outcome<Circuit>> found = SideBySide.map(finals, c -> smallestProtectiveConductor(current.get(c.id())));
         for (int i = 0; i < finals.size(); i++) {
@@ -120,7 +125,7 @@ final class Sizing {
 
     private Circuit smallestProtectiveConductor(Circuit chosen) {
         double table = chosen.cable().cpc().mm2();
-        double minimum = chosen.cable().type() == org.feedernote.model.CableType.MULTICORE ? 1.5 : 4;
+        double minimum = separateMinimum(chosen);
         Circuit best = chosen;
         Engine.Run.OwnFigures own = null;
         for (int i = sizes.indexOf(table) - 1; i >= 0; i--) {
@@ -145,9 +150,24 @@ final class Sizing {
     /** Covered sizes by {@link #coverageKey}: few different cables and methods serve thousands of circuits. */
     private final Map<Long, List<Double>> coveredSizes = new java.util.concurrent.ConcurrentHashMap<>();
 
-    /** The standard sizes the tables cover for this circuit's cable and method, ascending. */
+    /** The standard sizes the tables cover for this circuit's cable and method, ascending (and, for twin and earth, that are made). */
     List<Double> sizesFor(Circuit c) {
-        return coveredSizes.computeIfAbsent(coverageKey(c), k -> sizes.stream().filter(s -> covered(c, s)).toList());
+        List<Double> covered = coveredSizes.computeIfAbsent(coverageKey(c), k -> sizes.stream().filter(s -> covered(c, s)).toList());
+        if (c.cable().cpcKind() != CpcKind.TWIN_AND_EARTH || !c.cable().cpc().auto()) return covered;
+        return covered.stream().filter(s -> twinAndEarthCpc(c, s) != null).toList();
+    }
+
+    private static final CableBuildData BUILDS = new CableBuildData(ReferenceData.standard());
+
+    /** The cpc of a twin-and-earth cable of this line size, or null where none is made or its cpc's resistance is not tabulated. */
+    private static Double twinAndEarthCpc(Circuit c, double size) {
+        Double cpc = BUILDS.twinAndEarthCpcMm2(size);
+        return cpc != null && ReferenceData.standard().hasResistance(c.cable().conductor(), cpc) ? cpc : null;
+    }
+
+    /** The smallest separate protective conductor (IEC 60364-5-54, 543.1.3). */
+    private static double separateMinimum(Circuit c) {
+        return CpcKind.separateMinimumMm2(c.cable().conductor(), c.conditions().method());
     }
 
     /** What the covered sizes depend on (insulation, conductor, method, loaded conductors, formation) as one number. */
@@ -292,19 +312,35 @@ final class Sizing {
         return null;
     }
 
-    /** cpc 'auto' follows IEC 60364-5-54 Table 54.2 (same material as the line conductor). */
+    /**
+     * cpc 'auto' follows the cable's construction: a core equals the line conductors; a twin-and-earth
+     * cable has the cpc BS 6004 gives it; a separate conductor starts at IEC 60364-5-54 Table 54.2
+     * (same material as the line conductor), never below the 543.1.3 minimum.
+     */
     Circuit withCpc(Circuit c, double size) {
         Cable cable = c.cable().withSize(size);
-        if (c.cable().cpc().auto()) cable = cable.withCpc(cpcFor(size));
+        if (c.cable().cpc().auto()) cable = cable.withCpc(cpcFor(c, size));
         return c.withCable(cable);
     }
 
-    double cpcFor(double size) {
+    double cpcFor(Circuit c, double size) {
+        CpcKind kind = c.cable().cpcKind();
+        if (kind == CpcKind.CORE) return size;
+        if (kind == CpcKind.TWIN_AND_EARTH) {
+            Double cpc = twinAndEarthCpc(c, size);
+            // Only sizes that are made are candidates (sizesFor); a size outside them is never chosen.
+            return cpc != null ? cpc : size;
+        }
+        return Math.max(table54_2(size), separateMinimum(c));
+    }
+
+    static double table54_2(double size) {
         if (size <= 16) return size;
         if (size <= 35) return 16;
         double half = size / 2;
-        for (double s : sizes) if (s >= half - 1e-9) return s;
-        return sizes.get(sizes.size() - 1);
+        List<Double> standard = ReferenceData.standardSizes();
+        for (double s : standard) if (s >= half - 1e-9) return s;
+        return standard.get(standard.size() - 1);
     }
 
     /** Writes the decisions about a circuit's sizes into its section, before its calculation. */
@@ -318,17 +354,74 @@ final class Sizing {
         for (String[] n : notes.getOrDefault(original.id(), List.of())) {
             t.add(new Step.Decision(original.id() + "/size/" + (++i), n[0], n[1], n[2], "", List.of()));
         }
-        if (autoCpc && cpcByCalculation.containsKey(original.id())) {
-            t.add(new Step.Decision(original.id() + "/size/cpc", "Protective conductor", "cpc_mm2: auto; Table 54.2 would give "
-                    + mm2(cpcByCalculation.get(original.id())) + "; the smallest standard size that passes the adiabatic check and disconnection",
-                    "cpc = " + mm2(sized.cable().cpc().mm2()) + " (selection by calculation; see the fault path below)",
-                    "IEC 60364-5-54:2011, 543.1.2", List.of()));
-        } else if (autoCpc) {
-            double s = sized.cable().size().mm2();
+        if (!autoCpc) return;
+        t.add(constructionDecision(original));
+        Cable cable = sized.cable();
+        double s = cable.size().mm2();
+        String id = original.id() + "/size/cpc";
+        if (cable.cpcKind() == CpcKind.CORE) {
+            t.add(new Step.Decision(id, "Protective conductor", "cpc_mm2: auto; a core of the cable, the same size as the line conductors S = " + mm2(s),
+                    "cpc = " + mm2(cable.cpc().mm2()), "IEC 60364-5-54:2011, Table 54.2 (S ≤ 16 mm²: cpc = S; a core of the cable meets every row)", List.of()));
+        } else if (cable.cpcKind() == CpcKind.TWIN_AND_EARTH) {
+            Step.Lookup cpc = BUILDS.twinAndEarthCpc(original.id() + "/size/cpc_te", s);
+            t.add(cpc);
+            t.add(new Step.Decision(id, "Protective conductor", "cpc_mm2: auto; the cpc of the " + mm2(s) + " flat twin-and-earth cable is "
+                    + mm2(cpc.result().value()) + "; a cpc smaller than the line conductor is shown adequate by the adiabatic check below",
+                    "cpc = " + mm2(cable.cpc().mm2()), "BS 6004:2012 (flat cables with cpc); IEC 60364-5-54:2011, 543.1.2", List.of(cpc.result().id())));
+        } else if (cpcByCalculation.containsKey(original.id())) {
+            t.add(new Step.Decision(id, "Protective conductor", "cpc_mm2: auto, a separate conductor; Table 54.2 with the 543.1.3 minimum would give "
+                    + mm2(cpcByCalculation.get(original.id())) + "; the smallest standard size, not below " + mm2(separateMinimum(original))
+                    + ", that passes the adiabatic check and disconnection",
+                    "cpc = " + mm2(cable.cpc().mm2()) + " (selection by calculation; see the fault path below)",
+                    "IEC 60364-5-54:2011, 543.1.2 and 543.1.3", List.of()));
+        } else {
             String rule = s <= 16 ? "S ≤ 16 mm²: cpc = S" : s <= 35 ? "16 mm² < S ≤ 35 mm²: cpc = 16 mm²" : "S > 35 mm²: cpc = S/2, next standard size";
-            t.add(new Step.Decision(original.id() + "/size/cpc", "Protective conductor", "cpc_mm2: auto; line conductor S = " + mm2(s) + "; " + rule,
-                    "cpc = " + mm2(sized.cable().cpc().mm2()), "IEC 60364-5-54:2011, Table 54.2", List.of()));
+            double table = table54_2(s);
+            double minimum = separateMinimum(original);
+            boolean raised = minimum > table + 1e-9;
+            t.add(new Step.Decision(id, "Protective conductor", "cpc_mm2: auto, a separate conductor; line conductor S = " + mm2(s) + "; " + rule
+                    + (raised ? "; below the minimum of " + mm2(minimum) + " for a separate conductor" + separateMinimumWhy(original) : ""),
+                    "cpc = " + mm2(cable.cpc().mm2()), raised ? "IEC 60364-5-54:2011, Table 54.2 and 543.1.3" : "IEC 60364-5-54:2011, Table 54.2",
+                    List.of()));
         }
+    }
+
+    private static String separateMinimumWhy(Circuit c) {
+        if (c.cable().conductor() == org.feedernote.model.Conductor.ALUMINIUM) return " of aluminium";
+        return CpcKind.mechanicallyProtected(c.conditions().method())
+                ? " protected against mechanical damage (method " + c.conditions().method().token() + ": conduit or trunking)"
+                : " not protected against mechanical damage (method " + c.conditions().method().token() + ": not in conduit or trunking)";
+    }
+
+    /** How the protective conductor is made, stated or by default, and what cpc_mm2: auto may choose from therefore. */
+    private static Step.Decision constructionDecision(Circuit original) {
+        Cable cable = original.cable();
+        CpcKind kind = cable.cpcKind();
+        String given = cable.cpcKindStated() ? "cpc_kind: " + kind.token() + " (design input)" : defaultReason(original);
+        String outcome = switch (kind) {
+            case CORE -> "a core of the cable: cpc = S at every size";
+            case TWIN_AND_EARTH -> "the cpc of the flat twin-and-earth cable: only the sizes made (up to "
+                    + mm2(CableBuildData.TWIN_AND_EARTH_LARGEST_MM2) + ") whose cpc the tables give";
+            default -> "a separate conductor: Table 54.2 or selection by calculation, not below " + mm2(separateMinimum(original))
+                    + " (" + separateMinimumWhy(original).trim() + ")";
+        };
+        String ref = kind == CpcKind.TWIN_AND_EARTH ? "BS 6004:2012; IEC 60364-5-54:2011, 543.1" : kind == CpcKind.CORE
+                ? "IEC 60364-5-54:2011, 543.2.1" : "IEC 60364-5-54:2011, 543.1.2, 543.1.3 and Table 54.2";
+        return new Step.Decision(original.id() + "/size/cpc-kind", "Construction of the protective conductor", given, outcome, ref, List.of());
+    }
+
+    private static String defaultReason(Circuit c) {
+        Cable cable = c.cable();
+        if (cable.type() == org.feedernote.model.CableType.SINGLE_CORE) return "cpc_kind not given: single-core cables have no core for it, so by default a separate conductor";
+        int phases = c.isFeeder() ? 3 : c.load().phases();
+        String live = phases == 1 ? "2 live conductors (L, N)" : c.load() != null && c.load().kind() == org.feedernote.model.LoadKind.MOTOR
+                ? "3 live conductors (a three-phase motor is taken without neutral; common practice, no source)"
+                : "4 live conductors (three-phase with neutral)";
+        String otherwise = phases == 3 && cable.cores() == 4 ? " (state cpc_kind: core where the circuit has no neutral)"
+                : cable.conductor() == org.feedernote.model.Conductor.COPPER && cable.insulation() == org.feedernote.model.Insulation.PVC
+                        && cable.cores() <= 3 ? " (state cpc_kind: twin-and-earth for a flat twin-and-earth cable)" : "";
+        return "cpc_kind not given: a " + cable.cores() + "-core cable on a circuit of " + live + (cable.cpcKind() == CpcKind.CORE
+                ? " has a core more: by default that core" : " has no core to spare: by default a separate conductor" + otherwise);
     }
 
     /** The check that decided an auto size, or the closest to its limit for given sizes. */

@@ -12,6 +12,7 @@ import org.feedernote.model.Cable;
 import org.feedernote.model.CableType;
 import org.feedernote.model.Circuit;
 import org.feedernote.model.Conductor;
+import org.feedernote.model.CpcKind;
 import org.feedernote.model.Device;
 import org.feedernote.model.DeviceKind;
 import org.feedernote.model.Insulation;
@@ -246,10 +247,18 @@ final class Withstand {
 
     private Q kFactor(Trace t, String id, Cable cable, Q thetaMax, boolean protective) {
         if (t.recording()) return kFactorSteps(t, id, cable, thetaMax, protective);
-        KInputs key = new KInputs(cable.conductor(), cable.insulation(), protective && cable.type() == CableType.SINGLE_CORE,
-                thetaMax.value());
+        KInputs key = new KInputs(cable.conductor(), cable.insulation(), protective && cable.separateCpc(), thetaMax.value());
         double k = kValues.computeIfAbsent(key, x -> kFactorSteps(t, id, cable, thetaMax, protective).value());
         return new Q(id, "/k", K_FACTOR.symbol(), k, K_FACTOR.unit());
+    }
+
+    /** Why a protective conductor that is not separate starts at the cable's maximum operating temperature. */
+    private static String protectiveInCable(Cable cable) {
+        if (cable.cpcKind() == CpcKind.CORE) return "the protective conductor is a core of the cable";
+        if (cable.cpcKind() == CpcKind.TWIN_AND_EARTH) return "the protective conductor is the bare cpc in the sheath of the twin-and-earth cable";
+        // cpc_mm2 given without cpc_kind, and not a core or a twin-and-earth cpc by its size: taken
+        // as run with the cable, at θ_max, the lower k (on the safe side).
+        return "cpc_kind not given: the protective conductor is taken as a core of the cable, in its sheath or bunched with it (the lower k, on the safe side)";
     }
 
     private Q kFactorSteps(Trace t, String id, Cable cable, Q thetaMax, boolean protective) {
@@ -257,14 +266,17 @@ final class Withstand {
         Q beta = Given.lookup(t, faults.beta(id + "/beta", cable.conductor()));
         Q thetaF = Given.lookup(t, faults.finalTemperature(id + "/theta_f", cable.insulation()));
         Q thetaI;
-        if (protective && cable.type() == CableType.SINGLE_CORE) {
+        if (protective && cable.separateCpc()) {
             thetaI = Given.lookup(t, faults.separateInitialTemperature(id + "/theta_i", cable.insulation()));
-            if (t.recording()) Given.decision(t, id + "/cpc-kind", "Kind of protective conductor", "single-core cables: the protective conductor is a separate insulated conductor",
+            if (t.recording()) Given.decision(t, id + "/cpc-kind", "Kind of protective conductor", cable.type() == CableType.SINGLE_CORE
+                            ? "single-core cables: the protective conductor is a separate insulated conductor"
+                            : "the protective conductor is a separate insulated conductor, not part of the " + cable.cores() + "-core cable",
                     "initial temperature 30 °C (Table A.54.2)", "IEC 60364-5-54:2011, Table A.54.2", thetaI.id());
         } else {
             thetaI = rel(thetaMax, "θ_i");
-            if (t.recording()) Given.decision(t, id + "/theta-i", "Initial conductor temperature", protective ? "the protective conductor is a core of the cable or in its sheath"
-                    : "the line conductor starts at its maximum operating temperature", "θ_i = θ_max", "IEC 60364-5-54:2011, Tables A.54.3 and A.54.4", thetaMax.id());
+            if (t.recording()) Given.decision(t, id + "/theta-i", "Initial conductor temperature", !protective
+                    ? "the line conductor starts at its maximum operating temperature" : protectiveInCable(cable), "θ_i = θ_max",
+                    "IEC 60364-5-54:2011, Tables A.54.3 and A.54.4", thetaMax.id());
         }
         return K_FACTOR.eval(t, id, "/k", "", bind(K, kc), bind(BETA, beta), bind(THETA_F, thetaF), bind(THETA_I, thetaI));
     }

@@ -19,6 +19,14 @@ public final class CableBuildData {
         this.kLayers = data.table("k-protective-layers.csv");
     }
 
+    /** The largest flat twin and earth cable in the table (BS 6004), line conductor mm². */
+    public static final double TWIN_AND_EARTH_LARGEST_MM2 = 16;
+
+    /** The cpc of a flat twin and earth cable (mm²) without a step, or null where no such cable has that line size. */
+    public Double twinAndEarthCpcMm2(double lineMm2) {
+        return twinEarth.value(ReferenceData.sizeKey(lineMm2), "cpc_mm2");
+    }
+
     /** The nominal area of the cpc of a flat twin and earth cable (mm²), or null where no such cable has that line size. */
     public Step.Lookup twinAndEarthCpc(String id, double lineMm2) {
         String row = ReferenceData.sizeKey(lineMm2);

@@ -11,6 +11,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+import org.feedernote.data.CableBuildData;
 import org.feedernote.data.CapacityData;
 import org.feedernote.data.ReferenceData;
 import org.feedernote.model.*;
@@ -355,6 +356,10 @@ public final class InputReader {
         } else if (at(c, "phase") != null && load != null && load.phases() == 3) {
             error(at(c, "phase"), path + ".phase", "phase applies to single-phase circuits only; remove it for a three-phase load");
         }
+        if (cable != null && conditions != null && (load != null || to != null)) {
+            cable = cpcConstruction(at(c, "cable"), path + ".cable", cable, conditions.method(), to != null ? (phase != null ? 1 : 3) : load.phases(),
+                    load != null && load.kind() == LoadKind.MOTOR);
+        }
         if (cable != null && conditions != null) methodSuitsCable(at(c, "installation"), path + ".installation.method", conditions.method(), cable);
         if (conditions != null) {
             boolean ground = conditions.method() == Method.D1 || conditions.method() == Method.D2;
@@ -459,6 +464,116 @@ public final class InputReader {
         }
     }
 
+    private CableBuildData builds;
+
+    private CableBuildData builds() {
+        if (builds == null) builds = new CableBuildData(ReferenceData.standard());
+        return builds;
+    }
+
+    /**
+     * The cable with its protective conductor's construction: the stated cpc_kind checked against
+     * the cable, or the default derived from the cable and the circuit (InputSchema.DEFAULT_CPC_KIND).
+     * phases is 0 where the load's phases are unknown (an error has been reported).
+     */
+    private Cable cpcConstruction(Node c, String path, Cable cable, Method method, int phases, boolean motor) {
+        Node kindNode = at(c, "cpc_kind");
+        boolean multicore = cable.type() == CableType.MULTICORE;
+        SizeChoice size = cable.size();
+        SizeChoice cpc = cable.cpc();
+        if (!cable.cpcKindStated()) {
+            CpcKind kind;
+            // Live conductors for the default: L and N single-phase; three-phase with a neutral,
+            // except a motor, which is connected to the lines only (common practice, no source).
+            int live = phases == 1 ? 2 : motor ? 3 : 4;
+            boolean spareCore = multicore && cable.cores() >= live + 1;
+            if (!multicore) {
+                kind = CpcKind.SEPARATE;
+            } else if (cpc.auto()) {
+                kind = spareCore ? CpcKind.CORE : CpcKind.SEPARATE;
+            } else if (spareCore && !size.auto() && cpc.mm2() == size.mm2()) {
+                kind = CpcKind.CORE;
+            } else if (twinAndEarthBuild(cable) && !size.auto() && Double.valueOf(cpc.mm2()).equals(builds().twinAndEarthCpcMm2(size.mm2()))) {
+                kind = CpcKind.TWIN_AND_EARTH;
+            } else {
+                kind = null;
+            }
+            if (kind == CpcKind.SEPARATE && !cpc.auto() && cpc.mm2() < CpcKind.separateMinimumMm2(cable.conductor(), method) - 1e-9) {
+                warn(at(c, "cpc_mm2"), join(path, "cpc_mm2"), "a protective conductor not part of a cable is at least "
+                        + StructureValidator.num(CpcKind.separateMinimumMm2(cable.conductor(), method)) + " mm² " + cable.conductor().token()
+                        + separateMinimumWhy(cable.conductor(), method) + " (IEC 60364-5-54, 543.1.3); found "
+                        + StructureValidator.num(cpc.mm2()) + " mm²: check it, or state cable.cpc_kind");
+            }
+            return new Cable(cable.conductor(), cable.insulation(), cable.type(), cable.cores(), size, cpc, cable.parallel(),
+                    cable.formation(), kind, false);
+        }
+        String kindPath = join(path, "cpc_kind");
+        String cpcPath = join(path, "cpc_mm2");
+        switch (cable.cpcKind()) {
+            case ARMOUR -> error(kindNode, kindPath, "the steel-wire armour cannot be calculated as the protective conductor: the packaged "
+                    + "armour table (BS 5467) gives no armour resistance, so neither Zs nor the armour's withstand is known; "
+                    + "give core, twin-and-earth or separate");
+            case CORE -> {
+                int lines = phases == 1 ? 2 : 3;
+                if (!multicore) {
+                    error(kindNode, kindPath, "single-core cables have no core for the protective conductor: give cpc_kind: separate");
+                } else if (phases != 0 && cable.cores() < lines + 1) {
+                    error(kindNode, kindPath, "a " + cable.cores() + "-core cable on a " + (phases == 1 ? "single" : "three")
+                            + "-phase circuit has no core left for the protective conductor (" + (phases == 1 ? "L, N" : "L1, L2, L3")
+                            + " and the cpc need " + (lines + 1) + " cores): give cpc_kind: separate" + (twinAndEarthBuild(cable) ? " or twin-and-earth" : ""));
+                } else if (!cpc.auto() && (size.auto() || cpc.mm2() != size.mm2())) {
+                    error(at(c, "cpc_mm2"), cpcPath, "cpc_kind: core: the protective conductor is a core of the cable, equal to the line conductors ("
+                            + (size.auto() ? "size_mm2: auto" : "size_mm2: " + StructureValidator.num(size.mm2())) + "); found "
+                            + StructureValidator.num(cpc.mm2()) + ": give cpc_mm2: auto or the line size");
+                }
+            }
+            case TWIN_AND_EARTH -> {
+                if (!twinAndEarthBuild(cable)) {
+                    error(kindNode, kindPath, "flat twin-and-earth cables (BS 6004) are 70 °C PVC with copper conductors, 2-core or 3-core with cpc; found "
+                            + cable.conductor().token() + ", " + cable.insulation().token() + ", "
+                            + (multicore ? cable.cores() + "-core" : "single-core") + ": give cpc_kind: core or separate");
+                } else if (!size.auto()) {
+                    Double teCpc = builds().twinAndEarthCpcMm2(size.mm2());
+                    if (teCpc == null) {
+                        error(at(c, "size_mm2"), join(path, "size_mm2"), "flat twin-and-earth cables (BS 6004) are made up to "
+                                + StructureValidator.num(CableBuildData.TWIN_AND_EARTH_LARGEST_MM2) + " mm²; found " + StructureValidator.num(size.mm2()));
+                    } else if (!ReferenceData.standard().hasResistance(cable.conductor(), teCpc)) {
+                        error(at(c, "size_mm2"), join(path, "size_mm2"), "a " + StructureValidator.num(size.mm2()) + " mm² twin-and-earth cable has a "
+                                + StructureValidator.num(teCpc) + " mm² cpc (BS 6004), whose resistance the packaged table (IEC 60228) does not give; "
+                                + "choose 2.5 mm² or more");
+                    } else if (!cpc.auto() && cpc.mm2() != teCpc) {
+                        error(at(c, "cpc_mm2"), cpcPath, "a " + StructureValidator.num(size.mm2()) + " mm² twin-and-earth cable has a "
+                                + StructureValidator.num(teCpc) + " mm² cpc (BS 6004); found " + StructureValidator.num(cpc.mm2()) + ": give auto or "
+                                + StructureValidator.num(teCpc));
+                    }
+                } else if (!cpc.auto()) {
+                    error(at(c, "cpc_mm2"), cpcPath, "cpc_kind: twin-and-earth: the cpc follows the cable's size (BS 6004); with size_mm2: auto give cpc_mm2: auto");
+                }
+            }
+            case SEPARATE -> {
+                double minimum = CpcKind.separateMinimumMm2(cable.conductor(), method);
+                if (!cpc.auto() && cpc.mm2() < minimum - 1e-9) {
+                    error(at(c, "cpc_mm2"), cpcPath, "a protective conductor not part of a cable is at least " + StructureValidator.num(minimum)
+                            + " mm² " + cable.conductor().token() + separateMinimumWhy(cable.conductor(), method)
+                            + " (IEC 60364-5-54, 543.1.3); found " + StructureValidator.num(cpc.mm2()));
+                }
+            }
+        }
+        return cable;
+    }
+
+    private static String separateMinimumWhy(Conductor conductor, Method method) {
+        if (conductor == Conductor.ALUMINIUM) return "";
+        return CpcKind.mechanicallyProtected(method) ? " where protected against mechanical damage (method " + method.token() + ": in conduit or trunking)"
+                : " where not protected against mechanical damage (method " + method.token() + " is not in conduit or trunking)";
+    }
+
+    /** Whether flat twin-and-earth cables (BS 6004: 70 °C PVC, copper, 2-core or 3-core with cpc) have this construction. */
+    private static boolean twinAndEarthBuild(Cable cable) {
+        return cable.type() == CableType.MULTICORE && cable.conductor() == Conductor.COPPER && cable.insulation() == Insulation.PVC
+                && (cable.cores() == 2 || cable.cores() == 3);
+    }
+
     private SizeChoice size(Node node) {
         if (node instanceof Node.Scalar s && "auto".equals(s.value())) return SizeChoice.automatic();
         Double v = num(node);
@@ -489,8 +604,9 @@ public final class InputReader {
         }
         Double parallel = num(c, "parallel");
         if (conductor == null || insulation == null || type == null || size == null || cpc == null) return null;
+        CpcKind kind = word(c, "cpc_kind", CpcKind.class, null);
         return new Cable(conductor, insulation, type, cores == null ? 0 : cores.intValue(), size, cpc,
-                parallel == null ? 1 : parallel.intValue(), formation);
+                parallel == null ? 1 : parallel.intValue(), formation, kind, kind != null);
     }
 
     private Conditions conditions(Node i, String path) {

@@ -63,6 +63,12 @@ public final class InputSchema {
      * IEC 60909-0, Table 1 (from memory); grouping to 100 and 12 conductors in parallel are
      * common practice, no source. The others are stated beside their keys below.
      */
+    /** The default of cable.cpc_kind, as the reader derives it (InputReader.cpcConstruction). */
+    static final String DEFAULT_CPC_KIND = "core where a multicore cable has a core more than the circuit's live conductors (3 cores single-phase; "
+            + "5 cores three-phase, 4 for a three-phase motor, taken without neutral); otherwise separate, and single-core cables separate. "
+            + "With cpc_mm2 given: core only where it equals size_mm2, twin-and-earth where it is that cable's cpc, otherwise not assumed "
+            + "(the conductor is taken to run with the cable)";
+
     private static Spec.Obj build() {
         Spec.Obj revision = obj("an entry of the revision history",
                 req("revision", text("revision letter or number")),
@@ -151,6 +157,8 @@ public final class InputSchema {
                 opt("cores", oneOf("number of cores of a multicore cable", 2, 3, 4, 5), "required for multicore"),
                 req("size_mm2", size("line conductor size in mm², or auto")),
                 req("cpc_mm2", size("protective conductor size in mm², or auto")),
+                opt("cpc_kind", word("how the protective conductor is made: a core of the cable equal to the line conductors, the reduced cpc of a flat twin-and-earth cable (BS 6004), or a separate conductor; armour is refused (its resistance is not in the packaged tables)", CpcKind.class),
+                        DEFAULT_CPC_KIND),
                 opt("parallel", whole("conductors in parallel per phase", 1, 12), "1"),
                 opt("formation", word("formation of single-core cables", Formation.class), "required for single-core"));
         Spec.Obj installation = obj("installation conditions",

@@ -351,4 +351,78 @@ class BadInputTest {
         InputError e = syntax("format: 1\nboards: [{id: B0}\ncircuits: []\n");
         assertTrue(e.message().contains("the list opened with '[' at line 2, column 9 is not closed"), e.message());
     }
+
+    // ---- cable.cpc_kind: the construction of the protective conductor ----
+
+    /** The one circuit with its cable replaced, and the error it must give. */
+    private static InputError cableError(String cable) {
+        return only(doc("  - id: B0", GOOD_CIRCUIT.replace(
+                "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 1.5, cpc_mm2: 1.5}", cable)));
+    }
+
+    /** The column where text starts on the cable's line (line 14), as "    cable: " + the mapping. */
+    private static int columnOf(String cable, String text) {
+        return "    cable: ".length() + cable.indexOf(text) + 1;
+    }
+
+    private static void assertAt(InputError e, String path, String cable, String valueText, String... words) {
+        assertEquals(path, e.path());
+        assertEquals(14, e.line());
+        assertEquals(columnOf(cable, valueText), e.column());
+        for (String w : words) assertTrue(e.message().contains(w), e.message());
+    }
+
+    @Test
+    void armourAsTheCpcIsRefusedWithTheReason() {
+        String cable = "{conductor: copper, insulation: xlpe, type: multicore, cores: 2, size_mm2: 2.5, cpc_mm2: 2.5, cpc_kind: armour}";
+        assertAt(cableError(cable), "circuits[0].cable.cpc_kind", cable, "armour", "no armour resistance", "core, twin-and-earth or separate");
+    }
+
+    @Test
+    void aCoreNeedsACoreToSpare() {
+        // Single-phase: L, N and the cpc need 3 cores.
+        String cable = "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 2.5, cpc_mm2: auto, cpc_kind: core}";
+        assertAt(cableError(cable), "circuits[0].cable.cpc_kind", cable, "core}", "no core left", "need 3 cores");
+    }
+
+    @Test
+    void aCoreOtherThanTheLineSizeContradictsTheConstruction() {
+        String cable = "{conductor: copper, insulation: pvc, type: multicore, cores: 3, size_mm2: 2.5, cpc_mm2: 1.5, cpc_kind: core}";
+        assertAt(cableError(cable), "circuits[0].cable.cpc_mm2", cable, "1.5, cpc_kind", "equal to the line conductors", "found 1.5");
+    }
+
+    @Test
+    void twinAndEarthIsPvcCopperTwoOrThreeCore() {
+        String cable = "{conductor: copper, insulation: xlpe, type: multicore, cores: 2, size_mm2: 2.5, cpc_mm2: 1.5, cpc_kind: twin-and-earth}";
+        assertAt(cableError(cable), "circuits[0].cable.cpc_kind", cable, "twin-and-earth}", "70 °C PVC", "found copper, xlpe, 2-core");
+    }
+
+    @Test
+    void twinAndEarthIsMadeUpTo16() {
+        String cable = "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 25, cpc_mm2: auto, cpc_kind: twin-and-earth}";
+        assertAt(only(doc("  - id: B0", GOOD_CIRCUIT.replace("rating_a: 6", "rating_a: 63").replace(
+                        "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 1.5, cpc_mm2: 1.5}", cable))),
+                "circuits[0].cable.size_mm2", cable, "25,", "up to 16 mm²");
+    }
+
+    @Test
+    void twinAndEarthOf15HasACpcOutsideTheResistanceTable() {
+        // BS 6004: the 1.5 mm² cable has a 1.0 mm² cpc (twin-earth-cpc.csv, from memory); IEC 60228 Table 2 as packaged starts at 1.5 mm².
+        String cable = "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 1.5, cpc_mm2: auto, cpc_kind: twin-and-earth}";
+        assertAt(cableError(cable), "circuits[0].cable.size_mm2", cable, "1.5,", "1 mm² cpc", "2.5 mm² or more");
+    }
+
+    @Test
+    void twinAndEarthWithAnotherCpcContradictsTheCable() {
+        // BS 6004: 2.5 mm² twin and earth has a 1.5 mm² cpc (engx.theiet.org thread 31720).
+        String cable = "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 2.5, cpc_mm2: 2.5, cpc_kind: twin-and-earth}";
+        assertAt(cableError(cable), "circuits[0].cable.cpc_mm2", cable, "2.5, cpc_kind", "1.5 mm² cpc (BS 6004)", "found 2.5");
+    }
+
+    @Test
+    void aSeparateConductorBelowTheMinimumIsRefused() {
+        // IEC 60364-5-54:2011, 543.1.3 (from memory): 4 mm² copper where not protected against mechanical damage (method C).
+        String cable = "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: 1.5, cpc_mm2: 2.5, cpc_kind: separate}";
+        assertAt(cableError(cable), "circuits[0].cable.cpc_mm2", cable, "2.5, cpc_kind", "at least 4 mm²", "543.1.3", "found 2.5");
+    }
 }
