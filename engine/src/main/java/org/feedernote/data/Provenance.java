@@ -33,6 +33,6 @@ final class Provenance {
     static Step.Lookup lookup(ReferenceTable t, String id, String title, String symbol, String unit, String row, String column,
                               String rowLabel, String columnLabel) {
         Step.Lookup exact = t.lookup(id, title, symbol, unit, row, column, rowLabel, columnLabel);
-        return new Step.Lookup(exact.q(), title, t.ref(), rowLabel, columnLabel, method(t, row, column), List.of());
+        return new Step.Lookup(exact.q(), title, exact.table(), rowLabel, columnLabel, method(t, row, column), List.of());
     }
 }

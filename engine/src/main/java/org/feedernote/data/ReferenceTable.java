@@ -155,6 +155,28 @@ public final class ReferenceTable {
         if (v == null) {
             throw new DataGapException(stepId + ": " + ref.citation() + " gives no value for " + rowLabel + ", " + columnLabel);
         }
-        return new Step.Lookup(stepId, title, symbol, v, unit, ref, rowLabel, columnLabel, "exact", List.of());
+        return new Step.Lookup(stepId, title, symbol, v, unit, cellRef(row, column), rowLabel, columnLabel, "exact", List.of());
+    }
+
+    /**
+     * The table's reference as it holds for one cell: a table with a per-row {@code memory} column
+     * is recalled only in the cells that column names, so the note can list exactly the recalled
+     * values it used.
+     */
+    public TableRef cellRef(String row, String column) {
+        if (!ref.fromMemory() || !columns.contains(Provenance.MEMORY)) return ref;
+        boolean recalled = Provenance.recalled(this, row, column);
+        return recalled ? ref : verifiedRef();
+    }
+
+    private TableRef verified;
+
+    private TableRef verifiedRef() {
+        TableRef v = verified;
+        if (v == null) {
+            v = new TableRef(ref.id(), ref.title(), ref.source(), ref.edition(), ref.table(), false, ref.notes());
+            verified = v;
+        }
+        return v;
     }
 }

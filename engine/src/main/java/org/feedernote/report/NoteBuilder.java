@@ -39,8 +39,7 @@ public final class NoteBuilder {
     public static final List<String> CAUTIONS = List.of(
             "This note supports, and does not replace, the judgement of a competent, licensed person, who must review and sign it before it is relied on.",
             "The applicable local wiring code and the manufacturer's data for the cables and devices actually installed govern wherever they differ from the values used here.",
-            "Verify site conditions — route lengths, installation methods, grouping, ambient temperatures, and the supply's fault level and loop impedance — before construction and again at commissioning.",
-            "Tabulated values marked \u201cfrom memory\u201d in Appendix A were recalled from the published standards; check them against the current edition before relying on them.");
+            "Verify site conditions — route lengths, installation methods, grouping, ambient temperatures, and the supply's fault level and loop impedance — before construction and again at commissioning.");
 
     private NoteBuilder() {}
 
@@ -96,8 +95,13 @@ public final class NoteBuilder {
         Set<String> documents = new TreeSet<>();
         Set<String> other = new TreeSet<>();
         Map<String, TableRef> tables = new LinkedHashMap<>();
+        Set<String> unverified = new TreeSet<>();
         for (Step s : steps) {
-            if (s instanceof Step.Lookup l) tables.putIfAbsent(l.table().id(), l.table());
+            if (s instanceof Step.Lookup l) {
+                // A table counts as recalled in the appendix where any value the note used from it is.
+                tables.merge(l.table().id(), l.table(), (a, b) -> a.fromMemory() ? a : b);
+                if (l.table().fromMemory()) unverified.add(l.table().citation() + " — " + l.row() + ", " + l.column());
+            }
             String ref = s.reference() == null ? "" : s.reference();
             Matcher m = DOCUMENT.matcher(ref);
             boolean any = false;
@@ -120,7 +124,12 @@ public final class NoteBuilder {
         List<ListingLine> listing = listing(inst.sourceText());
         String shortPrint = fingerprint.substring(0, 12);
         String running = p.title() + " · " + p.reference() + " rev " + p.revision();
-        return new NoteView(cover, basis(inst), standards(), CAUTIONS, assumptions(), summary, sections, docs, tableViews, others,
+        List<String> cautions = new ArrayList<>(CAUTIONS);
+        cautions.add(unverified.isEmpty()
+                ? "Every tabulated value this note uses was checked against a published copy of its table (Appendix A names each)."
+                : unverified.size() + " tabulated value" + (unverified.size() == 1 ? " this note uses was" : "s this note uses were")
+                        + " recalled from the published standards and not yet checked against a published copy (listed in 1.5); check them against the current edition before relying on them.");
+        return new NoteView(cover, basis(inst), standards(), cautions, assumptions(), List.copyOf(unverified), summary, sections, docs, tableViews, others,
                 listing, fileName(inst.sourceName()), fingerprint, shortPrint, p.status() == Status.DRAFT, engineVersion,
                 data.version(), running, changesSince, changes);
     }
