@@ -146,14 +146,13 @@ class ProtectionJudgementTest {
         return circuit(id, load, length, cable, device).replace("from: B0", "from: " + board);
     }
 
-    private static String subMain(String basis, String extra) {
-        StringBuilder finals = new StringBuilder();
-        for (int i = 1; i <= 6; i++) {
-            finals.append(circuitOn("B1", "L" + i, "{kind: other, current_a: 9, power_factor: 0.9, phases: 1}", 20 + 5 * i,
-                    "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: auto, cpc_mm2: auto}",
-                    "{kind: mcb, curve: B, rating_a: 16, breaking_capacity_ka: 10}"));
-        }
-        return Fixtures.head(basis, "transformer: {rating_kva: 500, impedance_percent: 5}") + """
+    /**
+     * An origin board B0 and a sub-board B1 fed by F1 (cable, device and length given), with the final
+     * circuits given (YAML list items, from B1).
+     */
+    private static String twoBoards(String basis, String source, double feederLength, String feederCable, String feederDevice,
+                                    String finals) {
+        return Fixtures.head(basis, source) + """
                 boards:
                   - id: B0
                   - id: B1
@@ -161,11 +160,23 @@ class ProtectionJudgementTest {
                   - id: F1
                     from: B0
                     to: B1
-                    length_m: 40
-                    cable: {conductor: copper, insulation: xlpe, type: multicore, cores: 5, size_mm2: auto, cpc_mm2: auto}
+                    length_m: %s
+                    cable: %s
                     installation: {method: E}
-                    device: {kind: mccb, rating_a: 63, instantaneous_a: 630, breaking_capacity_ka: 25}
-                """ + (finals + extra).indent(2);
+                    device: %s
+                """.formatted(feederLength, feederCable, feederDevice) + finals.indent(2);
+    }
+
+    private static String subMain(String basis, String extra) {
+        StringBuilder finals = new StringBuilder();
+        for (int i = 1; i <= 6; i++) {
+            finals.append(circuitOn("B1", "L" + i, "{kind: other, current_a: 9, power_factor: 0.9, phases: 1}", 20 + 5 * i,
+                    "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: auto, cpc_mm2: auto}",
+                    "{kind: mcb, curve: B, rating_a: 16, breaking_capacity_ka: 10}"));
+        }
+        return twoBoards(basis, "transformer: {rating_kva: 500, impedance_percent: 5}", 40,
+                "{conductor: copper, insulation: xlpe, type: multicore, cores: 5, size_mm2: auto, cpc_mm2: auto}",
+                "{kind: mccb, rating_a: 63, instantaneous_a: 630, breaking_capacity_ka: 25}", finals + extra);
     }
 
     @Test
@@ -188,23 +199,14 @@ class ProtectionJudgementTest {
         // fixed 2.5 mm² whose cumulative drop fails 3 %. Enlarging the sub-main from 10 to 16 mm² would help
         // the drop but raise the line-to-neutral fault level at B1 above the 6 kA the lighting breaker can
         // break (IEC 60364-4-43, 434.5.1): the sizing refuses it, and the lighting circuit fails its drop.
-        String yaml = Fixtures.head("voltage_drop_limits_percent: {lighting: 3, other: 5}", "transformer: {rating_kva: 1000, impedance_percent: 5}") + """
-                boards:
-                  - id: B0
-                  - id: B1
-                circuits:
-                  - id: F1
-                    from: B0
-                    to: B1
-                    length_m: 15
-                    cable: {conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}
-                    installation: {method: E}
-                    device: {kind: mccb, rating_a: 63, instantaneous_a: 630, breaking_capacity_ka: 36}
-                """ + (circuitOn("B1", "H1", "{kind: heating, power_kw: 27, power_factor: 1, phases: 3}", 5,
-                "{conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: 16, cpc_mm2: 16}",
-                "{kind: mccb, rating_a: 50, instantaneous_a: 500, breaking_capacity_ka: 36}")
-                + circuitOn("B1", "L1", "{kind: lighting, power_kw: 1.8, power_factor: 0.95, phases: 1}", 47, TWIN_25,
-                "{kind: mcb, curve: B, rating_a: 10, breaking_capacity_ka: 6}")).indent(2);
+        String yaml = twoBoards("voltage_drop_limits_percent: {lighting: 3, other: 5}", "transformer: {rating_kva: 1000, impedance_percent: 5}", 15,
+                "{conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}",
+                "{kind: mccb, rating_a: 63, instantaneous_a: 630, breaking_capacity_ka: 36}",
+                circuitOn("B1", "H1", "{kind: heating, power_kw: 27, power_factor: 1, phases: 3}", 5,
+                        "{conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: 16, cpc_mm2: 16}",
+                        "{kind: mccb, rating_a: 50, instantaneous_a: 500, breaking_capacity_ka: 36}")
+                        + circuitOn("B1", "L1", "{kind: lighting, power_kw: 1.8, power_factor: 0.95, phases: 1}", 47, TWIN_25,
+                        "{kind: mcb, curve: B, rating_a: 10, breaking_capacity_ka: 6}"));
         Result r = Fixtures.run(yaml);
         CircuitResult feeder = r.circuits().get(0);
         CircuitResult light = r.circuits().get(2);
@@ -220,21 +222,12 @@ class ProtectionJudgementTest {
         // A 630 A MCCB on a 4-core XLPE cable in free air: 300 mm² carries 621 A (IEC 60364-5-52:2009,
         // Table B.52.13, method E, from memory), below I_n; the sizing stops at 300 mm² (common practice,
         // no source) and says how many in parallel would do.
-        String yaml = Fixtures.head("", "transformer: {rating_kva: 1000, impedance_percent: 6}") + """
-                boards:
-                  - id: B0
-                  - id: B1
-                circuits:
-                  - id: F1
-                    from: B0
-                    to: B1
-                    length_m: 40
-                    cable: {conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}
-                    installation: {method: E}
-                    device: {kind: mccb, rating_a: 630, instantaneous_a: 6300, breaking_capacity_ka: 50}
-                """ + circuit("L1", "{kind: other, current_a: 500, power_factor: 0.9, phases: 3}", 10,
-                "{conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: 240, cpc_mm2: 120}",
-                "{kind: mccb, rating_a: 500, instantaneous_a: 5000, breaking_capacity_ka: 50}").replace("from: B0", "from: B1").indent(2);
+        String yaml = twoBoards("", "transformer: {rating_kva: 1000, impedance_percent: 6}", 40,
+                "{conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}",
+                "{kind: mccb, rating_a: 630, instantaneous_a: 6300, breaking_capacity_ka: 50}",
+                circuitOn("B1", "L1", "{kind: other, current_a: 500, power_factor: 0.9, phases: 3}", 10,
+                        "{conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: 240, cpc_mm2: 120}",
+                        "{kind: mccb, rating_a: 500, instantaneous_a: 5000, breaking_capacity_ka: 50}"));
         Result r = Fixtures.run(yaml);
         CircuitResult f = r.circuits().get(0);
         assertEquals(300, f.circuit().cable().size().mm2());
@@ -249,21 +242,12 @@ class ProtectionJudgementTest {
         // IEC 60364-4-43:2008, 433.1: for an adjustable device I_n is the current setting; IEC 60947-2:2016,
         // 8.3.3.1.2 (from memory): the short-time pick-up within +20 %, so I_a = 1.2 × 600 A = 720 A, and
         // Z_s,max = 0.95 × 230 / 720 = 0.3035 Ω (IEC 60364-4-41:2005, 411.4.4, c_min = 0.95).
-        String yaml = Fixtures.head("", "transformer: {rating_kva: 630, impedance_percent: 5}") + """
-                boards:
-                  - id: B0
-                  - id: B1
-                circuits:
-                  - id: F1
-                    from: B0
-                    to: B1
-                    length_m: 30
-                    cable: {conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: 25, cpc_mm2: 16}
-                    installation: {method: E}
-                    device: {kind: mccb, rating_a: 160, long_time_a: 100, short_time_a: 600, short_time_delay_s: 0.2, breaking_capacity_ka: 36}
-                """ + circuit("L1", "{kind: other, current_a: 60, power_factor: 0.9, phases: 3}", 10,
-                "{conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: 16, cpc_mm2: 16}",
-                "{kind: mcb, curve: C, rating_a: 63, breaking_capacity_ka: 10}").replace("from: B0", "from: B1").indent(2);
+        String yaml = twoBoards("", "transformer: {rating_kva: 630, impedance_percent: 5}", 30,
+                "{conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: 25, cpc_mm2: 16}",
+                "{kind: mccb, rating_a: 160, long_time_a: 100, short_time_a: 600, short_time_delay_s: 0.2, breaking_capacity_ka: 36}",
+                circuitOn("B1", "L1", "{kind: other, current_a: 60, power_factor: 0.9, phases: 3}", 10,
+                        "{conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: 16, cpc_mm2: 16}",
+                        "{kind: mcb, curve: C, rating_a: 63, breaking_capacity_ka: 10}"));
         CircuitResult f = Fixtures.run(yaml).circuits().get(0);
         assertEquals(100, f.rating().value(), 1e-12, "the long-time setting is the I_n of the overload rule");
         assertEquals(100, f.check("capacity").limit(), 1e-12);
