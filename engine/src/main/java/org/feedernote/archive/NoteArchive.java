@@ -24,11 +24,26 @@ import org.apache.pdfbox.pdmodel.common.filespecification.PDEmbeddedFile;
  * note when it is wanted.
  */
 public record NoteArchive(Path file, String canonicalInput, String fingerprint, String engineVersion,
-                          String sourceText, String inputFile) {
+                          String sourceText, String inputFile, String changesSince, List<String> changes,
+                          Map<String, byte[]> templates) {
 
     public static final String INPUT_NAME = "input.canonical.json";
     public static final String TRACE_NAME = "trace.json";
     public static final String SOURCE_NAME = "input.source.txt";
+    /**
+     * A note written against an earlier revision carries that revision's name and the changes it
+     * lists (one per line, the name first), so that verify writes the same note again.
+     */
+    public static final String CHANGES_NAME = "changes-since.txt";
+    /** A note written with its own templates carries each of them under this prefix, for the same reason. */
+    public static final String TEMPLATE_PREFIX = "template/";
+
+    /** The changes record: the revision compared with on the first line, then one change a line. */
+    public static byte[] changesRecord(String since, List<String> changes) {
+        StringBuilder b = new StringBuilder(since).append('\n');
+        for (String c : changes) b.append(c.replace('\n', ' ')).append('\n');
+        return b.toString().getBytes(StandardCharsets.UTF_8);
+    }
 
     /** Thrown when a file is not a feedernote note, or is damaged. */
     public static final class NotANote extends Exception {
@@ -64,8 +79,21 @@ public record NoteArchive(Path file, String canonicalInput, String fingerprint, 
             String inputFile = info.getCustomMetadataValue("InputFile");
             if (fingerprint == null) throw new NotANote(file + ": the note's metadata carries no fingerprint");
             String source = files.containsKey(SOURCE_NAME) ? text(files.get(SOURCE_NAME), file) : null;
+            String since = null;
+            List<String> changes = List.of();
+            if (files.containsKey(CHANGES_NAME)) {
+                List<String> lines = List.of(text(files.get(CHANGES_NAME), file).split("\n", -1));
+                since = lines.get(0);
+                changes = lines.subList(1, lines.size()).stream().filter(l -> !l.isEmpty()).toList();
+            }
+            Map<String, byte[]> templates = new java.util.TreeMap<>();
+            for (var e : files.entrySet()) {
+                if (e.getKey().startsWith(TEMPLATE_PREFIX)) {
+                    templates.put(e.getKey().substring(TEMPLATE_PREFIX.length()), embedded(e.getValue(), file).toByteArray());
+                }
+            }
             return new NoteArchive(file, input, fingerprint, engine == null ? "" : engine, source,
-                    inputFile == null ? "input" : inputFile);
+                    inputFile == null ? "input" : inputFile, since, changes, Map.copyOf(templates));
         } catch (IOException e) {
             throw new NotANote(file + ": damaged or truncated PDF (" + e.getMessage() + ")");
         }

@@ -151,8 +151,29 @@ public final class Revisions {
             return;
         }
         if (a == null || b == null || !a.equals(b)) {
-            out.add(new Change("input", circuit, path, a == null ? "(absent)" : a.toString(), b == null ? "(absent)" : b.toString()));
+            out.add(new Change("input", circuit, path, shown(a), shown(b)));
         }
+    }
+
+    /**
+     * A value of the input as a reader writes it: a word or number as it is, a mapping as its
+     * entries (key: value, …), a list as its items separated by semicolons — never as JSON.
+     */
+    static String shown(JsonNode n) {
+        if (n == null || n.isMissingNode()) return "(absent)";
+        if (n.isTextual()) return "\"" + n.asText() + "\"";
+        if (n.isObject()) {
+            List<String> entries = new java.util.ArrayList<>();
+            n.fields().forEachRemaining(e -> entries.add(e.getKey() + ": " + shown(e.getValue())));
+            return "{" + String.join(", ", entries) + "}";
+        }
+        if (n.isArray()) {
+            if (n.isEmpty()) return "(none)";
+            List<String> items = new java.util.ArrayList<>();
+            n.forEach(i -> items.add(shown(i)));
+            return String.join("; ", items);
+        }
+        return n.toString();
     }
 
     public static String text(Report r) {

@@ -78,7 +78,7 @@ final class NoteMaker {
             List<List<String>> unprintable = new java.util.ArrayList<>(1);
             try (Files.Staged note = Files.stageFile(pdf, tmp -> unprintable.add(renderer.write(view, inst.project().date(), tmp,
                     progress, attachments(inst, NoteRenderer.Attachment.deflated(org.feedernote.archive.NoteArchive.TRACE_NAME,
-                            "Calculation trace", deflated)))))) {
+                            "Calculation trace", deflated), templates, changesSince, changes))))) {
                 // The pair is replaced together: a run stopped before here leaves the previous note
                 // and trace (if any) as they were, never a new trace beside an old note.
                 trace.putInPlace();
@@ -121,13 +121,30 @@ final class NoteMaker {
         }
     }
 
-    private static NoteRenderer.Attachment[] attachments(Installation inst, NoteRenderer.Attachment trace) {
-        return new NoteRenderer.Attachment[] {
+    /**
+     * The input, the trace, the input as written, and what else the note needs to be written again
+     * byte for byte: the changes it lists against an earlier revision, the templates it was laid out
+     * with where they are not the packaged ones.
+     */
+    private static NoteRenderer.Attachment[] attachments(Installation inst, NoteRenderer.Attachment trace, Path templates,
+                                                         String changesSince, List<String> changes) throws IOException {
+        List<NoteRenderer.Attachment> all = new java.util.ArrayList<>(List.of(
                 new NoteRenderer.Attachment(org.feedernote.archive.NoteArchive.INPUT_NAME, "Design input (canonical form)",
                         inst.canonicalJson().getBytes(StandardCharsets.UTF_8)),
                 trace,
                 new NoteRenderer.Attachment(org.feedernote.archive.NoteArchive.SOURCE_NAME, "Design input as written: "
-                        + NoteBuilder.fileName(inst.sourceName()), inst.sourceText().getBytes(StandardCharsets.UTF_8))};
+                        + NoteBuilder.fileName(inst.sourceName()), inst.sourceText().getBytes(StandardCharsets.UTF_8))));
+        if (changesSince != null) {
+            all.add(new NoteRenderer.Attachment(org.feedernote.archive.NoteArchive.CHANGES_NAME, "Changes since revision " + changesSince
+                    + " (as listed in the note)", org.feedernote.archive.NoteArchive.changesRecord(changesSince, changes)));
+        }
+        if (templates != null) {
+            for (String name : NoteRenderer.TEMPLATE_FILES) {
+                all.add(new NoteRenderer.Attachment(org.feedernote.archive.NoteArchive.TEMPLATE_PREFIX + name, "Note template " + name
+                        + " (the copy this note was laid out with)", java.nio.file.Files.readAllBytes(templates.resolve(name))));
+            }
+        }
+        return all.toArray(new NoteRenderer.Attachment[0]);
     }
 
 }

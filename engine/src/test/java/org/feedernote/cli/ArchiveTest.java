@@ -141,7 +141,11 @@ class ArchiveTest {
             String text = new org.apache.pdfbox.text.PDFTextStripper().getText(doc);
             assertTrue(text.contains("Changes since revision A"), "section present");
             assertTrue(text.contains("M-PRV: circuit added"));
+            assertFalse(text.contains("[{"), "the changes are written out, never as JSON");
         }
+        // The note carries the changes it lists, so that it can be written again byte for byte.
+        CommandLineTest.Run v = CommandLineTest.run("verify", out.resolve("KLB-E-CN-001-B.pdf").toString());
+        assertEquals(0, v.status(), v.out() + v.err());
     }
 
     @Test
