@@ -196,7 +196,7 @@ final class DropCalc {
                     basis.voltageDropLimitsPath() + "." + key);
         }
         return Given.setting(t, c.id(), "/vd/limit", "Voltage-drop limit, origin to terminals", "ΔU_max", basis.voltageDropLimitPercent(),
-                Units.PERCENT, "default of this program: 4 % (IEC 60364-5-52:2009, Annex G, Table G.52.1, other uses, public supply)");
+                Units.PERCENT, "default of this program: 4 % (common practice, no source; IEC 60364-5-52:2009 Table G.52.1 gives 3 % lighting, 5 % other uses from a public supply, 6 % / 8 % from a private one)");
     }
 
     Q starting(Trace t, Circuit c, ImpedanceResult z, Q ib, Q length, Q un, Map<String, CircuitResult> done) {

@@ -60,7 +60,7 @@ class CapacityTest {
         assertTrue(s.method().startsWith("next higher"));
     }
 
-    /** IEC 60364-5-52:2009 Table B.52.17, from memory. */
+    /** IEC 60364-5-52:2009 Table B.52.17, checked against BS 7671:2008 Table 4C1 (copy named in grouping.csv). */
     @ParameterizedTest(name = "{0} × {1}: C_g = {2}")
     @CsvSource({"BUNCHED, 2, 0.80", "BUNCHED, 3, 0.70", "BUNCHED, 6, 0.57", "BUNCHED, 10, 0.45", "WALL_SINGLE_LAYER, 4, 0.75",
             "TRAY_SINGLE_LAYER, 3, 0.82", "LADDER_SINGLE_LAYER, 5, 0.80", "TRAY_SINGLE_LAYER, 14, 0.72"})

@@ -72,7 +72,7 @@ class TableQuantityTest {
                 CableType.SINGLE_CORE, Formation.TREFOIL, 240)));
     }
 
-    /** IEC 60228:2004, Table 2: plain copper, class 2, 2.5 mm², 7.41 Ω/km at 20 °C (from memory, as in ReferenceValuesTest). */
+    /** IEC 60228:2004, Table 2: plain copper, class 2, 2.5 mm², 7.41 Ω/km at 20 °C (copies named in conductor-resistance.csv). */
     @Test
     void theValueIsTheTablesCell() {
         Q r20 = DATA.resistance20(Trace.noop(), "C-1", "/z/R20", Conductor.COPPER, 2.5);
@@ -80,7 +80,7 @@ class TableQuantityTest {
         assertEquals("C-1/z/R20", r20.id());
     }
 
-    /** Aluminium class 2 conductors start at 10 mm² (IEC 60228:2004, Table 2, from memory): the gap is reported in the lookup's words. */
+    /** Aluminium class 2 conductors start at 10 mm² (IEC 60228:2004, Table 2; copies named in conductor-resistance.csv): the gap is reported in the lookup's words. */
     @Test
     void aMissingCellIsTheSameDataGapWithOrWithoutTheTrace() {
         DataGapException figures = assertThrows(DataGapException.class,
