@@ -13,8 +13,10 @@ import org.feedernote.trace.Trace;
 
 /**
  * Cable impedance derived from published physics: IEC 60228 resistance at 20 °C, corrected to the
- * conductor temperature, with skin and proximity effect (IEC 60287-1-1) from 50 mm², and the
- * reactance from the geometry of the formation.
+ * conductor temperature, with skin and proximity effect (IEC 60287-1-1; two conductors for a
+ * single-phase circuit, three otherwise) from 50 mm², and the reactance from the geometry of the
+ * formation: the stranded conductor's diameter and inductance constant by its number of wires, and
+ * a three-phase flat group taken between its outer phases, the largest of its three drops.
  */
 final class ImpedanceCalc {
     /** Below this size the a.c. increment (y_s + y_p) stays under 0.2 % and is neglected. */
@@ -32,13 +34,25 @@ final class ImpedanceCalc {
      * @param phases 1 (two conductors) or 3 (line-to-line)
      */
     ImpedanceResult impedance(Trace t, String id, Cable cable, Q theta, Q frequency, int phases) {
+        return impedance(t, id, cable, theta, frequency, phases, FlatPhases.OUTER_PAIR);
+    }
+
+    /**
+     * How a three-phase flat group's unequal phases are summed up: the drop between the two outer
+     * phases (the largest; what the design uses), or the mean of the three (for comparison with tables
+     * that print the mean).
+     */
+    enum FlatPhases { OUTER_PAIR, MEAN }
+
+    ImpedanceResult impedance(Trace t, String id, Cable cable, Q theta, Q frequency, int phases, FlatPhases flat) {
         double size = cable.size().mm2();
         Q r20 = data.resistance20(t, id, "/R20", cable.conductor(), size);
         Q alpha = data.alpha20(t, id, "/alpha20", cable.conductor());
         Q rTheta = RESISTANCE_AT_TEMPERATURE.eval(t, id, "/R_theta", "", bind(R20, r20), bind(ALPHA, alpha), bind(THETA, theta));
 
         Q area = Given.derived(t, id, "/S", "Nominal cross-section", "S", size, Units.MM2, "design input (cable.size_mm2)");
-        Q dc = CONDUCTOR_DIAMETER.eval(t, id, "/dc", "", bind(S_AREA, area));
+        Q wires = data.wireCount(t, id, "/n_w", size);
+        Q dc = CONDUCTOR_DIAMETER.eval(t, id, "/dc", "", bind(S_AREA, area), bind(N_W, wires));
         Q ti = data.insulationThickness(t, id, "/t_i", cable.insulation(), size);
         Q spacing;
         Q gmd;
@@ -63,7 +77,9 @@ final class ImpedanceCalc {
                     ? SPACING_SPACED.eval(t, id, "/s", "flat spaced", bind(D_E, de))
                     : SPACING_TOUCHING.eval(t, id, "/s", formation == Formation.TREFOIL ? "trefoil" : "flat touching", bind(D_E, de));
             if (phases == 3 && formation != Formation.TREFOIL) {
-                gmd = GMD_FLAT.eval(t, id, "/s_g", "flat formation, outer phases 2s apart", bind(S_AXIS, spacing));
+                gmd = flat == FlatPhases.MEAN
+                        ? GMD_FLAT.eval(t, id, "/s_g", "flat formation, mean of the three phases", bind(S_AXIS, spacing))
+                        : GMD_FLAT_OUTER.eval(t, id, "/s_g", "flat formation, between the outer phases", bind(S_AXIS, spacing));
             } else {
                 gmd = Given.alias("s_g", spacing);
                 if (t.recording()) Given.decision(t, id + "/gmd", "Geometric mean distance",
@@ -80,7 +96,9 @@ final class ImpedanceCalc {
             Q ys = SKIN_FACTOR.eval(t, id, "/ys", "", bind(XS2, xs2));
             Q xp2 = PROXIMITY_ARGUMENT.eval(t, id, "/xp2", "", bind(F, frequency), bind(K_P, kp), bind(R_THETA, rTheta));
             Q fp = PROXIMITY_BASE.eval(t, id, "/Fp", "", bind(XP2, xp2));
-            Q yp = PROXIMITY_FACTOR.eval(t, id, "/yp", "", bind(FP, fp), bind(DC, dc), bind(S_AXIS, spacing));
+            Q yp = phases == 1
+                    ? PROXIMITY_FACTOR_TWO.eval(t, id, "/yp", "two conductors", bind(FP, fp), bind(DC, dc), bind(S_AXIS, spacing))
+                    : PROXIMITY_FACTOR.eval(t, id, "/yp", "three conductors", bind(FP, fp), bind(DC, dc), bind(S_AXIS, spacing));
             rAc = AC_RESISTANCE.eval(t, id, "/R_ac", "", bind(R_THETA, rTheta), bind(YS, ys), bind(YP, yp));
         } else {
             rAc = Given.alias("R_ac", rTheta);
@@ -90,7 +108,9 @@ final class ImpedanceCalc {
                     "neglected: R_ac = R_θ", "IEC 60287-1-1:2006, 2.1.2 and 2.1.4 (evaluated; negligible)", rTheta.id());
         }
 
-        Q inductance = INDUCTANCE_AT.eval(t, id, "/L", "", bind(S_G, gmd), bind(DC, dc));
+        Q k = data.strandingConstant(t, id, "/K", wires);
+        Q inductance = (cable.type() == CableType.MULTICORE ? INDUCTANCE_MULTICORE : INDUCTANCE_AT)
+                .eval(t, id, "/L", "", bind(K_L, k), bind(S_G, gmd), bind(DC, dc));
         Q xPer = REACTANCE.eval(t, id, "/X1", "", bind(F, frequency), bind(L_IND, inductance));
 
         Q resistance;

@@ -24,7 +24,7 @@ public final class ReferenceData {
             "ambient-air.csv", "ambient-ground.csv", "grouping.csv", "grouping-ground.csv", "soil-resistivity.csv",
             "thermal-insulation.csv", "harmonics.csv", "devices.csv", "adiabatic.csv",
             "mcb-time-current.csv", "mcb-let-through.csv", "rcd-operating-times.csv", "gg-fuse-disconnection.csv",
-            "gg-fuse-gates.csv", "twin-earth-cpc.csv");
+            "gg-fuse-gates.csv", "twin-earth-cpc.csv", "conductor-wires.csv", "stranding-inductance.csv");
 
     /**
      * Tables read and looked up ({@link DeviceData}, {@link CableBuildData}) but not yet used by the
@@ -40,6 +40,8 @@ public final class ReferenceData {
     private final ReferenceTable materials;
     private final ReferenceTable temperatures;
     private final ReferenceTable thickness;
+    private final ReferenceTable wires;
+    private final ReferenceTable stranding;
     private final List<ReferenceTable> all;
 
     private ReferenceData() {
@@ -50,6 +52,8 @@ public final class ReferenceData {
         materials = byFile.get("conductor-materials.csv");
         temperatures = byFile.get("insulation-temperatures.csv");
         thickness = byFile.get("insulation-thickness.csv");
+        wires = byFile.get("conductor-wires.csv");
+        stranding = byFile.get("stranding-inductance.csv");
     }
 
     ReferenceTable table(String file) {
@@ -152,6 +156,29 @@ public final class ReferenceData {
     public Step.Lookup insulationThickness(String stepId, Insulation insulation, double sizeMm2) {
         return thickness.lookup(stepId, "Insulation thickness", "t_i", "mm", sizeKey(sizeMm2), insulation.token(),
                 sizeKey(sizeMm2) + " mm²", insulation == Insulation.PVC ? "PVC/A" : "XLPE");
+    }
+
+    /** {@link #wireCount(String, double)} as the quantity owner + step, recorded in t. */
+    public Q wireCount(Trace t, String owner, String step, double sizeMm2) {
+        return wires.quantity(t, owner, step, "n_w", "", sizeKey(sizeMm2), "wires", () -> wireCount(owner + step, sizeMm2));
+    }
+
+    public Step.Lookup wireCount(String stepId, double sizeMm2) {
+        return wires.lookup(stepId, "Number of wires in the conductor", "n_w", "", sizeKey(sizeMm2), "wires",
+                sizeKey(sizeMm2) + " mm²", "circular, not compacted");
+    }
+
+    /** {@link #strandingConstant(String, Q)} as the quantity owner + step, recorded in t. */
+    public Q strandingConstant(Trace t, String owner, String step, Q wireCount) {
+        String row = sizeKey(wireCount.value());
+        return stranding.quantity(t, owner, step, "K", "mH/km", row, "k", () -> strandingConstant(owner + step, wireCount));
+    }
+
+    public Step.Lookup strandingConstant(String stepId, Q wireCount) {
+        String row = sizeKey(wireCount.value());
+        Step.Lookup s = stranding.lookup(stepId, "Inductance constant of the conductor", "K", "mH/km", row, "k",
+                row + (row.equals("1") ? " wire (solid)" : " wires"), "K");
+        return new Step.Lookup(s.result(), s.title(), s.table(), s.row(), s.column(), s.method(), List.of(wireCount.id()));
     }
 
     /**

@@ -17,7 +17,8 @@ public final class ImpedanceFormulas {
     private static final String IEC_60287_RESISTANCE = "IEC 60287-1-1:2006, 2.1.1 (R = R20·[1 + α20·(θ − 20)])";
     private static final String IEC_60287_SKIN = "IEC 60287-1-1:2006, 2.1.2 (skin effect factor)";
     private static final String IEC_60287_PROXIMITY = "IEC 60287-1-1:2006, 2.1.4 (proximity effect factor, three-core and three single-core cables)";
-    private static final String INDUCTANCE = "Inductance of a three-phase line, L = μ0/2π · (1/4 + ln(s/r)) per conductor (common practice, electromagnetics textbooks)";
+    private static final String INDUCTANCE = "L = K + 0.2·ln(2·s_g/d_c) mH/km per conductor, K by the number of wires: Electric Cables Handbook (BICC Cables, 3rd ed. 1997, edition recalled), inductance of cables";
+    private static final String IEC_60287_PROXIMITY_TWO = "IEC 60287-1-1:2006, 2.1.4.1 (proximity effect factor, two-core cables and two single-core cables)";
 
     public static final Var R20 = var("R20", "R_20", OHM_PER_KM);
     public static final Var ALPHA = var("alpha20", "α_20", PER_K);
@@ -43,6 +44,8 @@ public final class ImpedanceFormulas {
     public static final Var D_U = var("D_u", "D_u", MM);
     public static final Var D_E = var("D_e", "D_e", MM);
     public static final Var L_IND = var("L", "L", MH_PER_KM);
+    public static final Var K_L = var("K", "K", MH_PER_KM);
+    public static final Var N_W = var("n_w", "n_w", NONE);
     public static final Var R_AC = var("R_ac", "R_ac", OHM_PER_KM);
     public static final Var R = var("R", "R", OHM_PER_KM);
     public static final Var X = var("X", "X", OHM_PER_KM);
@@ -85,12 +88,20 @@ public final class ImpedanceFormulas {
                             div(new Expr.Num(1.18, "1.18"), add(v(FP), new Expr.Num(0.27, "0.27"))))),
             IEC_60287_PROXIMITY);
 
+    public static final Formula PROXIMITY_FACTOR_TWO = new Formula("yp-two", "Proximity effect factor, two conductors", "y_p", NONE,
+            mul(v(FP), sq(div(v(DC), v(S_AXIS))), new Expr.Num(2.9, "2.9")), IEC_60287_PROXIMITY_TWO);
+
     public static final Formula AC_RESISTANCE = new Formula("r-ac", "A.c. resistance", "R_ac", OHM_PER_KM,
             mul(v(R_THETA), add(add(n(1), v(YS)), v(YP))), "IEC 60287-1-1:2006, 2.1 (R = R′(1 + y_s + y_p))");
 
-    public static final Formula CONDUCTOR_DIAMETER = new Formula("dc", "Conductor diameter (solid-equivalent)", "d_c", MM,
-            sqrt(div(mul(n(4), v(S_AREA)), PI)),
-            "Diameter of a round conductor of the nominal area (assumption of this program; compacted class 2 conductors are within a few per cent)");
+    /**
+     * A concentric-lay conductor of n_w equal round wires has m = (√(12·n_w − 3) − 3)/6 layers
+     * around its centre wire and a diameter of (2m + 1) wire diameters, i.e. √(12·n_w − 3)/3 of them.
+     */
+    public static final Formula CONDUCTOR_DIAMETER = new Formula("dc", "Diameter over the stranded conductor", "d_c", MM,
+            mul(div(sqrt(sub(mul(n(12), v(N_W)), n(3))), n(3)), sqrt(div(mul(n(4), v(S_AREA)), mul(PI, v(N_W))))),
+            "Concentric-lay stranding of n_w equal round wires of total area S: d_c = (√(12·n_w − 3)/3)·√(4S/(π·n_w)) "
+                    + "(geometry; a compacted conductor is smaller, a manufacturer's data govern)");
 
     public static final Formula CORE_SPACING = new Formula("s-core", "Axial spacing of adjacent cores", "s", MM,
             add(v(DC), mul(n(2), v(T_I))), "Cores touching: s = d_c + 2·t_i");
@@ -115,10 +126,24 @@ public final class ImpedanceFormulas {
     public static final Formula GMD_FLAT = new Formula("gmd-flat", "Geometric mean distance, flat formation", "s_g", MM,
             mul(CBRT2, v(S_AXIS)), "s_g = ³√(s · s · 2s) = ³√2 · s (common practice)");
 
+    public static final Formula GMD_FLAT_OUTER = new Formula("gmd-flat-outer", "Equivalent spacing between the outer phases, flat formation", "s_g", MM,
+            mul(n(2), v(S_AXIS)),
+            "Flat group, not transposed: the drop between the two outer phases is that of a phase at spacing 2s, the largest "
+                    + "of the three line-to-line drops (from the flux linkages of the three conductors; BS 7671:2018 Table 4D1B "
+                    + "flat columns correspond to it, Table 4E1B to the mean ³√2·s)");
+
     public static final Var S_G = var("s_g", "s_g", MM);
 
+    private static Expr inductance() {
+        return add(v(K_L), mul(new Expr.Num(0.2, "0.2"), ln(div(mul(n(2), v(S_G)), v(DC)))));
+    }
+
     public static final Formula INDUCTANCE_AT = new Formula("inductance", "Inductance per conductor", "L", MH_PER_KM,
-            add(new Expr.Num(0.05, "0.05"), mul(new Expr.Num(0.2, "0.2"), ln(div(mul(n(2), v(S_G)), v(DC))))), INDUCTANCE);
+            inductance(), INDUCTANCE);
+
+    public static final Formula INDUCTANCE_MULTICORE = new Formula("inductance-multicore", "Inductance per conductor, multicore cable", "L", MH_PER_KM,
+            mul(new Expr.Num(1.02, "1.02"), inductance()),
+            INDUCTANCE + "; × 1.02 for 2-, 3- and 4-core cables with circular or sector-shaped conductors (same source)");
 
     public static final Formula REACTANCE = new Formula("reactance", "Reactance per conductor", "X", OHM_PER_KM,
             div(mul(n(2), PI, v(F), v(L_IND)), n(1000)), "X = 2π·f·L (L in mH/km)");
