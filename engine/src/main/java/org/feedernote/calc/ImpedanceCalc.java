@@ -80,6 +80,11 @@ final class ImpedanceCalc {
                 gmd = flat == FlatPhases.MEAN
                         ? GMD_FLAT.eval(t, id, "/s_g", "flat formation, mean of the three phases", bind(S_AXIS, spacing))
                         : GMD_FLAT_OUTER.eval(t, id, "/s_g", "flat formation, between the outer phases", bind(S_AXIS, spacing));
+                if (t.recording() && flat != FlatPhases.MEAN) Given.decision(t, id + "/flat", "Reactance of a flat group",
+                        "the three phases of a flat group have unequal reactances; published mV/A/m tables take either the drop "
+                                + "between the outer phases (the largest; BS 7671 Table 4D1B) or the mean of the three (Table 4E1B, some 25–30 % lower)",
+                        "the outer phases' value is used for every flat group, on the safe side: it may exceed a table that prints the mean",
+                        "common practice, no source", gmd.id());
             } else {
                 gmd = Given.alias("s_g", spacing);
                 if (t.recording()) Given.decision(t, id + "/gmd", "Geometric mean distance",
