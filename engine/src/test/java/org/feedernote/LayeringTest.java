@@ -24,7 +24,8 @@ class LayeringTest {
             "model", List.of("calc", "report", "cli", "input", "trace"),
             "data", List.of("calc", "report", "cli", "input"),
             "input", List.of("calc", "report", "cli"),
-            "report", List.of("cli"));
+            "report", List.of("cli"),
+            "verification", List.of("report", "cli"));
 
     @Test
     void packagesOnlyImportDownstream() throws IOException {

@@ -184,6 +184,54 @@ public final class NoteRenderer {
         return r.unprintable();
     }
 
+    /**
+     * The self-verification report (selfcheck.ftlh, always the packaged template, with the note's
+     * style sheet) as PDF bytes. It carries no date: its content depends only on the engine and its
+     * reference data, so the PDF's date fields get a fixed value and the bytes are a function of
+     * the content.
+     */
+    public byte[] selfCheckPdf(org.feedernote.report.view.SelfCheckView view) throws IOException {
+        String xhtml = part("selfcheck.ftlh", Map.of("view", view));
+        String fingerprint = sha256(xhtml);
+        StyleSheet sheet = StyleSheet.parse(DEFAULTS + css());
+        float[] margins = pageMargins(sheet);
+        Document document = new Document(PageSize.A4, margins[3], margins[1], margins[0], margins[2]);
+        Fonts fonts = new Fonts();
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        CountingStream counted = new CountingStream(out);
+        PdfWriter writer = PdfWriter.getInstance(document, counted);
+        writer.setCompressionLevel(6);
+        document.addTitle("feedernote self-verification against published values");
+        document.addCreator("feedernote " + view.engineVersion());
+        Typesetter typesetter = new Typesetter(fonts, sheet, document, writer);
+        Style header = typesetter.styleOf("div", "running-header");
+        Style footer = typesetter.styleOf("div", "running-footer");
+        Style mark = typesetter.styleOf("div", "watermark");
+        writer.setPageEvent(new PageFurniture(new PageFurniture.Texts("feedernote " + view.engineVersion(), "Self-verification",
+                "Reference data " + view.dataVersion() + " · " + view.passed() + " of " + view.total() + " pass", null,
+                header.fontSize(), footer.fontSize(), mark.fontSize(), mark.color()), fonts));
+        document.open();
+        PdfDate date = new PdfDate(calendar(UNDATED));
+        writer.getInfo().put(PdfName.CREATIONDATE, date);
+        writer.getInfo().put(PdfName.MODDATE, date);
+        typesetter.place(typesetter.prepare(Markup.parse(xhtml, "selfcheck.ftlh")));
+        long tail = counted.count;
+        document.close();
+        return Determinism.pin(out.toByteArray(), Math.toIntExact(tail), fingerprint, UNDATED);
+    }
+
+    /** The fixed date of an undated PDF's date fields. */
+    private static final String UNDATED = "2000-01-01";
+
+    private static String sha256(String text) {
+        try {
+            byte[] d = java.security.MessageDigest.getInstance("SHA-256").digest(text.getBytes(java.nio.charset.StandardCharsets.UTF_8));
+            return java.util.HexFormat.of().formatHex(d);
+        } catch (java.security.NoSuchAlgorithmException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
     /** The offset from which the bytes written on closing begin, and the characters printed as a placeholder. */
     private record Rendered(long tail, List<String> unprintable) {}
 

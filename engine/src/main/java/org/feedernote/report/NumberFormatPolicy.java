@@ -67,6 +67,16 @@ public final class NumberFormatPolicy {
         return unit.isEmpty() ? n : n + " " + unit;
     }
 
+    /**
+     * To the significant figures given, trailing zeros dropped: a computed value set beside a
+     * published one (the self-verification), where the unit's usual rounding could hide the difference.
+     */
+    public static String significant(double value, int figures) {
+        if (value == 0) return "0";
+        if (!Double.isFinite(value)) return "—";
+        return group(trimmed(new BigDecimal(value).round(new MathContext(figures, RoundingMode.HALF_UP))));
+    }
+
     private static String trimmed(BigDecimal bd) {
         String s = bd.stripTrailingZeros().toPlainString();
         return s.equals("-0") ? "0" : s;
