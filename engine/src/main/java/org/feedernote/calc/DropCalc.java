@@ -43,8 +43,14 @@ final class DropCalc {
     OwnDrop ownDrop(Trace ct, Circuit c, int phases, Q ib, Q pf, Q iz) {
         String id = c.id();
         Trace zt = ct.recording() ? ct.section(id + "/z", "Cable impedance", describeCable(c.cable())) : ct;
-        Q theta = temperature(zt, c, ib, iz);
-        ImpedanceResult z = impedance.impedance(zt, id + "/z", c.cable(), theta, run.f, phases);
+        ImpedanceResult z;
+        if (tabulated()) {
+            Q theta = tabulatedTemperature(zt, c);
+            z = impedance.tabulated(zt, id + "/z", c.cable(), c.conditions().method(), theta, phases);
+        } else {
+            Q theta = temperature(zt, c, ib, iz);
+            z = impedance.impedance(zt, id + "/z", c.cable(), theta, run.f, phases);
+        }
 
         Trace vt = !ct.recording() ? ct : ct.section(id + "/vd", "Voltage drop", phases == 3 ? "three-phase, referred to U" : "single-phase, referred to U_0");
         String vid = id + "/vd";
@@ -104,9 +110,34 @@ final class DropCalc {
     Q ownDrop(Circuit c) {
         int phases = c.phases();
         Q ib = run.designCurrent.get(c.id());
-        Q iz = run.inst.basis().conductorTemperature().value() == ConductorTemperature.MAXIMUM ? null
+        Q iz = run.inst.basis().conductorTemperature().value() == ConductorTemperature.MAXIMUM || tabulated() ? null
                 : run.capacityCalc.capacity(Trace.noop(), c, phases, ib).iz();
         return ownDrop(Trace.noop(), c, phases, ib, run.powerFactor.get(c.id()), iz).own();
+    }
+
+    private boolean tabulated() {
+        return run.inst.basis().impedance().value() == ImpedanceBasis.TABULATED;
+    }
+
+    /**
+     * The conductor temperature of tabulated r and x: the tables are printed at the insulation's
+     * maximum operating temperature, and are used as printed (an estimated temperature is not applied).
+     */
+    Q tabulatedTemperature(Trace t, Circuit c) {
+        String id = c.id() + "/z";
+        Q thetaMax = data.maxTemperature(t, id, "/theta_max", c.cable().insulation());
+        if (t.recording()) {
+            Setting<ConductorTemperature> setting = run.inst.basis().conductorTemperature();
+            String because = "basis.impedance = tabulated: the voltage-drop tables give r and x at the maximum conductor operating temperature"
+                    + (setting.value() == ConductorTemperature.ESTIMATED
+                    ? "; basis.conductor_temperature = estimated is not applied to the tabulated figures (for a drop at the estimated temperature, use basis.impedance = derived)"
+                    : "");
+            Given.decision(t, id + "/theta", "Conductor temperature for the voltage drop", because,
+                    "θ = θ_max of " + c.cable().insulation().token().toUpperCase(Locale.ROOT) + " = " + Decimals.trim(thetaMax.value())
+                            + " °C: r and x as printed (the largest r, on the safe side)",
+                    "BS 7671:2018 Appendix 4 voltage-drop tables; IEC 60364-5-52:2009, Table 52.1", thetaMax.id());
+        }
+        return relabel(thetaMax, "θ");
     }
 
     Q temperature(Trace t, Circuit c, Q ib, Q iz) {

@@ -3,11 +3,15 @@ package org.feedernote.calc;
 import static org.feedernote.formula.Formula.bind;
 import static org.feedernote.formula.ImpedanceFormulas.*;
 
+import org.feedernote.data.DataGapException;
 import org.feedernote.data.ReferenceData;
 import org.feedernote.formula.Units;
 import org.feedernote.model.Cable;
 import org.feedernote.model.CableType;
+import org.feedernote.model.Conductor;
 import org.feedernote.model.Formation;
+import org.feedernote.model.Method;
+import org.feedernote.trace.TableRef;
 import org.feedernote.trace.Q;
 import org.feedernote.trace.Trace;
 
@@ -140,5 +144,100 @@ final class ImpedanceCalc {
         Q x = (phases == 3 ? X_THREE_PHASE : X_SINGLE_PHASE).eval(t, id + "/x_" + tag, "", bind(X, reactance));
         Q z = Z_MV.eval(t, id + "/z_" + tag, "", bind(R_MV, r), bind(X_MV, x));
         return new ImpedanceResult(theta, resistance, reactance, r, x, z, phases, null, null);
+    }
+
+    /** A column of a voltage-drop table: the r and x columns of the CSV and the words that name it in the note. */
+    record DropColumn(String r, String x, String label, String because) {}
+
+    /**
+     * The column of the table a cable's circuit reads: for single-core cables, by enclosure (reference
+     * methods A and B, in conduit or trunking) and then by formation; for multicore cables, by phases.
+     */
+    static DropColumn dropColumn(Cable cable, Method method, int phases) {
+        if (cable.type() == CableType.MULTICORE) {
+            return phases == 3
+                    ? new DropColumn("r3", "x3", "col. 4: three- or four-core cable, three-phase a.c.", "multicore cable, three-phase")
+                    : new DropColumn("r1", "x1", "col. 3: two-core cable, single-phase a.c.", "multicore cable, single-phase");
+        }
+        boolean enclosed = method == Method.A1 || method == Method.A2 || method == Method.B1 || method == Method.B2;
+        String how = "single-core cables, reference method " + method.token();
+        Formation f = cable.formation();
+        if (phases == 1) {
+            if (enclosed) return new DropColumn("r1_enclosed", "x1_enclosed",
+                    "col. 3: 2 cables, single-phase a.c., enclosed in conduit or trunking (methods A and B)", how + " (enclosed), single-phase");
+            if (f == Formation.FLAT_SPACED) return new DropColumn("r1_spaced", "x1_spaced",
+                    "col. 5: 2 cables, single-phase a.c., spaced", how + ", flat spaced, single-phase");
+            return new DropColumn("r1_touching", "x1_touching", "col. 4: 2 cables, single-phase a.c., touching",
+                    how + ", " + f.token() + ", single-phase (two cables: touching)");
+        }
+        if (enclosed) return new DropColumn("r3_enclosed", "x3_enclosed",
+                "col. 6: 3 or 4 cables, three-phase a.c., enclosed in conduit or trunking (methods A and B)", how + " (enclosed), three-phase");
+        if (f == Formation.TREFOIL) return new DropColumn("r3_trefoil", "x3_trefoil",
+                "col. 7: 3 or 4 cables, three-phase a.c., touching, trefoil", how + ", trefoil, three-phase");
+        if (f == Formation.FLAT_SPACED) return new DropColumn("r3_flat_spaced", "x3_flat_spaced",
+                "col. 9: 3 or 4 cables, three-phase a.c., spaced, flat", how + ", flat spaced, three-phase");
+        return new DropColumn("r3_flat_touching", "x3_flat_touching", "col. 8: 3 or 4 cables, three-phase a.c., touching, flat",
+                how + ", flat touching, three-phase");
+    }
+
+    /**
+     * The cable's r and x read from the BS 7671 Appendix 4 voltage-drop table of its insulation and
+     * type (basis.impedance: tabulated), divided among cables in parallel; R and X per conductor read
+     * back from them for the fault path's reactance and a single-phase motor's starting on a
+     * three-phase feeder; R_20 and α_20 looked up for the fault path's resistances, which stay on IEC
+     * 60228 (the tables give one a.c. figure at θ_max and none for the protective conductor).
+     *
+     * @param theta the table's conductor temperature (θ_max, already traced)
+     */
+    ImpedanceResult tabulated(Trace t, String id, Cable cable, Method method, Q theta, int phases) {
+        double size = cable.size().mm2();
+        boolean multicore = cable.type() == CableType.MULTICORE;
+        String file = ReferenceData.dropTableFile(cable.insulation(), multicore);
+        TableRef ref = data.dropTableRef(file);
+        if (cable.conductor() != Conductor.COPPER) {
+            throw new DataGapException(id + ": " + ref.citation() + " is for copper conductors; no mV/A/m table for "
+                    + cable.conductor().token() + " conductors is packaged (basis.impedance: tabulated)");
+        }
+        DropColumn col = dropColumn(cable, method, phases);
+        if (t.recording()) {
+            Given.decision(t, id + "/table", "Voltage-drop table and column", "basis.impedance = tabulated; " + col.because()
+                            + (multicore ? "; the input does not say whether the cable is armoured: the armoured multicore table is the one packaged" : ""),
+                    ref.citation() + ", " + col.label(), "BS 7671:2018 Appendix 4, voltage-drop tables", theta.id());
+        }
+        String tag = phases == 3 ? "3ph" : "1ph";
+        Q rT = data.dropPerAmpereMetre(t, id, "/r_tab", "Resistive voltage drop per ampere per metre, tabulated", "r_t", file, size,
+                col.r(), col.label() + ", r");
+        Q xT;
+        if (size <= 16 && !data.hasDropFigure(file, size, col.x())) {
+            xT = Given.derived(t, id, "/x_tab", "Reactive voltage drop per ampere per metre, tabulated", "x_t", 0, Units.MV_PER_AM,
+                    ref.citation() + " prints one figure up to 16 mm², read as r; x is not tabulated and is taken as 0 (the drop is then r·cos φ·I·L)");
+        } else {
+            xT = data.dropPerAmpereMetre(t, id, "/x_tab", "Reactive voltage drop per ampere per metre, tabulated", "x_t", file, size,
+                    col.x(), col.label() + ", x");
+        }
+        Q r;
+        Q x;
+        if (cable.parallel() > 1) {
+            Q n = Given.derived(t, id, "/n", "Cables in parallel per phase", "n", cable.parallel(), Units.NONE, "design input (cable.parallel)");
+            r = R_TABULATED_PARALLEL.eval(t, id, "/r_" + tag, "", bind(R_T, rT), bind(N_PAR, n));
+            x = X_TABULATED_PARALLEL.eval(t, id, "/x_" + tag, "", bind(X_T, xT), bind(N_PAR, n));
+        } else {
+            r = Given.alias("r", rT);
+            x = Given.alias("x", xT);
+        }
+        Q z = Z_MV.eval(t, id + "/z_" + tag, "", bind(R_MV, r), bind(X_MV, x));
+        Q resistance = (phases == 3 ? R_CONDUCTOR_THREE_PHASE : R_CONDUCTOR_SINGLE_PHASE).eval(t, id, "/R", "", bind(R_MV, r));
+        Q reactance = (phases == 3 ? X_CONDUCTOR_THREE_PHASE : X_CONDUCTOR_SINGLE_PHASE).eval(t, id, "/X", "", bind(X_MV, x));
+        Q r20 = data.resistance20(t, id, "/R20", cable.conductor(), size);
+        Q alpha = data.alpha20(t, id, "/alpha20", cable.conductor());
+        if (t.recording()) {
+            Given.decision(t, id + "/fault-basis", "Impedance for the fault path",
+                    "the table gives one a.c. figure at θ_max for the line conductors and none for the protective conductor, while the fault "
+                            + "currents need the resistances at 20 °C, at θ_max and at the final temperature, line and protective conductor alike",
+                    "resistances R_1 and R_2 from IEC 60228 R_20 corrected with α_20, as with derived impedances (line and protective conductor "
+                            + "from one source); reactance X per conductor from the table's x (X = x/" + (phases == 3 ? "√3" : "2") + ")",
+                    "common practice, no source", r20.id(), reactance.id());
+        }
+        return new ImpedanceResult(theta, resistance, reactance, r, x, z, phases, r20, alpha);
     }
 }

@@ -24,7 +24,8 @@ public final class ReferenceData {
             "ambient-air.csv", "ambient-ground.csv", "grouping.csv", "grouping-ground.csv", "soil-resistivity.csv",
             "thermal-insulation.csv", "harmonics.csv", "devices.csv", "adiabatic.csv",
             "mcb-time-current.csv", "mcb-let-through.csv", "rcd-operating-times.csv", "gg-fuse-disconnection.csv",
-            "gg-fuse-gates.csv", "twin-earth-cpc.csv", "conductor-wires.csv", "stranding-inductance.csv");
+            "gg-fuse-gates.csv", "twin-earth-cpc.csv", "conductor-wires.csv", "stranding-inductance.csv",
+            "drop-pvc-single-core.csv", "drop-xlpe-single-core.csv", "drop-pvc-multicore.csv", "drop-xlpe-multicore.csv");
 
     /**
      * Tables read and looked up ({@link DeviceData}, {@link CableBuildData}) but not yet used by the
@@ -179,6 +180,34 @@ public final class ReferenceData {
         Step.Lookup s = stranding.lookup(stepId, "Inductance constant of the conductor", "K", "mH/km", row, "k",
                 row + (row.equals("1") ? " wire (solid)" : " wires"), "K");
         return new Step.Lookup(s.result(), s.title(), s.table(), s.row(), s.column(), s.method(), List.of(wireCount.id()));
+    }
+
+    /** The file of the BS 7671 Appendix 4 voltage-drop table (mV/A/m) of a copper cable of this insulation and type. */
+    public static String dropTableFile(Insulation insulation, boolean multicore) {
+        return "drop-" + insulation.token() + (multicore ? "-multicore.csv" : "-single-core.csv");
+    }
+
+    /** The reference of a voltage-drop table, for naming it in a decision or a data gap. */
+    public TableRef dropTableRef(String file) {
+        return table(file).ref();
+    }
+
+    /** Whether the voltage-drop table holds a figure in this cell (up to 16 mm² it prints r alone). */
+    public boolean hasDropFigure(String file, double sizeMm2, String column) {
+        return table(file).value(sizeKey(sizeMm2), column) != null;
+    }
+
+    /**
+     * A voltage-drop figure (mV/A/m) read from the table file at the size's row and the column, as the
+     * quantity owner + step, recorded in t with the table, row and column and whether the cell is
+     * recalled; a cell the table lacks is a {@link DataGapException} naming the table.
+     */
+    public Q dropPerAmpereMetre(Trace t, String owner, String step, String title, String symbol, String file, double sizeMm2,
+                                String column, String columnLabel) {
+        ReferenceTable tab = table(file);
+        String row = sizeKey(sizeMm2);
+        return tab.quantity(t, owner, step, symbol, "mV/A/m", row, column,
+                () -> Provenance.lookup(tab, owner + step, title, symbol, "mV/A/m", row, column, row + " mm²", columnLabel));
     }
 
     /**

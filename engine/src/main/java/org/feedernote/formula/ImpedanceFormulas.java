@@ -166,4 +166,31 @@ public final class ImpedanceFormulas {
             mul(n(2), v(X)), MV_PER_AM_NOTE);
     public static final Formula Z_MV = new Formula("z", "Impedance voltage drop per ampere per metre", "z", MV_PER_AM,
             sqrt(add(sq(v(R_MV)), sq(v(X_MV)))), "z = √(r² + x²)");
+
+    // ---------------- tabulated impedance (basis.impedance: tabulated) ----------------
+
+    private static final String BS_7671_TABLES = "BS 7671:2018 Appendix 4 voltage-drop tables (mV/A/m per cable, at the maximum conductor operating temperature)";
+
+    public static final Var R_T = var("r_t", "r_t", MV_PER_AM);
+    public static final Var X_T = var("x_t", "x_t", MV_PER_AM);
+
+    public static final Formula R_TABULATED_PARALLEL = new Formula("r-tabulated-parallel",
+            "Resistive voltage drop per ampere per metre, cables in parallel", "r", MV_PER_AM,
+            div(v(R_T), v(N_PAR)), BS_7671_TABLES + "; n equal cables in parallel share the current equally (IEC 60364-5-52:2009, 523.7)");
+
+    public static final Formula X_TABULATED_PARALLEL = new Formula("x-tabulated-parallel",
+            "Reactive voltage drop per ampere per metre, cables in parallel", "x", MV_PER_AM,
+            div(v(X_T), v(N_PAR)), BS_7671_TABLES + "; n equal cables in parallel share the current equally (IEC 60364-5-52:2009, 523.7)");
+
+    private static final String PER_CONDUCTOR = "the mV/A/m forms read backwards: a three-phase figure is √3 times, a single-phase one 2 times the "
+            + "impedance of one conductor (1 mV/A/m = 1 Ω/km)";
+
+    public static final Formula R_CONDUCTOR_THREE_PHASE = new Formula("r-conductor-3ph",
+            "Resistance per conductor, from the three-phase figure", "R", OHM_PER_KM, div(v(R_MV), SQRT3), PER_CONDUCTOR);
+    public static final Formula X_CONDUCTOR_THREE_PHASE = new Formula("x-conductor-3ph",
+            "Reactance per conductor, from the three-phase figure", "X", OHM_PER_KM, div(v(X_MV), SQRT3), PER_CONDUCTOR);
+    public static final Formula R_CONDUCTOR_SINGLE_PHASE = new Formula("r-conductor-1ph",
+            "Resistance per conductor, from the single-phase figure", "R", OHM_PER_KM, div(v(R_MV), n(2)), PER_CONDUCTOR);
+    public static final Formula X_CONDUCTOR_SINGLE_PHASE = new Formula("x-conductor-1ph",
+            "Reactance per conductor, from the single-phase figure", "X", OHM_PER_KM, div(v(X_MV), n(2)), PER_CONDUCTOR);
 }

@@ -296,7 +296,8 @@ public final class InputReader {
                 setting(b, path, "motor_starting_limit_percent", 10),
                 setting(b, path, "voltage_drop_method", DropMethod.class, DropMethod.APPROXIMATE),
                 setting(b, path, "voltage_factor_max", 1.10), setting(b, path, "voltage_factor_min", 0.95),
-                num(b, "earth_electrode_resistance_ohm"));
+                num(b, "earth_electrode_resistance_ohm"),
+                setting(b, path, "impedance", ImpedanceBasis.class, ImpedanceBasis.DERIVED));
     }
 
     private Supply supply(Node s) {

@@ -100,6 +100,7 @@ public final class InputSchema {
                 opt("disconnection_time_distribution_s", range("maximum disconnection time of distribution circuits in s", 0, true, 5, false), "5"),
                 opt("motor_starting_limit_percent", range("limit of the voltage dip at a motor's terminals while it starts, per cent of nominal", 0, true, 50, false), "10"),
                 opt("voltage_drop_method", word("which voltage-drop form is checked against the limit", DropMethod.class), "approximate"),
+                opt("impedance", word("where r and x of the voltage drop come from: derived from the conductor and the cables' geometry, or read from the published mV/A/m tables", ImpedanceBasis.class), "derived"),
                 opt("voltage_factor_max", range("IEC 60909 voltage factor c_max for maximum fault currents", 1, false, 1.2, false), "1.10"),
                 opt("voltage_factor_min", range("IEC 60909 voltage factor c_min for minimum fault currents and maximum Zs", 0.8, false, 1, false), "0.95"),
                 // R_A · IΔn ≤ 50 V (IEC 60364-4-41, 411.5.3) with the smallest common IΔn of 6 mA allows some 8 kΩ.

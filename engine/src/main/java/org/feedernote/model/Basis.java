@@ -10,7 +10,8 @@ public record Basis(Setting<Double> frequencyHz, Setting<Earthing> earthing,
                     Setting<ConductorTemperature> conductorTemperature,
                     Setting<Double> disconnectionTimeFinalS, Setting<Double> disconnectionTimeDistributionS,
                     Setting<Double> motorStartingLimitPercent, Setting<DropMethod> voltageDropMethod,
-                    Setting<Double> voltageFactorMax, Setting<Double> voltageFactorMin, Double earthElectrodeOhm) {
+                    Setting<Double> voltageFactorMax, Setting<Double> voltageFactorMin, Double earthElectrodeOhm,
+                    Setting<ImpedanceBasis> impedance) {
     /** True when limits are given per load kind rather than one for all. */
     public boolean limitsByKind() { return voltageDropLimitsByKind != null; }
 }

@@ -19,6 +19,7 @@ import org.feedernote.data.ReferenceData;
 import org.feedernote.expr.Printer;
 import org.feedernote.formula.Units;
 import org.feedernote.model.Basis;
+import org.feedernote.model.ImpedanceBasis;
 import org.feedernote.model.Installation;
 import org.feedernote.model.Project;
 import org.feedernote.model.Setting;
@@ -129,7 +130,7 @@ public final class NoteBuilder {
                 ? "Every tabulated value this note uses was checked against a published copy of its table (Appendix A names each)."
                 : unverified.size() + " tabulated value" + (unverified.size() == 1 ? " this note uses was" : "s this note uses were")
                         + " recalled from the published standards and not yet checked against a published copy (listed in 1.5); check them against the current edition before relying on them.");
-        return new NoteView(cover, basis(inst), standards(), cautions, assumptions(), List.copyOf(unverified), summary, sections, docs, tableViews, others,
+        return new NoteView(cover, basis(inst), standards(), cautions, assumptions(inst.basis().impedance().value()), List.copyOf(unverified), summary, sections, docs, tableViews, others,
                 listing, fileName(inst.sourceName()), fingerprint, shortPrint, p.status() == Status.DRAFT, engineVersion,
                 data.version(), running, changesSince, changes);
     }
@@ -200,12 +201,14 @@ public final class NoteBuilder {
         return SUBJECTS.getOrDefault(number, "");
     }
 
-    static List<String> assumptions() {
+    static List<String> assumptions(ImpedanceBasis impedance) {
         return List.of(
                 "Values are kept unrounded throughout; the working shows them rounded for display, so a result may differ in its last digit from a recalculation with the displayed figures.",
                 "Voltage drops are referred to the nominal voltage: line-to-line for three-phase circuits, line-to-neutral for single-phase circuits; the same percentage either way for a balanced load.",
                 "Feeder design currents come from the complex sum (P and Q separately) of the circuits of the board they feed, per phase, times the board's diversity; the most loaded phase governs.",
-                "Cable reactance is derived from the geometry (round conductors of the nominal area, IEC 60502-1 insulation thickness); shaped conductors and armour change it slightly.");
+                impedance == ImpedanceBasis.TABULATED
+                        ? "Cable r and x are read from the BS 7671:2018 Appendix 4 voltage-drop tables (mV/A/m, copper, at the maximum conductor operating temperature); the fault path keeps the IEC 60228 conductor resistances and takes its reactance from the table's x."
+                        : "Cable reactance is derived from the geometry (round conductors of the nominal area, IEC 60502-1 insulation thickness); shaped conductors and armour change it slightly.");
     }
 
     static List<BasisRow> basis(Installation inst) {
@@ -224,6 +227,11 @@ public final class NoteBuilder {
         rows.add(new BasisRow("Voltage-drop form checked", b.voltageDropMethod().value().token(), b.voltageDropMethod().given() ? "given" : "default", "IEC 60364-5-52:2009, Annex G"));
         rows.add(new BasisRow("Conductor temperature for the voltage drop", b.conductorTemperature().value().token(),
                 b.conductorTemperature().given() ? "given" : "default", "IEC 60364-5-52:2009, Table 52.1"));
+        // Shown where given or tabulated: the notes of inputs without the key stay as they were.
+        if (b.impedance().given() || b.impedance().value() == ImpedanceBasis.TABULATED) {
+            rows.add(new BasisRow("Impedance for the voltage drop", b.impedance().value().token(), b.impedance().given() ? "given" : "default",
+                    b.impedance().value() == ImpedanceBasis.TABULATED ? "BS 7671:2018 Appendix 4, voltage-drop tables" : "IEC 60228, IEC 60287-1-1 (derived)"));
+        }
         rows.add(row("Ambient air temperature", b.ambientAirC(), " °C", "IEC 60364-5-52:2009, 523.1"));
         rows.add(row("Ground temperature", b.ambientGroundC(), " °C", "IEC 60364-5-52:2009, 523.1"));
         rows.add(row("Disconnection time, final circuits", b.disconnectionTimeFinalS(), " s", "IEC 60364-4-41:2005, Table 41.1"));
