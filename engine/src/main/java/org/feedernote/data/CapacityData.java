@@ -143,7 +143,7 @@ public final class CapacityData {
     }
 
     /** Where a next-higher lookup lands: asked for once per table, column and key (the sizing asks thousands of times). */
-    private record Landing(String row, double value, String rowLabel, String method) {}
+    private record Landing(String row, double value, String rowLabel, String method, org.feedernote.trace.TableRef ref) {}
 
     private static final class LandingKey {
         final ReferenceTable table;
@@ -178,10 +178,10 @@ public final class CapacityData {
         Landing landing = landings.get(k);
         if (landing == null) {
             Step.Lookup s = landingOf(table, id, title, symbol, key, column, keyUnit, columnLabel, what);
-            landings.putIfAbsent(k, new Landing(s.row(), s.value(), s.row(), s.method()));
+            landings.putIfAbsent(k, new Landing(s.row(), s.value(), s.row(), s.method(), s.table()));
             return s;
         }
-        return new Step.Lookup(id, title, symbol, landing.value(), "", table.ref(), landing.rowLabel(), columnLabel, landing.method(),
+        return new Step.Lookup(id, title, symbol, landing.value(), "", landing.ref(), landing.rowLabel(), columnLabel, landing.method(),
                 List.of());
     }
 
@@ -251,22 +251,23 @@ public final class CapacityData {
         return new Harmonic(s, "neutral".equals(t.text(band, "basis")));
     }
 
-    private final java.util.Map<DeviceKind, TableRef> deviceRefs = new java.util.concurrent.ConcurrentHashMap<>();
+    private final java.util.Map<String, TableRef> deviceRefs = new java.util.concurrent.ConcurrentHashMap<>();
 
     /** The row of the devices table, with its own standard as the citation. */
-    private TableRef deviceRef(DeviceKind kind) {
-        return deviceRefs.computeIfAbsent(kind, this::deviceRefOf);
+    private TableRef deviceRef(DeviceKind kind, String column) {
+        return deviceRefs.computeIfAbsent(kind.token() + "/" + column, k -> deviceRefOf(kind, column));
     }
 
-    private TableRef deviceRefOf(DeviceKind kind) {
+    /** The row's reference as it holds for one column: recalled or confirmed, as the table's memory column says. */
+    private TableRef deviceRefOf(DeviceKind kind, String column) {
         ReferenceTable t = data.table("devices.csv");
         String k = kind.token();
         return new TableRef("devices-" + k, "Conventional tripping current and standard ratings, " + k,
-                t.text(k, "standard"), t.text(k, "edition"), t.text(k, "clause"), t.ref().fromMemory(), t.ref().notes());
+                t.text(k, "standard"), t.text(k, "edition"), t.text(k, "clause"), Provenance.recalled(t, k, column), t.ref().notes());
     }
 
     public Step.Lookup k2(String id, DeviceKind kind) {
-        return new Step.Lookup(id, "Conventional tripping current factor", "k_2", devices.value(kind.token(), "k2"), "", deviceRef(kind),
+        return new Step.Lookup(id, "Conventional tripping current factor", "k_2", devices.value(kind.token(), "k2"), "", deviceRef(kind, "k2"),
                 kind.token(), "I_2 / I_n", "exact", List.of());
     }
 
@@ -291,7 +292,7 @@ public final class CapacityData {
         for (double v : r) {
             if (v >= current - 1e-9) {
                 return new Step.Lookup(id, "Rated current of the device (smallest standard rating ≥ I_b)", "I_n", v, "A",
-                        deviceRef(kind), num(v) + " A", "standard ratings of " + kind.token(), "next higher (smallest ≥ I_b)", List.of());
+                        deviceRef(kind, "ratings"), num(v) + " A", "standard ratings of " + kind.token(), "next higher (smallest ≥ I_b)", List.of());
             }
         }
         throw new DataGapException("no standard " + kind.token() + " rating reaches " + num(current) + " A (largest "

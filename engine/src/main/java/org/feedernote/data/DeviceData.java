@@ -85,7 +85,7 @@ public final class DeviceData {
         String first = rows.get(0);
         if (prospectiveA > Double.parseDouble(rows.get(rows.size() - 1)) + 1e-9) return null;
         if (prospectiveA <= Double.parseDouble(first)) {
-            return new Step.Lookup(id, title, "I²t", letThrough.value(first, column), "A²s", letThrough.ref(),
+            return new Step.Lookup(id, title, "I²t", letThrough.value(first, column), "A²s", letThrough.cellRef(first, column),
                     first + " A (prospective " + amps(prospectiveA) + " A, at or below the first row)", label,
                     "the first row's limit, which bounds the let-through at lower prospective currents (it rises with the current); "
                             + Provenance.method(letThrough, first, column), List.of());
@@ -102,7 +102,7 @@ public final class DeviceData {
                 double v = vlo + (vhi - vlo) * (prospectiveA - lo) / (hi - lo);
                 boolean recalled = Provenance.recalled(letThrough, rows.get(i - 1), column)
                         || Provenance.recalled(letThrough, rows.get(i), column);
-                return new Step.Lookup(id, title, "I²t", v, "A²s", letThrough.ref(),
+                return new Step.Lookup(id, title, "I²t", v, "A²s", recalled ? letThrough.ref() : letThrough.cellRef(rows.get(i), column),
                         rows.get(i - 1) + " to " + rows.get(i) + " A (prospective " + amps(prospectiveA) + " A)", label,
                         "interpolated linearly in the prospective current between " + ReferenceData.sizeKey(vlo) + " and "
                                 + ReferenceData.sizeKey(vhi) + " A²s; " + (recalled ? "from memory (no published copy seen)"
