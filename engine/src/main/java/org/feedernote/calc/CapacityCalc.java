@@ -106,7 +106,7 @@ final class CapacityCalc {
         if (t.recording()) Given.decision(t, id + "/loaded", "Loaded conductors", phases == 3 ? "three-phase circuit (neutral current not counted)"
                 : "single-phase circuit: line and neutral", loaded + " loaded conductors", "IEC 60364-5-52:2009, 523.6");
         Q it = capacityData.tabulated(t, id, "/I_t", cable.insulation(), cable.conductor(), method, loaded,
-                cable.type(), cable.formation(), cable.size().mm2());
+                cable.type(), cable.formation(), c.conditions().vertical(), cable.size().mm2());
         List<Q> factors = new ArrayList<>();
         boolean ground = method == Method.D1 || method == Method.D2;
         Setting<Double> amb = c.conditions().ambientC().given() ? c.conditions().ambientC()

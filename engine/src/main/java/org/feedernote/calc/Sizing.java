@@ -175,14 +175,14 @@ final class Sizing {
         Cable cable = c.cable();
         int loaded = c.phases() == 3 ? 3 : 2;
         int formation = cable.formation() == null ? 0 : cable.formation().ordinal() + 1;
-        return ((((long) cable.insulation().ordinal() * 64 + cable.conductor().ordinal()) * 64 + c.conditions().method().ordinal()) * 8
-                + loaded) * 64 + formation;
+        return (((((long) cable.insulation().ordinal() * 64 + cable.conductor().ordinal()) * 64 + c.conditions().method().ordinal()) * 8
+                + loaded) * 64 + formation) * 2 + (c.conditions().vertical() ? 1 : 0);
     }
 
     private boolean covered(Circuit c, double size) {
         int loaded = c.phases() == 3 ? 3 : 2;
         return run.capacityData().covers(c.cable().insulation(), c.cable().conductor(), c.conditions().method(), loaded,
-                c.cable().formation(), size) && ReferenceData.standard().hasResistance(c.cable().conductor(), size);
+                c.cable().formation(), c.conditions().vertical(), size) && ReferenceData.standard().hasResistance(c.cable().conductor(), size);
     }
 
     /**

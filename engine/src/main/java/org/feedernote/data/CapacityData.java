@@ -34,44 +34,52 @@ public final class CapacityData {
     /** The column of the capacity tables for a cable and method, or a data gap. */
     public Step.Lookup tabulated(String id, Insulation insulation, Conductor conductor, Method method, int loaded,
                                  CableType type, Formation formation, double size) {
-        Column c = column(insulation, conductor, method, loaded, formation);
+        return tabulated(id, insulation, conductor, method, loaded, type, formation, false, size);
+    }
+
+    /** @param vertical for method G: single-core cables spaced vertically rather than horizontally */
+    public Step.Lookup tabulated(String id, Insulation insulation, Conductor conductor, Method method, int loaded,
+                                 CableType type, Formation formation, boolean vertical, double size) {
+        Column c = column(insulation, conductor, method, loaded, formation, vertical);
         String row = ReferenceData.sizeKey(size);
         return c.table().lookup(id, "Tabulated current-carrying capacity", "I_t", "A", row, c.column(), row + " mm²", c.label());
     }
 
     /** {@link #tabulated} as the quantity owner + step, recorded in t (see {@link ReferenceTable#quantity}). */
     public Q tabulated(Trace t, String owner, String step, Insulation insulation, Conductor conductor, Method method, int loaded,
-                       CableType type, Formation formation, double size) {
-        Column c = column(insulation, conductor, method, loaded, formation);
+                       CableType type, Formation formation, boolean vertical, double size) {
+        Column c = column(insulation, conductor, method, loaded, formation, vertical);
         return c.table().quantity(t, owner, step, "I_t", "A", ReferenceData.sizeKey(size), c.column(),
-                () -> tabulated(owner + step, insulation, conductor, method, loaded, type, formation, size));
+                () -> tabulated(owner + step, insulation, conductor, method, loaded, type, formation, vertical, size));
     }
 
     /** The table and column of a cable and method, and the column in words. */
     private record Column(ReferenceTable table, String column, String label) {}
 
     /** equals and hashCode written out, as the sizing's other lookup keys (see TermFormulas). */
-    private record ColumnKey(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation) {
+    private record ColumnKey(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation,
+                             boolean vertical) {
         @Override public boolean equals(Object o) {
             return o instanceof ColumnKey k && insulation == k.insulation && conductor == k.conductor && method == k.method
-                    && loaded == k.loaded && formation == k.formation;
+                    && loaded == k.loaded && formation == k.formation && vertical == k.vertical;
         }
 
         @Override public int hashCode() {
-            return (((insulation.ordinal() * 31 + conductor.ordinal()) * 31 + method.ordinal()) * 31 + loaded) * 31
-                    + (formation == null ? -1 : formation.ordinal());
+            return ((((insulation.ordinal() * 31 + conductor.ordinal()) * 31 + method.ordinal()) * 31 + loaded) * 31
+                    + (formation == null ? -1 : formation.ordinal())) * 2 + (vertical ? 1 : 0);
         }
     }
 
     /** Columns by cable and method: every sizing candidate looks one up. */
     private final java.util.Map<ColumnKey, Column> columns = new java.util.concurrent.ConcurrentHashMap<>();
 
-    private Column column(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation) {
-        return columns.computeIfAbsent(new ColumnKey(insulation, conductor, method, loaded, formation),
-                k -> columnOf(insulation, conductor, method, loaded, formation));
+    private Column column(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation, boolean vertical) {
+        boolean v = vertical && method == Method.G;
+        return columns.computeIfAbsent(new ColumnKey(insulation, conductor, method, loaded, formation, v),
+                k -> columnOf(insulation, conductor, method, loaded, formation, v));
     }
 
-    private Column columnOf(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation) {
+    private Column columnOf(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation, boolean vertical) {
         String ins = insulation.token();
         ReferenceTable table;
         String column;
@@ -97,8 +105,8 @@ public final class CapacityData {
                 break;
             case G:
                 table = data.table("capacity-" + ins + "-efg.csv");
-                column = conductor.token() + "_G-horizontal";
-                label = "method G, single-core spaced, horizontal";
+                column = conductor.token() + (vertical ? "_G-vertical" : "_G-horizontal");
+                label = "method G, single-core spaced, " + (vertical ? "vertical" : "horizontal");
                 break;
             default:
                 table = data.table("capacity-" + ins + "-" + loaded + ".csv");
@@ -127,15 +135,17 @@ public final class CapacityData {
     /** Whether the capacity table has a value for the cable, method and size; asked once per combination. */
     private final java.util.concurrent.ConcurrentHashMap<Coverage, Boolean> covered = new java.util.concurrent.ConcurrentHashMap<>();
 
-    public boolean covers(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation, double size) {
-        return covered.computeIfAbsent(new Coverage(new ColumnKey(insulation, conductor, method, loaded, formation), size),
-                k -> probe(insulation, conductor, method, loaded, formation, size));
+    public boolean covers(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation, boolean vertical,
+                          double size) {
+        return covered.computeIfAbsent(new Coverage(new ColumnKey(insulation, conductor, method, loaded, formation, vertical), size),
+                k -> probe(insulation, conductor, method, loaded, formation, vertical, size));
     }
 
-    private boolean probe(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation, double size) {
+    private boolean probe(Insulation insulation, Conductor conductor, Method method, int loaded, Formation formation, boolean vertical,
+                          double size) {
         try {
             tabulated("probe", insulation, conductor, method, loaded,
-                    method == Method.E ? CableType.MULTICORE : CableType.SINGLE_CORE, formation, size);
+                    method == Method.E ? CableType.MULTICORE : CableType.SINGLE_CORE, formation, vertical, size);
             return true;
         } catch (DataGapException e) {
             return false;

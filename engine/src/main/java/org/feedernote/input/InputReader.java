@@ -613,6 +613,10 @@ public final class InputReader {
     private Conditions conditions(Node i, String path) {
         Method method = word(i, "method", Method.class, null);
         if (method == null) return null;
+        if (method != Method.G && at(i, "orientation") != null) {
+            error(at(i, "orientation"), join(path, "orientation"), "orientation applies to method G (single-core cables spaced one "
+                    + "diameter apart, horizontally or vertically) only");
+        }
         Double ambient = num(i, "ambient_c");
         Double grouped = num(i, "grouped_circuits");
         Double insulationMm = num(i, "thermal_insulation_mm");
@@ -620,7 +624,8 @@ public final class InputReader {
                 grouped == null ? 1 : grouped.intValue(),
                 word(i, "group_arrangement", Arrangement.class, Arrangement.BUNCHED),
                 insulationMm == null ? 0 : insulationMm, setting(i, path, "soil_thermal_resistivity_kmw", 2.5),
-                num(i, "third_harmonic_percent"));
+                num(i, "third_harmonic_percent"),
+                word(i, "orientation", Orientation.class, Orientation.HORIZONTAL));
     }
 
     private Device device(Node d, String path) {

@@ -169,7 +169,8 @@ public final class InputSchema {
                 opt("group_arrangement", word("arrangement of the group", Arrangement.class), "bunched"),
                 opt("thermal_insulation_mm", range("length of run surrounded by thermal insulation in mm", 0, false, 100000, false), "0"),
                 opt("soil_thermal_resistivity_kmw", range("soil thermal resistivity in K·m/W (buried methods)", 0, true, 10, false), "2.5"),
-                opt("third_harmonic_percent", range("third-harmonic content of the line current in per cent", 0, false, 100, false), "0"));
+                opt("third_harmonic_percent", range("third-harmonic content of the line current in per cent", 0, false, 100, false), "0"),
+                opt("orientation", word("method G only: single-core cables spaced one diameter apart horizontally or vertically (the vertical capacity is lower)", Orientation.class), "horizontal"));
         Spec.Obj device = obj("the protective device at the origin of the circuit",
                 req("kind", word("device kind", DeviceKind.class)),
                 // From the smallest miniature breakers and fuses (0.5 A) to the largest air circuit-breakers

@@ -240,4 +240,17 @@ class ProtectionJudgementTest {
         assertTrue(pc.pass(), "S_PE,min = " + pc.limit());
         assertEquals(Math.sqrt(c.minEarthFault().value() * c.minEarthFault().value() * 0.1) / 115, pc.limit(), 0.02);
     }
+
+    @Test
+    void methodGSpacedVerticallyTakesTheVerticalCapacity() {
+        // IEC 60364-5-52:2009 Table B.52.12 / BS 7671:2018 Table 4E1A (copy named in capacity-xlpe-efg.csv): XLPE
+        // single-core copper spaced one diameter, 240 mm², three loaded conductors: horizontal 781 A, vertical 719 A.
+        String cable = "{conductor: copper, insulation: xlpe, type: single-core, formation: flat-spaced, size_mm2: 240, cpc_mm2: 120}";
+        String load = "{kind: other, current_a: 500, power_factor: 0.9, phases: 3}";
+        String device = "{kind: mccb, rating_a: 630, instantaneous_a: 6300, breaking_capacity_ka: 50}";
+        String horizontal = Fixtures.oneBoard("", circuit("C1", load, 30, cable, device).replace("{method: C}", "{method: G}"));
+        String vertical = Fixtures.oneBoard("", circuit("C1", load, 30, cable, device).replace("{method: C}", "{method: G, orientation: vertical}"));
+        assertEquals(781, only(Fixtures.run(horizontal)).tabulatedCapacity().value(), 1e-9);
+        assertEquals(719, only(Fixtures.run(vertical)).tabulatedCapacity().value(), 1e-9);
+    }
 }

@@ -65,11 +65,11 @@ class TableQuantityTest {
             for (double size : List.of(1.5, 25.0, 185.0)) {
                 assertSameQuantity(both(t -> DATA.insulationThickness(t, "C-1", "/z/t_i", insulation, size)));
                 assertSameQuantity(both(t -> CAPACITY.tabulated(t, "C-1", "/cap/I_t", insulation, Conductor.COPPER, Method.C, 3,
-                        CableType.MULTICORE, null, size)));
+                        CableType.MULTICORE, null, false, size)));
             }
         }
         assertSameQuantity(both(t -> CAPACITY.tabulated(t, "C-1", "/cap/I_t", Insulation.XLPE, Conductor.COPPER, Method.F, 3,
-                CableType.SINGLE_CORE, Formation.TREFOIL, 240)));
+                CableType.SINGLE_CORE, Formation.TREFOIL, false, 240)));
     }
 
     /** IEC 60228:2004, Table 2: plain copper, class 2, 2.5 mm², 7.41 Ω/km at 20 °C (copies named in conductor-resistance.csv). */
