@@ -457,13 +457,4 @@ public final class Engine {
         }
     }
 
-    /** {@link Decimals#trim}, by the name FaultPath and the tests call it. */
-    static String trim(double v) {
-        return Decimals.trim(v);
-    }
-
-    /** {@link Decimals#fixed3}, by the name the tests call it. */
-    static String fixed3(double v) {
-        return Decimals.fixed3(v);
-    }
 }

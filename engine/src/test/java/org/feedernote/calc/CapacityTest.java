@@ -20,7 +20,7 @@ import org.feedernote.trace.TraceWalk;
 class CapacityTest {
     private static final CapacityData DATA = new CapacityData(ReferenceData.standard());
 
-    /** IEC 60364-5-52:2009 Tables B.52.2 to B.52.5 and B.52.10/B.52.12, copper, from memory (equal to BS 7671:2018 Tables 4D1A, 4D2A, 4E1A, 4E2A). */
+    /** IEC 60364-5-52:2009 Tables B.52.2 to B.52.5 and B.52.10/B.52.12, copper; each cell confirmed or recalled as its data file's memory column says (CapacityTablesTest holds them with their sources). */
     @ParameterizedTest(name = "{0} {1} loaded, method {2}, {3} mm²: I_t = {4} A")
     @CsvSource({
             "PVC, 2, C, 2.5, 27", "PVC, 2, B2, 1.5, 16.5", "PVC, 2, A1, 16, 61", "PVC, 3, C, 25, 96", "PVC, 3, B1, 95, 207",

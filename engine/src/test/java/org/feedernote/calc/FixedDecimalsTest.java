@@ -23,7 +23,7 @@ class FixedDecimalsTest {
     @ValueSource(doubles = {0, -0.0, 0.0005, -0.0005, 0.0004999, 1.0005, 2.0005, 1.2345, -1.2345, 0.1 + 0.2, 999.9995,
             1e7, 1.23456789e9, 5e-324, -5e-324, 0.125, 0.0625, 4.35, 1.005, 123456.0004999})
     void writesWhatTheFormatterWritesForEdgeValues(double v) {
-        assertEquals(formatter(v), Engine.fixed3(v));
+        assertEquals(formatter(v), Decimals.fixed3(v));
     }
 
     /** Seeded values of every kind the working meets: small, with a half at the fourth decimal, negative, large, tiny. */
@@ -44,14 +44,14 @@ class FixedDecimalsTest {
 
     @Test
     void writesWhatTheFormatterWritesForManyValues() {
-        for (double v : sample(20261202, 100_000)) assertEquals(formatter(v), Engine.fixed3(v), () -> "for " + v);
+        for (double v : sample(20261202, 100_000)) assertEquals(formatter(v), Decimals.fixed3(v), () -> "for " + v);
     }
 
     @Test
     void writesWhatTheFormatterWritesForNonFiniteValues() {
-        assertEquals(formatter(Double.NaN), Engine.fixed3(Double.NaN));
-        assertEquals(formatter(Double.POSITIVE_INFINITY), Engine.fixed3(Double.POSITIVE_INFINITY));
-        assertEquals(formatter(Double.NEGATIVE_INFINITY), Engine.fixed3(Double.NEGATIVE_INFINITY));
+        assertEquals(formatter(Double.NaN), Decimals.fixed3(Double.NaN));
+        assertEquals(formatter(Double.POSITIVE_INFINITY), Decimals.fixed3(Double.POSITIVE_INFINITY));
+        assertEquals(formatter(Double.NEGATIVE_INFINITY), Decimals.fixed3(Double.NEGATIVE_INFINITY));
     }
 
     /** trim: the formatter's three decimals with the trailing zeros stripped; "-0" for a negative value that rounds to zero. */
@@ -66,7 +66,7 @@ class FixedDecimalsTest {
             -2.5, 1.23456789e9, 0.001, 0.0009, 0.0005, 0.0004999, -0.0004, 0.9995, 9.9995, 9_999_999.9995, 9_999_999.9994,
             1e-3, 0.00099999, 6_999_999.9999, 0.125, 0.1 + 0.2, 4.35, 1.005, -1.0005, 12.3456789})
     void trimWritesWhatTheFormatterWritesWithoutTrailingZeros(double v) {
-        assertEquals(trimmed(v), Engine.trim(v));
+        assertEquals(trimmed(v), Decimals.trim(v));
     }
 
     @Test
@@ -74,13 +74,13 @@ class FixedDecimalsTest {
         SplittableRandom random = new SplittableRandom(20261203);
         for (int i = 0; i < 20_000; i++) {
             double v = i % 2 == 0 ? random.nextInt(-100_000, 100_000) : Math.rint(random.nextDouble() * 1e12);
-            assertEquals(trimmed(v), Engine.trim(v), () -> "for " + v);
+            assertEquals(trimmed(v), Decimals.trim(v), () -> "for " + v);
         }
     }
 
     @Test
     void trimWritesWhatTheFormatterWritesForManyValues() {
-        for (double v : sample(202612031, 200_000)) assertEquals(trimmed(v), Engine.trim(v), () -> "for " + v);
+        for (double v : sample(202612031, 200_000)) assertEquals(trimmed(v), Decimals.trim(v), () -> "for " + v);
     }
 
     /**
@@ -100,8 +100,8 @@ class FixedDecimalsTest {
                 case 2 -> Math.nextDown(half);
                 default -> load += random.nextDouble() * 10 / 3;
             };
-            assertEquals(formatter(v), Engine.fixed3(v), () -> "fixed3 for " + v);
-            assertEquals(trimmed(v), Engine.trim(v), () -> "trim for " + v);
+            assertEquals(formatter(v), Decimals.fixed3(v), () -> "fixed3 for " + v);
+            assertEquals(trimmed(v), Decimals.trim(v), () -> "trim for " + v);
         }
     }
 }

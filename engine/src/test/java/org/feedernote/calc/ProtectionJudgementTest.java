@@ -193,7 +193,7 @@ class ProtectionJudgementTest {
     @Test
     void beyondThePracticalLargestSizeTheSizingProposesCablesInParallel() {
         // A 630 A MCCB on a 4-core XLPE cable in free air: 300 mm² carries 621 A (IEC 60364-5-52:2009,
-        // Table B.52.13, method E, from memory), below I_n; the sizing stops at 300 mm² (common practice,
+        // Table B.52.12, method E, three loaded conductors, from memory: capacity-xlpe-efg.csv marks that column recalled), below I_n; the sizing stops at 300 mm² (common practice,
         // no source) and says how many in parallel would do.
         String yaml = twoBoards("", "transformer: {rating_kva: 1000, impedance_percent: 6}", 40,
                 "{conductor: copper, insulation: xlpe, type: multicore, cores: 4, size_mm2: auto, cpc_mm2: auto}",
