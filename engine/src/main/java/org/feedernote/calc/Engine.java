@@ -447,7 +447,7 @@ public final class Engine {
                 Circuit feeder = feederOf.get(b.id());
                 BoardFault bf = feeder == null ? originFault : results.get(feeder.id()).downstream();
                 out.add(new BoardResult(b.id(), b.description(), feeder == null ? null : feeder.id(), boardDrop.get(b.id()),
-                        phaseCurrents.get(b.id()), neutral.get(b.id()), bf.ik3(), bf.ze(), boardChecks.getOrDefault(b.id(), List.of())));
+                        phaseCurrents.get(b.id()), neutral.get(b.id()), bf.ik3(), bf.ze(), boardChecks.getOrDefault(b.id(), List.of()), bf.ik1()));
             }
             return out;
         }

@@ -195,26 +195,19 @@ final class FaultPath {
     // ---------------- one circuit ----------------
 
     /** The symbols, step ids and forms of the conductor resistances at one temperature. */
-    private record Temperature(String r1PerKm, String r2PerKm, String r1, String r2, String r1PerKmStep,
-                               String r2PerKmStep, String r1Step, String r2Step, String lineForm, String cpcForm, String lengthForm) {}
+    private record Temperature(String r1, String r2, String r1Step, String r2Step, String lineForm, String cpcForm) {}
 
-    private static final Temperature AT_MAX = new Temperature("R_1′", "R_2′", "R_1", "R_2", "/R1km_max", "/R2km_max",
-            "/R1", "/R2", "line, at θ_max", "cpc, at θ_max", "at θ_max");
-    private static final Temperature AT_FINAL = new Temperature("R_1f′", "R_2f′", "R_1f", "R_2f", "/R1km_f", "/R2km_f",
-            "/R1f", "/R2f", "line, at θ_f", "cpc, at θ_f", "at θ_f");
+    private static final Temperature AT_MAX = new Temperature("R_1", "R_2", "/R1", "/R2", "line, at θ_max", "cpc, at θ_max");
+    private static final Temperature AT_FINAL = new Temperature("R_1f", "R_2f", "/R1f", "/R2f", "line, at θ_f", "cpc, at θ_f");
 
-    /** R_1 and R_2 of the route: line and protective conductor per km at the temperature, then for the length. */
+    /** R_1 and R_2 of the route at a temperature: line and protective conductor for the length. */
     private record Conductors(Q r1, Q r2) {}
 
     private Conductors conductors(Trace t, String id, Temperature at, Q theta, Q r20, Q cpc20, Q alpha, Q length, Q n) {
-        Q r1km = RESISTANCE_AT.evalAs(at.r1PerKm(), t, id, at.r1PerKmStep(), at.lineForm(), bind(R20, r20), bind(ALPHA, alpha),
-                bind(THETA, theta));
-        Q r2km = RESISTANCE_AT.evalAs(at.r2PerKm(), t, id, at.r2PerKmStep(), at.cpcForm(), bind(R20, rel(cpc20, "R_20")),
-                bind(ALPHA, alpha), bind(THETA, theta));
-        Q r1 = LENGTH_RESISTANCE.evalAs(at.r1(), t, id, at.r1Step(), at.lengthForm(), bind(R_KM, r1km), bind(L, length),
-                bind(N, n));
-        Q r2 = LENGTH_RESISTANCE.evalAs(at.r2(), t, id, at.r2Step(), at.lengthForm(), bind(R_KM, r2km), bind(L, length),
-                bind(N, n));
+        Q r1 = RUN_RESISTANCE_AT.evalAs(at.r1(), t, id, at.r1Step(), at.lineForm(), bind(R20, r20), bind(ALPHA, alpha),
+                bind(THETA, theta), bind(L, length), bind(N, n));
+        Q r2 = RUN_RESISTANCE_AT.evalAs(at.r2(), t, id, at.r2Step(), at.cpcForm(), bind(R20, rel(cpc20, "R_20")), bind(ALPHA, alpha),
+                bind(THETA, theta), bind(L, length), bind(N, n));
         return new Conductors(r1, r2);
     }
 
@@ -230,10 +223,6 @@ final class FaultPath {
                 "design input (cable.parallel)");
         Q r20 = rel(z.r20(), "R_20");
         Q alpha = rel(z.alpha(), "α_20");
-        Q r1km20 = r20;
-        Q r1_20 = LENGTH_RESISTANCE.evalAs("R_1,20", t, id, "/R1_20", "line conductor at 20 °C", bind(R_KM, r1km20),
-                bind(L, length), bind(N, n));
-        Q x1 = LENGTH_REACTANCE.evalAs("X_1", t, id, "/X1", "line conductor", bind(X_KM, z.reactance()), bind(L, length));
         Q xLoop = LOOP_REACTANCE.evalAs("X_loop", t, id, "/Xloop", "line and protective conductor", bind(X_KM, z.reactance()),
                 bind(L, length));
         Q thetaF = faults.finalTemperature(t, id, "/theta_f", cable.insulation());
@@ -245,12 +234,10 @@ final class FaultPath {
         Q r1f = fin.r1();
         Q r2f = fin.r2();
 
-        Q r12 = series(t, id, "/R12", "Resistance of the loop, at θ_max", "R_1 + R_2", r1, r2);
-        Q zLoop = magnitude(t, id, "/Zloop", "Z_loop", rel(r12, "R"), rel(xLoop, "X"));
-        Q zs = loop(t, id, "/Zs", "Earth-fault loop impedance at the far end", "Z_s", rel(at.ze(), "Z_e"), zLoop);
-        Q r12f = series(t, id, "/R12f", "Resistance of the loop, at θ_f", "R_1f + R_2f", r1f, r2f);
-        Q zLoopF = magnitude(t, id, "/Zloopf", "Z_loop,f", rel(r12f, "R"), rel(xLoop, "X"));
-        Q zsf = loop(t, id, "/Zsf", "Earth-fault loop impedance at the far end, at θ_f", "Z_sf", rel(at.zeF(), "Z_ef"), zLoopF);
+        Q zs = FAR_END_LOOP.evalAs("Z_s", t, id, "/Zs", "at θ_max", bind(ZE, rel(at.ze(), "Z_e")), bind(R1, r1), bind(R2, r2),
+                bind(X_LOOP, xLoop));
+        Q zsf = FAR_END_LOOP.evalAs("Z_sf", t, id, "/Zsf", "at θ_f", bind(ZE, rel(at.zeF(), "Z_ef")), bind(R1, rel(r1f, "R_1f")),
+                bind(R2, rel(r2f, "R_2f")), bind(X_LOOP, xLoop));
         Q ief = MIN_EARTH_FAULT.evalAs("I_ef,min", t, id, "/Ief", "far end", bind(C_MIN, cmin), bind(U0, u0), bind(ZS, zsf));
 
         List<CheckResult> checks = new ArrayList<>();
@@ -265,6 +252,10 @@ final class FaultPath {
 
         BoardFault downstream = null;
         if (c.isFeeder()) {
+            // The phase path at 20 °C serves the maximum fault currents at the board the feeder supplies.
+            Q r1_20 = LENGTH_RESISTANCE.evalAs("R_1,20", t, id, "/R1_20", "line conductor at 20 °C", bind(R_KM, r20),
+                    bind(L, length), bind(N, n));
+            Q x1 = LENGTH_REACTANCE.evalAs("X_1", t, id, "/X1", "line conductor", bind(X_KM, z.reactance()), bind(L, length));
             Trace bt = t.section(id + "/board", "Fault levels at board " + c.to(), "");
             String bid = "fault/" + c.to();
             Q r3 = series(bt, bid, "/R3", "Phase resistance to board " + c.to() + ", 20 °C", "R_3", rel(at.r3(), "R_3(" + c.from() + ")"), r1_20);

@@ -12,6 +12,7 @@ import org.feedernote.data.ReferenceData;
 import org.feedernote.input.Canonical;
 import org.feedernote.model.Installation;
 import org.feedernote.report.NoteBuilder;
+import org.feedernote.report.NoteLayout;
 import org.feedernote.report.NoteRenderer;
 import org.feedernote.report.pdf.DeflatingFile;
 import org.feedernote.report.view.NoteView;
@@ -51,7 +52,7 @@ final class NoteMaker {
      * placeholder).
      */
     static List<String> write(Installation inst, Result result, ReferenceData data, Path templates, String changesSince,
-                              List<String> changes, Path pdf, Path traceFile, Progress progress) throws IOException {
+                              List<String> changes, NoteLayout layout, Path pdf, Path traceFile, Progress progress) throws IOException {
         String fingerprint = fingerprint(inst, data);
         NoteRenderer renderer = new NoteRenderer(templates);
         int sections = result.trace().sections().size();
@@ -60,7 +61,7 @@ final class NoteMaker {
         // The view is built on a third thread: the trace's writing waits on its compression, and
         // the view needs neither.
         java.util.concurrent.FutureTask<NoteView> building = new java.util.concurrent.FutureTask<>(
-                () -> NoteBuilder.build(result, data, fingerprint, Version.engine(), changesSince, changes));
+                () -> NoteBuilder.build(result, data, fingerprint, Version.engine(), changesSince, changes, layout));
         Thread builder = new Thread(building, "feedernote-view");
         builder.setDaemon(true);
         builder.start();

@@ -40,7 +40,7 @@ import org.feedernote.report.pdf.Style;
 import org.feedernote.report.pdf.StyleSheet;
 import org.feedernote.report.pdf.Typesetter;
 import org.feedernote.report.view.NoteView;
-import org.feedernote.report.view.SectionView;
+import org.feedernote.report.view.WorkedSection;
 
 /**
  * Lays the note out: FreeMarker templates → XHTML → PDF pages written by OpenPDF through the
@@ -52,7 +52,7 @@ import org.feedernote.report.view.SectionView;
  */
 public final class NoteRenderer {
     /** The files a template folder holds. */
-    public static final List<String> TEMPLATE_FILES = List.of("front.ftlh", "section.ftlh", "appendix.ftlh", "steps.ftlh", "note.css");
+    public static final List<String> TEMPLATE_FILES = List.of("front.ftlh", "cables.ftlh", "section.ftlh", "compact.ftlh", "appendix.ftlh", "steps.ftlh", "note.css");
 
     /** What a browser gives without a style sheet; the note's note.css comes after it and wins. */
     private static final String DEFAULTS = "b, strong, th, h1, h2, h3, h4 { font-weight: bold; } i, em { font-style: italic; } "
@@ -130,8 +130,9 @@ public final class NoteRenderer {
 
     /** The whole note's markup, part after part (for tests and for reading the templates' output). */
     public String xhtml(NoteView note) throws IOException {
-        StringBuilder b = new StringBuilder(part("front.ftlh", Map.of("note", note)));
-        for (SectionView s : note.sections()) b.append(part("section.ftlh", Map.of("note", note, "section", s)));
+        StringBuilder b = new StringBuilder();
+        for (String template : FRONT_PARTS) b.append(part(template, Map.of("note", note)));
+        for (WorkedSection s : note.sections()) b.append(part(s.template(), Map.of("note", note, "section", s)));
         b.append(part("appendix.ftlh", appendixModel(note, unprintable(note, new Fonts()))));
         return b.toString();
     }
@@ -265,6 +266,7 @@ public final class NoteRenderer {
         info.put(new PdfName("Reference"), new PdfString(note.cover().reference(), PdfObject.TEXT_UNICODE));
         info.put(new PdfName("Revision"), new PdfString(note.cover().revision(), PdfObject.TEXT_UNICODE));
         info.put(new PdfName("InputFile"), new PdfString(note.listingName(), PdfObject.TEXT_UNICODE));
+        info.put(new PdfName("Detail"), new PdfString(note.detail(), PdfObject.TEXT_UNICODE));
         PdfDate date = new PdfDate(calendar(noteDate));
         info.put(PdfName.CREATIONDATE, date);
         info.put(PdfName.MODDATE, date);
@@ -278,6 +280,7 @@ public final class NoteRenderer {
             writer.addFileAttachment(a.description(), spec);
         }
         placeParts(note, typesetter, progress, appendixModel(note, unprintable));
+        typesetter.finishPageReferences();
         // Bytes written so far; OpenPDF's getCurrentDocumentSize() adds an estimate of the
         // cross-reference table and so lies past the font objects of a long note.
         long tail = counted.count;
@@ -318,7 +321,7 @@ public final class NoteRenderer {
      */
     private void placeParts(NoteView note, Typesetter typesetter, Progress progress, Map<String, Object> appendix) throws IOException {
         int sections = note.sections().size();
-        int parts = sections + 2;
+        int parts = BEFORE_SECTIONS + sections + 1;
         java.util.concurrent.ExecutorService preparing = java.util.concurrent.Executors.newSingleThreadExecutor(r -> {
             Thread t = new Thread(r, "feedernote-note-prepare");
             t.setDaemon(true);
@@ -330,26 +333,33 @@ public final class NoteRenderer {
             while (next < parts && ahead.size() < PREPARED_AHEAD) ahead.add(schedule(preparing, prepareTask(note, typesetter, next++, sections, appendix)));
             for (int i = 0; i < parts; i++) {
                 if (i == 0) progress.stage("laying out the front matter and the summary schedule");
-                if (i == sections + 1) progress.stage("laying out the appendices");
+                if (i == BEFORE_SECTIONS + sections) progress.stage("laying out the appendices");
                 java.util.concurrent.FutureTask<Typesetter.Prepared> first = ahead.removeFirst();
                 helpWhileWaiting(first, ahead);
                 Typesetter.Prepared part = await(first);
                 if (next < parts) ahead.add(schedule(preparing, prepareTask(note, typesetter, next++, sections, appendix)));
                 typesetter.place(part);
-                if (i >= 1 && i <= sections) progress.sectionDone(i, sections);
+                if (i >= BEFORE_SECTIONS && i < BEFORE_SECTIONS + sections) progress.sectionDone(i - BEFORE_SECTIONS + 1, sections);
             }
         } finally {
             preparing.shutdownNow();
         }
     }
 
+    /** The parts laid out before the worked sections: the front matter, and the cable data. */
+    private static final List<String> FRONT_PARTS = List.of("front.ftlh", "cables.ftlh");
+    private static final int BEFORE_SECTIONS = FRONT_PARTS.size();
+
     private java.util.concurrent.Callable<Typesetter.Prepared> prepareTask(NoteView note, Typesetter typesetter, int index,
                                                                             int sections, Map<String, Object> appendix) {
         return () -> {
-            if (index == 0) return typesetter.prepare(Markup.parse(part("front.ftlh", Map.of("note", note)), "front.ftlh"));
-            if (index > sections) return typesetter.prepare(Markup.parse(part("appendix.ftlh", appendix), "appendix.ftlh"));
-            SectionView s = note.sections().get(index - 1);
-            return typesetter.prepare(Markup.parse(part("section.ftlh", Map.of("note", note, "section", s)), "section.ftlh"));
+            if (index < BEFORE_SECTIONS) {
+                String template = FRONT_PARTS.get(index);
+                return typesetter.prepare(Markup.parse(part(template, Map.of("note", note)), template));
+            }
+            if (index >= BEFORE_SECTIONS + sections) return typesetter.prepare(Markup.parse(part("appendix.ftlh", appendix), "appendix.ftlh"));
+            WorkedSection s = note.sections().get(index - BEFORE_SECTIONS);
+            return typesetter.prepare(Markup.parse(part(s.template(), Map.of("note", note, "section", s)), s.template()));
         };
     }
 

@@ -59,7 +59,21 @@ public final class Typesetter {
      * A block and its height: in the flow a {@link Text}, {@link Rule} or {@link PdfPTable}; inside
      * a table cell an OpenPDF element.
      */
-    private record Block(Object content, float height, boolean keepWithNext, String outline) implements Item {}
+    private record Block(Object content, float height, boolean keepWithNext, String outline, String pageRef) implements Item {
+        Block(Object content, float height, boolean keepWithNext, String outline) {
+            this(content, height, keepWithNext, outline, null);
+        }
+    }
+
+    /** The page each heading with an id began on (h2 ids). */
+    private final java.util.Map<String, Integer> anchorPages = new java.util.HashMap<>();
+
+    /** A page number printed once the page of its anchor is known: drawn into a template placed at the right margin. */
+    private record PageRef(com.lowagie.text.pdf.PdfTemplate template, String anchor, BaseFont face, float size) {}
+
+    private final List<PageRef> pageRefs = new ArrayList<>();
+    /** Width kept at the right of a line that shows a page number. */
+    private static final float PAGE_REF_WIDTH = 14 * Style.MM;
 
     private record PageBreak() implements Item {}
 
@@ -114,6 +128,24 @@ public final class Typesetter {
         ancestors.add(new String[] {"body", body.classes()});
         children(body, s, ancestors, 0, bodyWidth, true, items);
         return new Prepared(items);
+    }
+
+    /**
+     * Prints the page numbers of the page references placed so far (a contents page): called once
+     * every part is placed. An anchor that never appeared prints a dash.
+     */
+    public void finishPageReferences() {
+        for (PageRef r : pageRefs) {
+            Integer page = anchorPages.get(r.anchor());
+            String text = page == null ? "\u2014" : page.toString();
+            com.lowagie.text.pdf.PdfTemplate t = r.template();
+            t.beginText();
+            t.setFontAndSize(r.face(), r.size());
+            t.setTextMatrix(PAGE_REF_WIDTH - r.face().getWidthPoint(text, r.size()), r.size() * 0.3f);
+            t.showText(text);
+            t.endText();
+        }
+        pageRefs.clear();
     }
 
     /** Places prepared blocks on the pages, in order, from the current position. */
@@ -175,7 +207,7 @@ public final class Typesetter {
         if (item instanceof Group g) {
             for (Item i : g.items()) add(i);
         } else if (item instanceof Block b) {
-            if (b.content() instanceof Text t) write(t, b.outline());
+            if (b.content() instanceof Text t) write(t, b.outline(), b.pageRef());
             else if (b.content() instanceof Rule r) write(r);
             else write((PdfPTable) b.content(), b.outline());
         } else {
@@ -187,8 +219,11 @@ public final class Typesetter {
      * A bookmark (PDF outline entry) to the current position: made once the block's space above
      * and any page break before its first line are behind, so that it lands on the block's page.
      */
-    private void bookmark(String title) {
-        if (title == null) return;
+    private void bookmark(String outline) {
+        if (outline == null) return;
+        int cut = outline.indexOf('\u0000');
+        String title = cut < 0 ? outline : outline.substring(0, cut);
+        if (cut >= 0) anchorPages.putIfAbsent(outline.substring(cut + 1), writer.getPageNumber());
         float top = Math.min(y + 4, document.top() + 4);
         new PdfOutline(writer.getDirectContent().getRootOutline(), new PdfDestination(PdfDestination.FITH, top), title, false);
     }
@@ -206,6 +241,11 @@ public final class Typesetter {
 
     /** Writes a paragraph's lines, carrying on over the page foot line by line. */
     private void write(Text t, String outline) {
+        write(t, outline, null);
+    }
+
+    /** Writes a paragraph; where {@code pageRef} names an anchor, its page number goes at the right of the first line. */
+    private void write(Text t, String outline, String pageRef) {
         spaceBefore(t.before());
         PdfContentByte cb = writer.getDirectContent();
         float x0 = document.left() + t.left();
@@ -228,6 +268,17 @@ public final class Typesetter {
                 open = true;
             }
             writeLine(cb, line, x0, y, underlines);
+            if (pageRef != null) {
+                LineBreaker.Fragment f = line.fragments().get(0);
+                BaseFont face = fonts.face(f.style());
+                float size = f.style().fontSize;
+                com.lowagie.text.pdf.PdfTemplate template = cb.createTemplate(PAGE_REF_WIDTH, size * 1.3f);
+                pageRefs.add(new PageRef(template, pageRef, face, size));
+                endText(cb, underlines);
+                open = false;
+                cb.addTemplate(template, document.right() - PAGE_REF_WIDTH, y - size * 0.3f);
+                pageRef = null;
+            }
         }
         if (open) endText(cb, underlines);
         spaceAfter(t.after());
@@ -379,7 +430,7 @@ public final class Typesetter {
         if (s.hidden) return;
         if (s.breakBefore) out.add(new PageBreak());
         List<String[]> inner = with(ancestors, e);
-        String outline = e.tag().equals("h2") ? text(e).strip() : null;
+        String outline = e.tag().equals("h2") ? text(e).strip() + (e.attribute("id") == null ? "" : "\u0000" + e.attribute("id")) : null;
         if (e.tag().equals("table")) {
             Measured t = table(e, s, inner, width - indent);
             PdfPTable table = t.table();
@@ -413,7 +464,7 @@ public final class Typesetter {
             return;
         }
         if (inlineOnly(e)) {
-            Measured p = paragraph(e.children(), s, inner, indent + s.marginLeft + s.paddingLeft, s.textIndent, width, null, 0, flow);
+            Measured p = paragraph(e.children(), s, inner, indent + s.marginLeft + s.paddingLeft, s.textIndent, width - s.marginRight, null, 0, flow);
             if (p.element() == null) return;
             if (s.ruleWidth > 0) {
                 float leading = s.paddingBottom + s.ruleWidth + 1;
@@ -434,7 +485,7 @@ public final class Typesetter {
                 return;
             }
             out.add(new Block(spacing(p.element(), s.marginTop, s.marginBottom), p.height() + s.marginTop + s.marginBottom,
-                    s.breakAfterAvoid, outline));
+                    s.breakAfterAvoid, outline, e.attribute("data-page-of")));
             return;
         }
         List<Item> mine = new ArrayList<>();
