@@ -38,6 +38,7 @@ final class FaultPath {
     private final Q u0;
     private Q cmax;
     private Q cmin;
+    private SourceImpedance source;
     private final TermFormulas termFormulas;
 
     FaultPath(Installation inst, ReferenceData data, Q u, Q u0, TermFormulas termFormulas) {
@@ -54,6 +55,18 @@ final class FaultPath {
     /** The result for one circuit: its fault figures, its checks, and for a feeder the board it supplies. */
     record CircuitFault(Q prospective, Q zs, Q zsMax, Q iefMin, List<CheckResult> checks, BoardFault downstream,
                         List<CheckResult> boardChecks) {}
+
+    /**
+     * The source's impedance as a motor's starting current sees it: per phase (r, x) for a
+     * three-phase motor, the line-neutral loop for a single-phase one; without the corrections
+     * that belong to the maximum fault currents (K_T). basis says what it is made of.
+     */
+    record SourceImpedance(Q r, Q x, Q rLoop, Q xLoop, String basis) {}
+
+    /** The source impedance for the starting dip, set by {@link #origin}. */
+    SourceImpedance source() {
+        return source;
+    }
 
     private static Q rel(Q q, String symbol) {
         return q.as(symbol);
@@ -118,6 +131,7 @@ final class FaultPath {
                 rN = rTK;
                 xN = xTK;
                 ze = rel(z, "Z_e");
+                source = new SourceImpedance(rT, xT, rT, xT, "the transformer's R_T and X_T (per phase; the line-neutral loop of a Dyn transformer is the same, Z_0 ≈ Z_1), without the correction K_T of the maximum fault currents");
             } else {
                 Q skq = Given.input(t, id + "/SkQ", "Short-circuit power of the MV network at the primary", "S″_kQ", tr.networkFaultLevelMva(), "MVA",
                         "supply.source.transformer.network_fault_level_mva");
@@ -136,6 +150,9 @@ final class FaultPath {
                 Q rE = series(t, id, "/R_e", "Resistance of the source, earth-fault loop", "R_e", rq23, rT);
                 Q xE = series(t, id, "/X_e", "Reactance of the source, earth-fault loop", "X_e", xq23, xT);
                 ze = magnitude(t, id, "/Ze", "Z_e", rE, xE);
+                Q rSt = series(t, id, "/R_src_st", "Resistance of the source, motor starting", "R_Q + R_T", rq, rT);
+                Q xSt = series(t, id, "/X_src_st", "Reactance of the source, motor starting", "X_Q + X_T", xq, xT);
+                source = new SourceImpedance(rSt, xSt, rE, xE, "the MV network's Z_Qt and the transformer's R_T and X_T (per phase; the line-neutral loop takes 2/3 of the network's impedance), without the correction K_T of the maximum fault currents");
             }
         } else {
             Supply.Utility ut = (Supply.Utility) src;
@@ -165,6 +182,7 @@ final class FaultPath {
             Q xr = rel(new Q(id + "/xr", "X/R", x.value() / r.value(), Units.NONE), "X/R");
             rN = RESISTANCE_FROM_XR.evalAs("R_QN", t, id, "/R_QN", "", bind(Z, zqLoop), bind(XR, xr));
             xN = REACTANCE_FROM_XR.evalAs("X_QN", t, id, "/X_QN", "", bind(R, rN), bind(XR, xr));
+            source = new SourceImpedance(r, x, rN, xN, "the network's R_Q and X_Q (per phase) and its line-neutral loop R_QN and X_QN");
         }
         return atBoard(t, id, board, r, x, rN, xN, ze, ze);
     }

@@ -148,6 +148,17 @@ class BadInputTest {
         assertTrue(e.message().contains("did you mean 'copper'?"), e.message());
     }
 
+    /** IEC 60364-5-52:2009, Table B.52.1 (from memory): method D is D1 (in ducts in the ground) or D2 (direct in the ground); no plain D. */
+    @Test
+    void aMethodCutShortNamesEveryMethodItBegins() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("method: C", "method: D")));
+        assertEquals("circuits[0].installation.method", e.path());
+        assertEquals(15, e.line());
+        assertEquals(28, e.column());
+        assertTrue(e.message().contains("found 'D' (did you mean 'D1' or 'D2'?)"), e.message());
+        assertFalse(e.message().contains("'C'?"), e.message());
+    }
+
     @Test
     void malformedYamlGivesThePosition() {
         List<InputError> errors = errors("format: 1\nproject: {title: [unclosed\n");
