@@ -292,8 +292,12 @@ final class DropCalc {
         Q stLimit = Given.setting(st, id, "/st/limit", "Limit of the starting dip", "ΔU_st,max",
                 run.inst.basis().motorStartingLimitPercent(), Units.PERCENT,
                 "default of this program (common practice, no source)");
-        return new MotorStart(dip, Checks.check(st, id, "/st/check", "motor-starting", "Voltage dip while the motor starts", dip, stLimit,
-                "common practice, no source"));
+        CheckResult check = Checks.check(st, id, "/st/check", "motor-starting", "Voltage dip while the motor starts", dip, stLimit,
+                "common practice, no source");
+        if (!c.load().startingPowerFactor().given()) check = check.assuming(new Assumption(
+                "cos φ_st taken as " + Decimals.trim(c.load().startingPowerFactor().value()) + ", the program's default",
+                c.where().path() + ".load.starting_power_factor", false));
+        return new MotorStart(dip, check);
     }
 
     String describeCable(Cable cable) {

@@ -39,6 +39,7 @@ final class FaultPath {
     private Q cmax;
     private Q cmin;
     private SourceImpedance source;
+    private final List<Assumption> sourceAssumptions = new ArrayList<>();
     private final TermFormulas termFormulas;
 
     FaultPath(Installation inst, ReferenceData data, Q u, Q u0, TermFormulas termFormulas) {
@@ -62,6 +63,11 @@ final class FaultPath {
      * that belong to the maximum fault currents (K_T). basis says what it is made of.
      */
     record SourceImpedance(Q r, Q x, Q rLoop, Q xLoop, String basis) {}
+
+    /** What the source's figures rest on that the input does not give, set by {@link #origin}. */
+    List<Assumption> sourceAssumptions() {
+        return List.copyOf(sourceAssumptions);
+    }
 
     /** The source impedance for the starting dip, set by {@link #origin}. */
     SourceImpedance source() {
@@ -106,7 +112,13 @@ final class FaultPath {
         Q xN = null;
         Q ze;
         Supply.Source src = inst.supply().source();
+        sourceAssumptions.clear();
         if (src instanceof Supply.Transformer tr) {
+            if (tr.xrRatio() == null) sourceAssumptions.add(new Assumption("X/R of the transformer taken as 5 (fault levels, Z_e, the starting dip)",
+                    "supply.source.transformer.x_r_ratio", false));
+            if (tr.networkFaultLevelMva() == null) sourceAssumptions.add(new Assumption(
+                    "the MV network taken as infinite: the largest fault currents, but Z_e and the starting dip without the network's share",
+                    "supply.source.transformer.network_fault_level_mva", false));
             Q uk = Given.input(t, id + "/uk", "Transformer short-circuit impedance", "u_k", tr.impedancePercent(), Units.PERCENT,
                     "supply.source.transformer.impedance_percent");
             Q sr = Given.input(t, id + "/S_rT", "Transformer rating", "S_rT", tr.ratingKva(), Units.KVA, "supply.source.transformer.rating_kva");
@@ -156,6 +168,12 @@ final class FaultPath {
             }
         } else {
             Supply.Utility ut = (Supply.Utility) src;
+            if (ut.xrRatio() == null) sourceAssumptions.add(new Assumption("X/R of the network taken as 1 (fault levels, the starting dip)",
+                    "supply.source.utility.x_r_ratio", false));
+            if (ut.loopImpedanceOhm() == null) sourceAssumptions.add(new Assumption("Z_e taken as 2 · Z_Q, from the fault level",
+                    "supply.source.utility.loop_impedance_ohm", false));
+            if (ut.faultLevelKa() == null) sourceAssumptions.add(new Assumption("Z_Q taken as Z_e / 2, from the loop impedance (fault levels, the starting dip)",
+                    "supply.source.utility.fault_level_ka", false));
             Q xr = Given.setting(t, id, "/xr", "X/R of the network", "X/R", new Setting<>(ut.xrRatio() == null ? 1.0 : ut.xrRatio(),
                     ut.xrRatio() != null, "supply.source.utility.x_r_ratio"), Units.NONE, "assumption of this program: 1 (common practice, no source)");
             Q zq;
@@ -273,7 +291,10 @@ final class FaultPath {
 
         List<CheckResult> checks = new ArrayList<>();
         Disconnection d = disconnection(t, c, id, zs, in);
-        checks.add(d.check());
+        boolean gGTaken = c.device().kind() == DeviceKind.FUSE && c.device().disconnectionCurrentA() == null && d.check().determined();
+        checks.add(!gGTaken ? d.check() : d.check().assuming(new Assumption(
+                "the fuse taken as gG (IEC 60269-2, BS 88-2 systems E and G): its disconnection current from the published maximum Z_s",
+                c.where().path() + ".device.disconnection_current_a", false)));
         Q prospective = rel(phases == 3 ? at.ik3() : at.ik1(), phases == 3 ? "I_k3" : "I_k1");
         Withstand.Operation op = new Withstand.Operation(d.ia(), d.time(), d.idn());
         CheckResult breaking = withstand.breaking(t, c, id + "/bc", prospective);

@@ -159,6 +159,16 @@ class BadInputTest {
         assertFalse(e.message().contains("'C'?"), e.message());
     }
 
+    /** IEC 60364-4-43:2008, 434.5.1 (from memory): the back-up device is on the supply side. */
+    @Test
+    void aBackupDeviceMustBeUpstream() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("device: {kind: mcb, curve: B, rating_a: 6}",
+                "device: {kind: mcb, curve: B, rating_a: 6, backup: {upstream_circuit: F9, combined_breaking_capacity_ka: 25}}")));
+        assertEquals("circuits[0].device.backup.upstream_circuit", e.path());
+        assertEquals(16, e.line());
+        assertTrue(e.message().startsWith("'F9' is not upstream: circuit 'C1' starts at the origin board 'B0'"), e.message());
+    }
+
     @Test
     void malformedYamlGivesThePosition() {
         List<InputError> errors = errors("format: 1\nproject: {title: [unclosed\n");
