@@ -268,7 +268,7 @@ public final class NoteBuilder {
         String rating = ratingText(c);
         String governing = (c.pass() ? c.governingCheck()
                 : c.failing().stream().map(CheckResult::name).collect(Collectors.joining(", ")))
-                + (c.assumptionsBearing().isEmpty() ? "" : "; rests on assumptions (1.4)");
+                + (c.assumptionsBearing().isEmpty() ? "" : " (assumed, 1.4)");
         return new SummaryRow(c.id(), fromTo, load, fmt(c.designCurrent()), rating, cable, fmt(c.dropPercent()),
                 fmt(c.cumulativePercent()), c.limitPercent() == null ? "—" : fmt(c.limitPercent()),
                 c.pass() ? "PASS" : "FAIL", c.pass(), governing, section);

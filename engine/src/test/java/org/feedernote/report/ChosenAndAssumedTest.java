@@ -52,7 +52,7 @@ class ChosenAndAssumedTest {
         // cos φ_st = 0.3 is the program's default while starting (common practice, no source): the dip's verdict rests on it.
         assertTrue(terminal.contains("M1 motor-starting: cos φ_st taken as 0.3, the program's default (circuits[0].load.starting_power_factor would replace it)"),
                 terminal);
-        assertTrue(NoteBuilder.summaryRow(r.circuits().get(0), "3").governing().endsWith("rests on assumptions (1.4)"));
+        assertTrue(NoteBuilder.summaryRow(r.circuits().get(0), "3").governing().endsWith(" (assumed, 1.4)"));
         // The network's X/R is not given: 1 stands for it (the program's assumption; common practice, no source).
         assertTrue(terminal.contains("supply: X/R of the network taken as 1 (fault levels, the starting dip) (supply.source.utility.x_r_ratio would replace it)"),
                 terminal);
