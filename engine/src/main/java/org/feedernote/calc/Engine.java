@@ -53,7 +53,7 @@ public final class Engine {
         TraceRecorder root = new TraceRecorder();
         Run run = new Run(inst, root, record ? root : Trace.noop());
         run.calculate();
-        return new Result(inst, run.boardResults(), run.circuitResults(), root.toSection(), NOT_YET);
+        return new Result(inst, run.boardResults(), run.circuitResults(), root.toSection(), NOT_YET, run.faultPath.sourceAssumptions());
     }
 
     /** Evaluations of a circuit kept for reuse: enough for a step undone and for the final pass. */

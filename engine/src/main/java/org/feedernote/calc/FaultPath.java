@@ -38,6 +38,8 @@ final class FaultPath {
     private final Q u0;
     private Q cmax;
     private Q cmin;
+    private SourceImpedance source;
+    private final List<Assumption> sourceAssumptions = new ArrayList<>();
     private final TermFormulas termFormulas;
 
     FaultPath(Installation inst, ReferenceData data, Q u, Q u0, TermFormulas termFormulas) {
@@ -54,6 +56,23 @@ final class FaultPath {
     /** The result for one circuit: its fault figures, its checks, and for a feeder the board it supplies. */
     record CircuitFault(Q prospective, Q zs, Q zsMax, Q iefMin, List<CheckResult> checks, BoardFault downstream,
                         List<CheckResult> boardChecks) {}
+
+    /**
+     * The source's impedance as a motor's starting current sees it: per phase (r, x) for a
+     * three-phase motor, the line-neutral loop for a single-phase one; without the corrections
+     * that belong to the maximum fault currents (K_T). basis says what it is made of.
+     */
+    record SourceImpedance(Q r, Q x, Q rLoop, Q xLoop, String basis) {}
+
+    /** What the source's figures rest on that the input does not give, set by {@link #origin}. */
+    List<Assumption> sourceAssumptions() {
+        return List.copyOf(sourceAssumptions);
+    }
+
+    /** The source impedance for the starting dip, set by {@link #origin}. */
+    SourceImpedance source() {
+        return source;
+    }
 
     private static Q rel(Q q, String symbol) {
         return q.as(symbol);
@@ -93,7 +112,13 @@ final class FaultPath {
         Q xN = null;
         Q ze;
         Supply.Source src = inst.supply().source();
+        sourceAssumptions.clear();
         if (src instanceof Supply.Transformer tr) {
+            if (tr.xrRatio() == null) sourceAssumptions.add(new Assumption("X/R of the transformer taken as 5 (fault levels, Z_e, the starting dip)",
+                    "supply.source.transformer.x_r_ratio", false));
+            if (tr.networkFaultLevelMva() == null) sourceAssumptions.add(new Assumption(
+                    "the MV network taken as infinite: the largest fault currents, but Z_e and the starting dip without the network's share",
+                    "supply.source.transformer.network_fault_level_mva", false));
             Q uk = Given.input(t, id + "/uk", "Transformer short-circuit impedance", "u_k", tr.impedancePercent(), Units.PERCENT,
                     "supply.source.transformer.impedance_percent");
             Q sr = Given.input(t, id + "/S_rT", "Transformer rating", "S_rT", tr.ratingKva(), Units.KVA, "supply.source.transformer.rating_kva");
@@ -118,6 +143,7 @@ final class FaultPath {
                 rN = rTK;
                 xN = xTK;
                 ze = rel(z, "Z_e");
+                source = new SourceImpedance(rT, xT, rT, xT, "the transformer's R_T and X_T (per phase; the line-neutral loop of a Dyn transformer is the same, Z_0 ≈ Z_1), without the correction K_T of the maximum fault currents");
             } else {
                 Q skq = Given.input(t, id + "/SkQ", "Short-circuit power of the MV network at the primary", "S″_kQ", tr.networkFaultLevelMva(), "MVA",
                         "supply.source.transformer.network_fault_level_mva");
@@ -136,9 +162,18 @@ final class FaultPath {
                 Q rE = series(t, id, "/R_e", "Resistance of the source, earth-fault loop", "R_e", rq23, rT);
                 Q xE = series(t, id, "/X_e", "Reactance of the source, earth-fault loop", "X_e", xq23, xT);
                 ze = magnitude(t, id, "/Ze", "Z_e", rE, xE);
+                Q rSt = series(t, id, "/R_src_st", "Resistance of the source, motor starting", "R_Q + R_T", rq, rT);
+                Q xSt = series(t, id, "/X_src_st", "Reactance of the source, motor starting", "X_Q + X_T", xq, xT);
+                source = new SourceImpedance(rSt, xSt, rE, xE, "the MV network's Z_Qt and the transformer's R_T and X_T (per phase; the line-neutral loop takes 2/3 of the network's impedance), without the correction K_T of the maximum fault currents");
             }
         } else {
             Supply.Utility ut = (Supply.Utility) src;
+            if (ut.xrRatio() == null) sourceAssumptions.add(new Assumption("X/R of the network taken as 1 (fault levels, the starting dip)",
+                    "supply.source.utility.x_r_ratio", false));
+            if (ut.loopImpedanceOhm() == null) sourceAssumptions.add(new Assumption("Z_e taken as 2 · Z_Q, from the fault level",
+                    "supply.source.utility.loop_impedance_ohm", false));
+            if (ut.faultLevelKa() == null) sourceAssumptions.add(new Assumption("Z_Q taken as Z_e / 2, from the loop impedance (fault levels, the starting dip)",
+                    "supply.source.utility.fault_level_ka", false));
             Q xr = Given.setting(t, id, "/xr", "X/R of the network", "X/R", new Setting<>(ut.xrRatio() == null ? 1.0 : ut.xrRatio(),
                     ut.xrRatio() != null, "supply.source.utility.x_r_ratio"), Units.NONE, "assumption of this program: 1 (common practice, no source)");
             Q zq;
@@ -165,6 +200,7 @@ final class FaultPath {
             Q xr = rel(new Q(id + "/xr", "X/R", x.value() / r.value(), Units.NONE), "X/R");
             rN = RESISTANCE_FROM_XR.evalAs("R_QN", t, id, "/R_QN", "", bind(Z, zqLoop), bind(XR, xr));
             xN = REACTANCE_FROM_XR.evalAs("X_QN", t, id, "/X_QN", "", bind(R, rN), bind(XR, xr));
+            source = new SourceImpedance(r, x, rN, xN, "the network's R_Q and X_Q (per phase) and its line-neutral loop R_QN and X_QN");
         }
         return atBoard(t, id, board, r, x, rN, xN, ze, ze);
     }
@@ -242,7 +278,10 @@ final class FaultPath {
 
         List<CheckResult> checks = new ArrayList<>();
         Disconnection d = disconnection(t, c, id, zs, in);
-        checks.add(d.check());
+        boolean gGTaken = c.device().kind() == DeviceKind.FUSE && c.device().disconnectionCurrentA() == null && d.check().determined();
+        checks.add(!gGTaken ? d.check() : d.check().assuming(new Assumption(
+                "the fuse taken as gG (IEC 60269-2, BS 88-2 systems E and G): its disconnection current from the published maximum Z_s",
+                c.where().path() + ".device.disconnection_current_a", false)));
         Q prospective = rel(phases == 3 ? at.ik3() : at.ik1(), phases == 3 ? "I_k3" : "I_k1");
         Withstand.Operation op = new Withstand.Operation(d.ia(), d.time(), d.idn());
         CheckResult breaking = withstand.breaking(t, c, id + "/bc", prospective);

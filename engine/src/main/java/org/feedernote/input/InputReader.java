@@ -666,7 +666,14 @@ public final class InputReader {
                 num(d, "disconnection_current_a"), num(d, "residual_current_a"), num(d, "let_through_a2s"),
                 word(d, "protection", Protection.class, Protection.OVERLOAD_AND_FAULT),
                 word(d, "residual_type", ResidualType.class, ResidualType.GENERAL),
-                num(d, "long_time_a"), num(d, "short_time_a"), num(d, "short_time_delay_s"));
+                num(d, "long_time_a"), num(d, "short_time_a"), num(d, "short_time_delay_s"), backup(at(d, "backup")));
+    }
+
+    private Device.Backup backup(Node b) {
+        if (b == null) return null;
+        String upstream = str(at(b, "upstream_circuit"));
+        Double combined = num(b, "combined_breaking_capacity_ka");
+        return upstream == null || combined == null ? null : new Device.Backup(upstream, combined);
     }
 
     private Load load(Node l, String path, Cable cable, Basis basis) {
@@ -752,6 +759,37 @@ public final class InputReader {
         return found;
     }
 
+    /** A back-up device must be upstream: the device of a feeder on the path from the origin to the circuit's board. */
+    private void backupOnPath(List<Node> circuitNodes, Map<String, String> fedBy) {
+        Map<String, String> fromOf = new HashMap<>();
+        for (Node c : circuitNodes) {
+            String id = str(at(c, "id"));
+            if (id != null) fromOf.put(id, str(at(c, "from")));
+        }
+        for (int i = 0; i < circuitNodes.size(); i++) {
+            Node c = circuitNodes.get(i);
+            Node d = at(c, "device");
+            Node b = d == null ? null : at(d, "backup");
+            Node up = b == null ? null : at(b, "upstream_circuit");
+            String upstream = str(up);
+            if (upstream == null) continue;
+            String from = str(at(c, "from"));
+            List<String> path = new ArrayList<>();
+            for (String board = from; board != null && fedBy.containsKey(board) && path.size() <= fedBy.size(); board = fromOf.get(fedBy.get(board))) {
+                path.add(fedBy.get(board));
+            }
+            if (path.contains(upstream)) continue;
+            String where = "circuits[" + i + "].device.backup.upstream_circuit";
+            if (path.isEmpty()) {
+                error(up, where, "'" + upstream + "' is not upstream: circuit '" + str(at(c, "id")) + "' starts at the origin board '" + from
+                        + "', which no feeder of this input supplies; remove backup (the supply's own device is outside the input)");
+            } else {
+                error(up, where, "'" + upstream + "' is not a feeder on the path from the origin to board '" + from + "'"
+                        + Suggest.hint(upstream, path) + "; the feeders on the path: " + String.join(", ", path));
+            }
+        }
+    }
+
     private void topology(List<Board> boards, List<Circuit> circuits, List<Node> circuitNodes) {
         Map<String, Board> byId = new HashMap<>();
         boards.forEach(b -> byId.put(b.id(), b));
@@ -804,6 +842,7 @@ public final class InputReader {
                     "the boards form a loop: " + String.join(" ← ", loop) + "; every board must trace back to the origin"));
         }
         if (looped || !errors.isEmpty()) return;
+        backupOnPath(circuitNodes, fedBy);
         List<String> origins = boardIds.stream().filter(b -> !fedBy.containsKey(b)).toList();
         if (origins.size() > 1) {
             Board second = byId.get(origins.get(1));

@@ -190,7 +190,12 @@ public final class InputSchema {
                 // MCCB release settings: up to the largest frames; a delay up to the 1 s of selective breakers (common practice, no source).
                 opt("long_time_a", between("MCCB long-time (overload) current setting I_r in A, at most rating_a", 0.5, 6_300), "rating_a"),
                 opt("short_time_a", between("MCCB short-time pick-up current I_sd in A", 1, 200_000), "none"),
-                opt("short_time_delay_s", between("MCCB short-time delay t_sd in s", 0.01, 1), "none"));
+                opt("short_time_delay_s", between("MCCB short-time delay t_sd in s", 0.01, 1), "none"),
+                opt("backup", obj("back-up protection (IEC 60364-4-43, 434.5.1): an upstream device that, with this one, breaks the combined current the manufacturer states",
+                        req("upstream_circuit", id("id of the feeder, on the path from the origin to this circuit's board, whose device gives the back-up")),
+                        // The same ceiling as breaking_capacity_ka.
+                        req("combined_breaking_capacity_ka", upTo("the combination's breaking capacity in kA, from the manufacturer's back-up (cascading) data", 200))),
+                        "none (the device's own breaking capacity must reach the prospective fault current)"));
         Spec.Obj circuit = objOne("a circuit", List.of(List.of("load", "to")),
                 req("id", id("circuit id, unique across boards and circuits")),
                 opt("description", text("what the circuit is"), "empty"),

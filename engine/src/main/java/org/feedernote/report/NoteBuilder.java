@@ -142,7 +142,7 @@ public final class NoteBuilder {
                 ? "Every tabulated value this note uses was checked against a published copy of its table (Appendix A names each)."
                 : unverified.size() + " tabulated value" + (unverified.size() == 1 ? " this note uses was" : "s this note uses were")
                         + " recalled from the published standards and not yet checked against a published copy (listed in 1.5); check them against the current edition before relying on them.");
-        return new NoteView(cover, basis(inst), standards(), cautions, assumptions(inst.basis().impedance().value()), List.copyOf(unverified), summary, sections, docs, tableViews, others,
+        return new NoteView(cover, basis(inst), standards(), cautions, withRunAssumptions(assumptions(inst.basis().impedance().value()), result), List.copyOf(unverified), summary, sections, docs, tableViews, others,
                 listing, fileName(inst.sourceName()), fingerprint, shortPrint, p.status() == Status.DRAFT, engineVersion,
                 data.version(), running, changesSince, changes, layout.token(), layout.description(), CompactBuilder.boards(result),
                 cables.views(), contents);
@@ -239,6 +239,15 @@ public final class NoteBuilder {
                         : "Cable reactance is derived from the geometry (round conductors of the nominal area, IEC 60502-1 insulation thickness); shaped conductors and armour change it slightly.");
     }
 
+    /** The general assumptions, then those of this run that a verdict or a size rests on, each with the key that replaces it. */
+    static List<String> withRunAssumptions(List<String> general, Result result) {
+        List<String> lines = result.assumptionLines();
+        if (lines.isEmpty()) return general;
+        List<String> all = new ArrayList<>(general);
+        for (String line : lines) all.add("Resting on an assumption, not data: " + line + ".");
+        return List.copyOf(all);
+    }
+
     static List<BasisRow> basis(Installation inst) {
         Basis b = inst.basis();
         List<BasisRow> rows = new ArrayList<>();
@@ -284,12 +293,23 @@ public final class NoteBuilder {
         String load = circuit.isFeeder() ? "feeder" : circuit.load().kind().token() + ", " + c.connection();
         String cable = (circuit.cable().parallel() > 1 ? circuit.cable().parallel() + " × " : "")
                 + ReferenceData.sizeKey(circuit.cable().size().mm2()) + " / " + ReferenceData.sizeKey(circuit.cable().cpc().mm2());
-        String rating = circuit.device().ratingA() == null ? "—" : trim(circuit.device().ratingA());
-        String governing = c.pass() ? c.governingCheck()
-                : c.failing().stream().map(CheckResult::name).collect(Collectors.joining(", "));
+        String rating = ratingText(c);
+        String governing = (c.pass() ? c.governingCheck()
+                : c.failing().stream().map(CheckResult::name).collect(Collectors.joining(", ")))
+                + (c.assumptionsBearing().isEmpty() ? "" : " (assumed, 1.4)");
         return new SummaryRow(c.id(), fromTo, load, fmt(c.designCurrent()), rating, cable, fmt(c.dropPercent()),
                 fmt(c.cumulativePercent()), c.limitPercent() == null ? "—" : fmt(c.limitPercent()),
                 c.pass() ? "PASS" : "FAIL", c.pass(), governing, section);
+    }
+
+    /**
+     * The device's rated current as given, or as the program chose it for rating_a: auto (marked
+     * so); "—" only where the result has none.
+     */
+    static String ratingText(CircuitResult c) {
+        Double given = c.circuit().device().ratingA();
+        if (given != null) return trim(given);
+        return c.rating() == null ? "—" : trim(c.rating().value()) + " (chosen)";
     }
 
     static String fmt(Q q) {

@@ -148,6 +148,27 @@ class BadInputTest {
         assertTrue(e.message().contains("did you mean 'copper'?"), e.message());
     }
 
+    /** IEC 60364-5-52:2009, Table B.52.1 (from memory): method D is D1 (in ducts in the ground) or D2 (direct in the ground); no plain D. */
+    @Test
+    void aMethodCutShortNamesEveryMethodItBegins() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("method: C", "method: D")));
+        assertEquals("circuits[0].installation.method", e.path());
+        assertEquals(15, e.line());
+        assertEquals(28, e.column());
+        assertTrue(e.message().contains("found 'D' (did you mean 'D1' or 'D2'?)"), e.message());
+        assertFalse(e.message().contains("'C'?"), e.message());
+    }
+
+    /** IEC 60364-4-43:2008, 434.5.1 (from memory): the back-up device is on the supply side. */
+    @Test
+    void aBackupDeviceMustBeUpstream() {
+        InputError e = only(doc("  - id: B0", GOOD_CIRCUIT.replace("device: {kind: mcb, curve: B, rating_a: 6}",
+                "device: {kind: mcb, curve: B, rating_a: 6, backup: {upstream_circuit: F9, combined_breaking_capacity_ka: 25}}")));
+        assertEquals("circuits[0].device.backup.upstream_circuit", e.path());
+        assertEquals(16, e.line());
+        assertTrue(e.message().startsWith("'F9' is not upstream: circuit 'C1' starts at the origin board 'B0'"), e.message());
+    }
+
     @Test
     void malformedYamlGivesThePosition() {
         List<InputError> errors = errors("format: 1\nproject: {title: [unclosed\n");
