@@ -1,8 +1,9 @@
 package org.feedernote.data;
 
 import static org.feedernote.data.TableCells.confirmed;
+import static org.feedernote.data.TableCells.recalled;
 import static org.feedernote.data.TableCells.rows;
-import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 
@@ -21,9 +22,10 @@ class InsulationThicknessTableTest {
     @Test
     void pvcIsTable5() {
         rows(T, SIZES);
-        assertFalse(T.ref().fromMemory(), "every cell was confirmed");
+        assertTrue(T.ref().fromMemory(), "the PVC column is recalled");
+        // From memory: agrees with a copy whose address was not kept (TABLES), which cannot be cited.
         double[] pvc = {0.8, 0.8, 1.0, 1.0, 1.0, 1.0, 1.2, 1.2, 1.4, 1.4, 1.6, 1.6, 1.8, 2.0, 2.2, 2.4, 2.6, 2.8, 2.8};
-        for (int i = 0; i < SIZES.length; i++) confirmed(T, SIZES[i], "pvc", pvc[i], TABLES + ", PVC/A (mm)");
+        for (int i = 0; i < SIZES.length; i++) recalled(T, SIZES[i], "pvc", pvc[i]);
     }
 
     @Test
@@ -34,6 +36,11 @@ class InsulationThicknessTableTest {
             String also = s <= 95 ? "; also " + LS_VINA : "";
             if (s >= 50) also += "; also " + ELAND;
             confirmed(T, SIZES[i], "xlpe", xlpe[i], TABLES + ", XLPE (mm)" + also);
+        }
+        // The sizes between the two copies that carry an address: 1.5 to 95 (LS Vina) and 50 to 630 (Eland) cover every row.
+        for (String size : SIZES) {
+            double s = Double.parseDouble(size);
+            assertTrue(s <= 95 || s >= 50, size);
         }
     }
 }
