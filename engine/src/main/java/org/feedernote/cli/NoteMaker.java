@@ -14,6 +14,7 @@ import org.feedernote.model.Installation;
 import org.feedernote.report.NoteBuilder;
 import org.feedernote.report.NoteLayout;
 import org.feedernote.report.NoteRenderer;
+import org.feedernote.report.figure.NoteFigures;
 import org.feedernote.report.pdf.DeflatingFile;
 import org.feedernote.report.view.NoteView;
 import org.feedernote.trace.TraceJson;
@@ -74,10 +75,11 @@ final class NoteMaker {
              })) {
             progress.stage("preparing the note");
             NoteView view = built(building);
+            NoteFigures figures = NoteFigures.of(result);
             progress.stage("compressing the trace");
             deflated.finish();
             List<List<String>> unprintable = new java.util.ArrayList<>(1);
-            try (Files.Staged note = Files.stageFile(pdf, tmp -> unprintable.add(renderer.write(view, inst.project().date(), tmp,
+            try (Files.Staged note = Files.stageFile(pdf, tmp -> unprintable.add(renderer.write(view, figures, inst.project().date(), tmp,
                     progress, attachments(inst, NoteRenderer.Attachment.deflated(org.feedernote.archive.NoteArchive.TRACE_NAME,
                             "Calculation trace", deflated), templates, changesSince, changes))))) {
                 // The pair is replaced together: a run stopped before here leaves the previous note

@@ -31,7 +31,7 @@ record NoteFixture(Installation input, Result result, NoteView view, String trac
         String fingerprint = Canonical.fingerprint(inst.canonicalJson(), Version.engine(), data.version());
         String trace = TraceJson.write(result.trace(), Version.engine(), data.version(), fingerprint);
         NoteView view = NoteBuilder.build(result, data, fingerprint, Version.engine());
-        byte[] pdf = new NoteRenderer(null).pdf(view, inst.project().date(),
+        byte[] pdf = new NoteRenderer(null).pdf(view, org.feedernote.report.figure.NoteFigures.of(result), inst.project().date(),
                 new NoteRenderer.Attachment("input.canonical.json", "Design input (canonical form)", inst.canonicalJson().getBytes(StandardCharsets.UTF_8)),
                 new NoteRenderer.Attachment("trace.json", "Calculation trace", trace.getBytes(StandardCharsets.UTF_8)));
         return new NoteFixture(inst, result, view, trace, pdf);

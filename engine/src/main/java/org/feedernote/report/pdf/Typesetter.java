@@ -47,6 +47,9 @@ public final class Typesetter {
     private final PdfWriter writer;
     private final float bodyWidth;
     private final float bodyHeight;
+    /** The figures templates may place, by name, and how their text reaches the PDF's fonts. */
+    private final java.util.Map<String, Figure> figures;
+    private final com.lowagie.text.pdf.FontMapper figureFonts;
     /** Where the next block begins on the current page (points from the page's foot). */
     private float y;
     /** Nothing placed on the current page yet: space above the first block is dropped, as at a page top. */
@@ -83,10 +86,20 @@ public final class Typesetter {
     /** A paragraph of the flow broken into lines, {@code left} points in from the body's edge. */
     private record Text(List<LineBreaker.Line> lines, float left, float leading, float before, float after) {}
 
+    /** A figure, {@code left} points in from the body's edge, drawn at {@code width} × {@code height}. */
+    private record Picture(Figure figure, String name, float left, float width, float height, float before, float after) {}
+
     /** A rule under a heading: its baseline {@code leading} below the block above. */
     private record Rule(float left, float leading, float lineWidth, java.awt.Color color, float after) {}
 
     public Typesetter(Fonts fonts, StyleSheet sheet, Document document, PdfWriter writer) {
+        this(fonts, sheet, document, writer, java.util.Map.of());
+    }
+
+    /** @param figures what {@code <div class="figure" data-figure="name"/>} in the markup names */
+    public Typesetter(Fonts fonts, StyleSheet sheet, Document document, PdfWriter writer, java.util.Map<String, Figure> figures) {
+        this.figures = java.util.Map.copyOf(figures);
+        this.figureFonts = FigureFonts.mapper(fonts);
         this.fonts = fonts;
         this.styles = new Style.Resolver(sheet);
         this.document = document;
@@ -189,7 +202,12 @@ public final class Typesetter {
             }
             float needed = height(item);
             boolean keepWithNext = item instanceof Block b ? b.keepWithNext() : ((Group) item).keepWithNext();
-            if (keepWithNext && i + 1 < items.size()) needed += Math.min(height(items.get(i + 1)), KEEP_WITH_NEXT_CAP);
+            if (keepWithNext && i + 1 < items.size()) {
+                // A heading goes with the whole of a figure, which is never split.
+                Item next = items.get(i + 1);
+                boolean picture = next instanceof Block nb && nb.content() instanceof Picture;
+                needed += picture ? Math.min(height(next), bodyHeight - needed) : Math.min(height(next), KEEP_WITH_NEXT_CAP);
+            }
             if ((item instanceof Group || keepWithNext) && needed > remaining() && needed <= bodyHeight) newPage();
             add(item);
         }
@@ -209,6 +227,7 @@ public final class Typesetter {
         } else if (item instanceof Block b) {
             if (b.content() instanceof Text t) write(t, b.outline(), b.pageRef());
             else if (b.content() instanceof Rule r) write(r);
+            else if (b.content() instanceof Picture p) write(p);
             else write((PdfPTable) b.content(), b.outline());
         } else {
             newPage();
@@ -350,6 +369,30 @@ public final class Typesetter {
     }
 
     /**
+     * Draws a figure where it fits whole: on this page, else at the top of the next; one taller
+     * than a page is drawn smaller to fit (still vector, so sharp at any zoom). Drawn into a form
+     * XObject through OpenPDF's Graphics2D, its text in the note's embedded fonts.
+     */
+    private void write(Picture p) {
+        spaceBefore(p.before());
+        float scale = p.height() > bodyHeight ? bodyHeight / p.height() : 1f;
+        float h = p.height() * scale;
+        if (h > remaining() + 0.01f) newPage();
+        PdfContentByte cb = writer.getDirectContent();
+        com.lowagie.text.pdf.PdfTemplate template = cb.createTemplate(p.width(), p.height());
+        java.awt.Graphics2D g = template.createGraphics(p.width(), p.height(), figureFonts);
+        try {
+            p.figure().draw(g, p.width(), p.height());
+        } finally {
+            g.dispose();
+        }
+        cb.addTemplate(template, scale, 0, 0, scale, document.left() + p.left(), y - h);
+        y -= h;
+        pageEmpty = false;
+        spaceAfter(p.after());
+    }
+
+    /**
      * Places a table's rows: as many whole rows as fit on each page, the header rows again at the
      * top of every page the table continues on; a row that does not fit begins the next page and
      * is split only when it is taller than a page; a table that keeps together starts a new page
@@ -429,6 +472,10 @@ public final class Typesetter {
         Style s = styles.resolve(parent, ancestors, e.tag(), e.classes(), e.style());
         if (s.hidden) return;
         if (s.breakBefore) out.add(new PageBreak());
+        if (e.tag().equals("div") && e.attribute("data-figure") != null) {
+            out.add(figure(e, s, indent, width, flow));
+            return;
+        }
         List<String[]> inner = with(ancestors, e);
         String outline = e.tag().equals("h2") ? text(e).strip() + (e.attribute("id") == null ? "" : "\u0000" + e.attribute("id")) : null;
         if (e.tag().equals("table")) {
@@ -493,6 +540,21 @@ public final class Typesetter {
         spaceAround(mine, s.marginTop, s.marginBottom);
         if (s.breakInsideAvoid) out.add(new Group(mine, s.breakAfterAvoid));
         else out.addAll(mine);
+    }
+
+    /** A figure block: {@code <div class="figure" data-figure="name"/>}, the name one of {@link #figures}. */
+    private Block figure(Markup.Element e, Style s, float indent, float width, boolean flow) {
+        String name = e.attribute("data-figure");
+        Figure f = figures.get(name);
+        if (f == null) {
+            throw new IllegalArgumentException("the template places the figure \"" + name + "\", which this note does not have (it has "
+                    + (figures.isEmpty() ? "none" : String.join(", ", new java.util.TreeSet<>(figures.keySet()))) + ")");
+        }
+        if (!flow) throw new IllegalArgumentException("the figure \"" + name + "\" is placed inside a table or box; place it in the flow");
+        float left = indent + s.marginLeft;
+        float w = width - left - s.marginRight;
+        float h = f.height(w);
+        return new Block(new Picture(f, name, left, w, h, s.marginTop, s.marginBottom), h + s.marginTop + s.marginBottom, s.breakAfterAvoid, null);
     }
 
     /** Children of a block: runs of inline content become anonymous paragraphs, blocks recurse. */
