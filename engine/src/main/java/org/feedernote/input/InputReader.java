@@ -297,7 +297,8 @@ public final class InputReader {
                 setting(b, path, "voltage_drop_method", DropMethod.class, DropMethod.APPROXIMATE),
                 setting(b, path, "voltage_factor_max", 1.10), setting(b, path, "voltage_factor_min", 0.95),
                 num(b, "earth_electrode_resistance_ohm"),
-                setting(b, path, "impedance", ImpedanceBasis.class, ImpedanceBasis.DERIVED));
+                setting(b, path, "impedance", ImpedanceBasis.class, ImpedanceBasis.DERIVED),
+                setting(b, path, "minimum_size_mm2", Basis.DEFAULT_MINIMUM_SIZE_MM2));
     }
 
     private Supply supply(Node s) {
@@ -360,6 +361,15 @@ public final class InputReader {
         if (cable != null && conditions != null && (load != null || to != null)) {
             cable = cpcConstruction(at(c, "cable"), path + ".cable", cable, conditions.method(), to != null ? (phase != null ? 1 : 3) : load.phases(),
                     load != null && load.kind() == LoadKind.MOTOR);
+        }
+        // An invalid basis.minimum_size_mm2 is reported where it stands; the sizes are not held to it.
+        boolean minimumValid = ReferenceData.standardSizes().contains(basis.minimumSizeMm2().value()) && basis.minimumSizeMm2().value() <= 16;
+        if (cable != null && !cable.size().auto() && minimumValid && cable.size().mm2() < basis.minimumSizeMm2().value() - 1e-9) {
+            error(at(at(c, "cable"), "size_mm2"), path + ".cable.size_mm2", StructureValidator.num(cable.size().mm2())
+                    + " mm² is below the smallest line conductor of the design basis, " + StructureValidator.num(basis.minimumSizeMm2().value())
+                    + " mm² (basis.minimum_size_mm2" + (basis.minimumSizeMm2().given() ? "" : ", by default: " + Basis.MINIMUM_SIZE_SOURCE)
+                    + "); give " + StructureValidator.num(basis.minimumSizeMm2().value()) + " mm² or more, or, where the applicable wiring rules "
+                    + "allow a smaller conductor for this circuit (BS 7671 Table 52.3: 1.0 mm² copper for lighting), set basis.minimum_size_mm2");
         }
         if (cable != null && conditions != null) methodSuitsCable(at(c, "installation"), path + ".installation.method", conditions.method(), cable);
         if (conditions != null) {
@@ -541,7 +551,7 @@ public final class InputReader {
                     } else if (!ReferenceData.standard().hasResistance(cable.conductor(), teCpc)) {
                         error(at(c, "size_mm2"), join(path, "size_mm2"), "a " + StructureValidator.num(size.mm2()) + " mm² twin-and-earth cable has a "
                                 + StructureValidator.num(teCpc) + " mm² cpc (BS 6004), whose resistance the packaged table (IEC 60228) does not give; "
-                                + "choose 2.5 mm² or more");
+                                + "choose a larger cable");
                     } else if (!cpc.auto() && cpc.mm2() != teCpc) {
                         error(at(c, "cpc_mm2"), cpcPath, "a " + StructureValidator.num(size.mm2()) + " mm² twin-and-earth cable has a "
                                 + StructureValidator.num(teCpc) + " mm² cpc (BS 6004); found " + StructureValidator.num(cpc.mm2()) + ": give auto or "

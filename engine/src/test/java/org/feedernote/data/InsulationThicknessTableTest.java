@@ -21,7 +21,10 @@ class InsulationThicknessTableTest {
 
     @Test
     void pvcIsTable5() {
-        rows(T, SIZES);
+        String[] all = new String[SIZES.length + 1];
+        all[0] = "1";
+        System.arraycopy(SIZES, 0, all, 1, SIZES.length);
+        rows(T, all);
         assertTrue(T.ref().fromMemory(), "the PVC column is recalled");
         // From memory: agrees with a copy whose address was not kept (TABLES), which cannot be cited.
         double[] pvc = {0.8, 0.8, 1.0, 1.0, 1.0, 1.0, 1.2, 1.2, 1.4, 1.4, 1.6, 1.6, 1.8, 2.0, 2.2, 2.4, 2.6, 2.8, 2.8};
@@ -42,5 +45,12 @@ class InsulationThicknessTableTest {
             double s = Double.parseDouble(size);
             assertTrue(s <= 95 || s >= 50, size);
         }
+    }
+
+    @Test
+    void theOneSquareMillimetreRowIsAnAssumptionFlaggedAsRecalled() {
+        // IEC 60502-1 starts at 1.5 mm²; the row repeats the 1.5 mm² thicknesses (an assumption of this program, no source).
+        recalled(T, "1", "pvc", 0.8);
+        recalled(T, "1", "xlpe", 0.7);
     }
 }
