@@ -127,6 +127,8 @@ public final class NoteBuilder {
             Matcher m = DOCUMENT.matcher(standard);
             while (m.find()) documents.add(m.group());
         }
+        // A document cited both with and without its date is listed once, dated.
+        documents.removeIf(d -> d.indexOf(':') < 0 && documents.stream().anyMatch(o -> o.startsWith(d + ":")));
         List<SourceView> docs = documents.stream().map(d -> new SourceView(d, documentTitle(d), false)).toList();
         List<SourceView> tableViews = tables.values().stream()
                 // The compact note names each table; the full working adds the record of the copies it was checked against.
@@ -274,6 +276,7 @@ public final class NoteBuilder {
         rows.add(row("Disconnection time, final circuits", b.disconnectionTimeFinalS(), " s", "IEC 60364-4-41:2005, Table 41.1"));
         rows.add(row("Disconnection time, distribution circuits", b.disconnectionTimeDistributionS(), " s", "IEC 60364-4-41:2005, 411.3.2.3"));
         rows.add(row("Motor-starting dip limit", b.motorStartingLimitPercent(), " %", "common practice, no source"));
+        rows.add(row("Smallest conductor size", b.minimumSizeMm2(), " mm²", "IEC 60364-5-52:2009, Table 52.2 (from memory)"));
         return rows;
     }
 

@@ -50,7 +50,7 @@ import org.feedernote.report.pdf.FigureFonts;
 public final class DropProfile implements Figure {
     /** How many of the worst paths are numbered and named. */
     static final int LABELLED = 3;
-    private static final float ASPECT = 0.66f;
+    private static final float ASPECT = 0.5f;
 
     private static final Color[] WORST = {new Color(0x00, 0x00, 0x00), new Color(0x1f, 0x4e, 0x9a), new Color(0x8a, 0x3b, 0x00)};
     private static final float[][] DASHES = {null, {5f, 2.5f}, {1.5f, 1.5f}};
