@@ -124,7 +124,7 @@ final class CompactBuilder {
     }
 
     /** Characters of plain text that fit half the width of a block's line (6.8 pt sans, about 72 mm). */
-    static final int HALF_LINE = 62;
+    static final int HALF_LINE = 70;
 
     /** Lines in rows: two consecutive short lines side by side, every other line alone. */
     static List<List<LineView>> rows(List<LineView> lines) {
@@ -198,7 +198,7 @@ final class CompactBuilder {
     static String origin(Step.Input in) {
         return switch (in.origin()) {
             case GIVEN -> "given: " + CIRCUIT_KEY.matcher(in.keyPath()).replaceFirst("");
-            case DEFAULT -> "default (" + CIRCUIT_KEY.matcher(in.keyPath()).replaceFirst("") + " not given): " + shortReference(in.reference());
+            case DEFAULT -> "default, " + CIRCUIT_KEY.matcher(in.keyPath()).replaceFirst("") + " not given: " + shortReference(in.reference());
             case DERIVED -> shortReference(in.reference());
         };
     }
@@ -207,7 +207,7 @@ final class CompactBuilder {
     static LineView line(Step step, String number, NoteBuilder.Context cx) {
         StepView v = NoteBuilder.step(step, number, cx);
         String quantity = v.title() + (v.form().isEmpty() ? "" : " <i>" + v.form() + "</i>");
-        String reference = cx.math(shortReference(referenceText(step)));
+        String reference = cx.math(referenceText(step));
         return switch (v.kind()) {
             case "formula" -> new LineView(number, quantity, v.symbolicHtml() + " " + v.substitutedHtml() + " " + v.resultHtml(), reference, false);
             case "input" -> new LineView(number, quantity, v.symbolicHtml(), cx.math(origin((Step.Input) step)), false);
@@ -218,12 +218,58 @@ final class CompactBuilder {
         };
     }
 
-    /** The plain text of a step's reference: for a lookup its table, row and column and whether it is recalled. */
+    /**
+     * A step's reference as the compact block gives it: for a lookup the document and table (without
+     * its edition and glosses: Appendix A gives both), the row and column, and whether the cell is
+     * recalled; for any other step the clause ({@link #clause}).
+     */
     private static String referenceText(Step step) {
         if (step instanceof Step.Lookup l) {
-            return l.table().citation() + " — " + l.row() + ", " + l.column() + (l.table().fromMemory() ? " (from memory)" : "");
+            String table = gloss(EDITION.matcher(l.table().table()).replaceAll(""));
+            return l.table().source() + ", " + table + " — " + l.row() + ", " + l.column() + (l.table().fromMemory() ? " (from memory)" : "");
         }
-        return step.reference() == null ? "" : step.reference();
+        return clause(step.reference());
+    }
+
+    /** Where in a document: a table, annex, equation or figure, or a numbered clause. */
+    private static final Pattern LOCATOR = Pattern.compile("\\G[:\\d]*[,\\s]*(?:\\((?:edition|[a-z]+ edition)[^)]*\\)[,\\s]*)?"
+            + "((?:Table|Tables|Annex|eq\\.|Figure|Appendix)\\s*[A-Z0-9][\\w.()]*|\\d+(?:\\.\\d+)+)");
+
+    /**
+     * The clause a reference cites, shortened: each document named (number and year) with the
+     * table, annex, equation or clause that follows it, and the reference's standing (common
+     * practice, from memory) where it says so. A reference that cites no document keeps only its
+     * standing, or nothing: the full working gives it whole.
+     */
+    static String clause(String reference) {
+        if (reference == null || reference.isEmpty()) return "";
+        StringBuilder out = new StringBuilder();
+        Matcher doc = NoteBuilder.DOCUMENT.matcher(reference);
+        int cited = 0;
+        while (doc.find() && cited < 2) {
+            if (cited++ > 0) out.append(" / ");
+            out.append(doc.group());
+            Matcher where = LOCATOR.matcher(reference);
+            where.region(doc.end(), reference.length());
+            if (where.find()) out.append(", ").append(where.group(1));
+        }
+        String lower = reference.toLowerCase(java.util.Locale.ROOT);
+        List<String> standing = new ArrayList<>();
+        if (lower.contains("common practice")) standing.add("common practice");
+        if (lower.contains("no source")) standing.add("no source");
+        if (lower.contains("from memory") || lower.contains("recalled")) standing.add("from memory");
+        if (lower.contains("assumption")) standing.add("assumption");
+        if (lower.contains("manufacturer")) standing.add("manufacturer's data govern");
+        if (!standing.isEmpty()) out.append(out.length() == 0 ? "" : "; ").append(String.join(", ", standing));
+        return out.toString();
+    }
+
+    private static String gloss(String text) {
+        Matcher m = GLOSS.matcher(text);
+        StringBuilder out = new StringBuilder();
+        while (m.find()) m.appendReplacement(out, STANDING.matcher(m.group()).find() ? Matcher.quoteReplacement(m.group()) : "");
+        m.appendTail(out);
+        return out.toString();
     }
 
     /**

@@ -27,7 +27,8 @@ class NoteLayoutTest {
 
     @BeforeAll
     static void render() throws Exception {
-        NoteFixture note = NoteFixture.of(Fixtures.inputs().resolve("sports-hall.yaml"));
+        // The full working: its steps have headings of their own (the compact form is CompactNoteTest's).
+        NoteFixture note = NoteFixture.of(Fixtures.inputs().resolve("sports-hall.yaml"), NoteLayout.FULL);
         pages = new ArrayList<>();
         bookmarks = new ArrayList<>();
         try (PDDocument doc = Loader.loadPDF(note.pdf())) {

@@ -460,7 +460,7 @@ public final class SingleLineDiagram {
             float after = text(g, boardFont, board.id(), x + 6, top + 11.2f);
             if (!desc.isEmpty()) text(g, label, desc, after + 6, top + 11);
             String figures = "ΔU " + Labels.percent(board.dropPercent()) + "   I_k max " + NumberFormatPolicy.number(board.faultKa().value(), Units.KA)
-                    + " kA   Z at board " + NumberFormatPolicy.number(board.loopImpedance().value(), Units.OHM) + " Ω";
+                    + " kA   Z_e " + NumberFormatPolicy.number(board.loopImpedance().value(), Units.OHM) + " Ω";
             g.setColor(QUIET);
             text(g, small, figures, x + w + 6, top + 10.5f);
             g.setColor(INK);
