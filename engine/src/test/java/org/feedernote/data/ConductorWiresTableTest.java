@@ -14,9 +14,9 @@ class ConductorWiresTableTest {
 
     @Test
     void upTo240SquareMillimetresTheCopysCounts() {
-        rows(T, "1.5", "2.5", "4", "6", "10", "16", "25", "35", "50", "70", "95", "120", "150", "185", "240", "300", "400", "500",
+        rows(T, "1", "1.5", "2.5", "4", "6", "10", "16", "25", "35", "50", "70", "95", "120", "150", "185", "240", "300", "400", "500",
                 "630");
-        String[] seven = {"1.5", "2.5", "4", "6", "10", "16", "25", "35"};
+        String[] seven = {"1", "1.5", "2.5", "4", "6", "10", "16", "25", "35"};
         for (String s : seven) confirmed(T, s, "wires", 7, COPY);
         for (String s : new String[] {"50", "70", "95"}) confirmed(T, s, "wires", 19, COPY);
         for (String s : new String[] {"120", "150", "185", "240"}) confirmed(T, s, "wires", 37, COPY);

@@ -43,10 +43,10 @@ class CompactNoteTest {
         }
     }
 
-    /** Page height (A4) and the body's top and foot, from the top of the page (note.css: 20 mm and 17 mm margins). */
+    /** Page height (A4) and the body's top and foot, from the top of the page (note.css: 16 mm and 15 mm margins). */
     static final double PAGE = 841.89;
-    static final double BODY_TOP = 20 * 72 / 25.4;
-    static final double BODY_FOOT = PAGE - 17 * 72 / 25.4;
+    static final double BODY_TOP = 16 * 72 / 25.4;
+    static final double BODY_FOOT = PAGE - 15 * 72 / 25.4;
 
     /** Per page (from 0), how far down the page its lowest line of body text sits (points from the top). */
     static double[] lowestLines(byte[] pdf) throws Exception {
