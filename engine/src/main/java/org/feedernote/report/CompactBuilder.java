@@ -120,11 +120,11 @@ final class CompactBuilder {
         }
         String subtitle = s.subtitle() == null ? "" : s.subtitle();
         return new CompactSectionView(number, "s-" + number, s.title(), cx.math(s.title()), cx.math(subtitle), false,
-                inputs, groups, checks);
+                inputRows(inputs), groups, checks);
     }
 
-    /** Characters of plain text that fit half the width of a block's line (6.8 pt sans, about 72 mm). */
-    static final int HALF_LINE = 70;
+    /** Characters of plain text that fit half a block line (6.3 pt sans in about 73 mm). */
+    static final int HALF_LINE = 64;
 
     /** Lines in rows: two consecutive short lines side by side, every other line alone. */
     static List<List<LineView>> rows(List<LineView> lines) {
@@ -139,6 +139,25 @@ final class CompactBuilder {
             }
         }
         return rows;
+    }
+
+    /** Inputs in rows: two consecutive short ones side by side, every other one alone. */
+    static List<List<InputRow>> inputRows(List<InputRow> inputs) {
+        List<List<InputRow>> rows = new ArrayList<>();
+        for (int i = 0; i < inputs.size(); i++) {
+            if (i + 1 < inputs.size() && fitsHalf(inputs.get(i)) && fitsHalf(inputs.get(i + 1))) {
+                rows.add(List.of(inputs.get(i), inputs.get(i + 1)));
+                i++;
+            } else {
+                rows.add(List.of(inputs.get(i)));
+            }
+        }
+        return rows;
+    }
+
+    private static boolean fitsHalf(InputRow in) {
+        int origin = in.origin().isEmpty() ? 0 : plain(in.origin()).length() + 3;
+        return plain(in.quantity()).length() + plain(in.value()).length() + 2 + origin * 0.92 <= HALF_LINE;
     }
 
     private static boolean fitsHalf(LineView l) {

@@ -644,6 +644,9 @@ public final class Typesetter {
         if (runs.isEmpty() && right.isEmpty() && marker == null) return new Measured(null, 0);
         float lineWidth = width - indentLeft;
         if (flow) {
+            // Tab stops are measured from where the first line begins: a hanging indent (a negative
+            // text-indent) moves them with it.
+            if (firstIndent != 0) tabs.replaceAll(t -> t + firstIndent);
             List<LineBreaker.Line> lines = LineBreaker.lines(fonts, runs, right, tabs, lineWidth, firstIndent, marker, markerWidth, s.align);
             return new Measured(new Text(lines, indentLeft, s.leading(), 0, 0), lines.size() * s.leading());
         }

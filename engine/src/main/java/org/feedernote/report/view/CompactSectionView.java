@@ -3,13 +3,13 @@ package org.feedernote.report.view;
 import java.util.List;
 
 /**
- * A worked section as one compact block: the inputs as a table, then every other step in one line
+ * A worked section as one compact block: the inputs (two short ones to a line), then every other step in one line
  * (grouped under the sub-section titles of the full working, numbered as there), then the checks as
  * a table. The cable's impedance, where the circuit has one, is given once per distinct cable in the
  * cable-data section and referred to by {@code cableRef}. Every text field is escaped markup.
  */
 public record CompactSectionView(String number, String anchor, String title, String titleHtml, String subtitleHtml, boolean newPage,
-                                 List<InputRow> inputs, List<LineGroup> groups, List<CheckRow> checks) implements WorkedSection {
+                                 List<List<InputRow>> inputs, List<LineGroup> groups, List<CheckRow> checks) implements WorkedSection {
     @Override public String template() {
         return "compact.ftlh";
     }
