@@ -30,7 +30,7 @@ import org.feedernote.report.NoteRenderer;
 final class NoteCommand implements Callable<Integer> {
     @Spec CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "INPUT", description = "design input, YAML or JSON (format 1)")
+    @Parameters(index = "0", paramLabel = "INPUT", description = "design input (format 1): YAML, JSON, an .xlsx workbook, or CSV files (a folder, or one of its files)")
     Path input;
 
     @Option(names = {"-o", "--output"}, paramLabel = "DIR", description = "folder to write into (default: the current folder)")
@@ -38,6 +38,9 @@ final class NoteCommand implements Callable<Integer> {
 
     @Option(names = "--templates", paramLabel = "DIR", description = "a folder with a copy of the note templates (every file of report-templates) to use instead of the packaged ones")
     Path templates;
+
+    @Option(names = "--xlsx", description = "also write the result schedule as a workbook beside the PDF (<reference>-<revision>.xlsx)")
+    boolean xlsx;
 
     @Option(names = "--force", description = "replace an existing note that holds a different calculation")
     boolean force;
@@ -162,6 +165,11 @@ final class NoteCommand implements Callable<Integer> {
         }
         out.println("wrote " + pdf);
         out.println("wrote " + traceFile);
+        if (xlsx) {
+            Path schedule = output.resolve(base + ".xlsx");
+            if (!Schedules.xlsx(result, schedule, err)) return ExitStatus.BAD_INPUT;
+            out.println("wrote " + schedule);
+        }
         out.println(result.pass()
                 ? (result.notPerformed().isEmpty() ? "every check passes" : "the checks made pass; not checked by this version: " + String.join(", ", result.notPerformed()))
                 : result.failingChecks() + " check(s) fail; the note is stamped DOES NOT CONFORM");

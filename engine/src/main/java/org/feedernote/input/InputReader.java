@@ -25,8 +25,11 @@ public final class InputReader {
     private final List<InputError> errors = new ArrayList<>();
     private final List<InputWarning> warnings = new ArrayList<>();
 
-    private InputReader(String file) {
+    private final Locator locator;
+
+    private InputReader(String file, Locator locator) {
         this.file = file;
+        this.locator = locator;
     }
 
     public static Installation read(Path path) throws InputException {
@@ -55,9 +58,37 @@ public final class InputReader {
     }
 
     public static Installation parse(String name, String text, boolean json) throws InputException {
-        InputReader r = new InputReader(name);
-        Node root = TreeReader.read(name, text, json, r.errors);
-        if (root == null) throw new InputException(r.errors);
+        List<InputError> errors = new ArrayList<>();
+        Node root = TreeReader.read(name, text, json, errors);
+        if (root == null) throw new InputException(errors);
+        return parse(name, root, text, () -> TreeReader.read(name, text, json, new ArrayList<>()), null, errors);
+    }
+
+    /**
+     * Says where a position of a tree not read from text (a spreadsheet's cell) is, for messages:
+     * the place ("circuits!F12") and the key path as the place's reader knows it ("cable.size_mm2").
+     */
+    public interface Locator {
+        Located locate(int line, int column, String path);
+
+        record Located(String place, String path) {}
+    }
+
+    /**
+     * Validates and binds a located tree made by another reader (a workbook's, CSV files'): the same
+     * rules and messages as a YAML or JSON file. sourceText is what the note lists and embeds as the
+     * input; again makes the tree anew for the canonical form; locator gives the places of errors.
+     */
+    public static Installation parse(String name, Node root, String sourceText, java.util.function.Supplier<Node> again,
+                                     Locator locator) throws InputException {
+        return parse(name, root, sourceText, again, locator, List.of());
+    }
+
+    /** found: errors the tree's reader found already (a key given twice), reported with the others. */
+    private static Installation parse(String name, Node root, String sourceText, java.util.function.Supplier<Node> again,
+                                      Locator locator, List<InputError> found) throws InputException {
+        InputReader r = new InputReader(name, locator);
+        r.errors.addAll(found);
         Installation model = null;
         if (root instanceof Node.Obj) {
             // The structure check and the binding only read the tree: side by side. The binding
@@ -66,10 +97,10 @@ public final class InputReader {
             List<InputError> structural = new ArrayList<>();
             java.util.concurrent.CompletableFuture<Void> check = java.util.concurrent.CompletableFuture.runAsync(
                     () -> new StructureValidator(name, structural).check(root, InputSchema.ROOT, ""), InputReader::alongside);
-            InputReader alongside = new InputReader(name);
+            InputReader alongside = new InputReader(name, locator);
             RuntimeException failure = null;
             try {
-                model = alongside.bind(root, text, json);
+                model = alongside.bind(root, sourceText, again);
             } catch (RuntimeException e) {
                 failure = e;
             }
@@ -87,18 +118,33 @@ public final class InputReader {
                 if (failure != null) throw failure;
                 r.errors.addAll(alongside.errors);
             } else {
-                model = r.bind(root, text, json);
+                model = r.bind(root, sourceText, again);
             }
         } else {
             new StructureValidator(name, r.errors).check(root, InputSchema.ROOT, "");
-            model = r.errors.isEmpty() ? r.bind(root, text, json) : null;
+            model = r.errors.isEmpty() ? r.bind(root, sourceText, again) : null;
         }
         if (!r.errors.isEmpty() || model == null) {
-            List<InputError> sorted = new ArrayList<>(new java.util.LinkedHashSet<>(r.errors));
+            List<InputError> sorted = new ArrayList<>(new java.util.LinkedHashSet<>(located(r.errors, locator)));
             Collections.sort(sorted);
             throw new InputException(sorted);
         }
         return model;
+    }
+
+    private static List<InputError> located(List<InputError> errors, Locator locator) {
+        if (locator == null) return errors;
+        List<InputError> out = new ArrayList<>(errors.size());
+        for (InputError e : errors) {
+            Locator.Located at = locator.locate(e.line(), e.column(), e.path());
+            out.add(new InputError(e.file(), e.line(), e.column(), at.path(), e.message(), at.place()));
+        }
+        return out;
+    }
+
+    /** The tree of a YAML or JSON text already read without errors once, or null. */
+    static Node treeOrNull(String name, String text) {
+        return TreeReader.read(name, text, false, new ArrayList<>());
     }
 
     /** Parses a document into the located tree only (for canonical forms and diffs). */
@@ -172,19 +218,20 @@ public final class InputReader {
 
     private Where where(Node node, String path) {
         Node.Pos p = node == null ? new Node.Pos(1, 1) : node.pos();
-        return new Where(file, p.line(), p.column(), path);
+        return locator == null ? new Where(file, p.line(), p.column(), path)
+                : new Where(file, p.line(), p.column(), path, locator.locate(p.line(), p.column(), path).place());
     }
 
     // ---- binding and the rules that span several keys ----
 
-    /** The tree of a text already read without errors. */
-    private Node reread(String text, boolean json) {
-        Node root = TreeReader.read(file, text, json, new ArrayList<>());
+    /** The tree of an input already read without errors. */
+    private Node reread(java.util.function.Supplier<Node> again) {
+        Node root = again.get();
         if (root == null) throw new IllegalStateException(file + ": read once, but not again");
         return root;
     }
 
-    private Installation bind(Node root, String text, boolean json) {
+    private Installation bind(Node root, String text, java.util.function.Supplier<Node> again) {
         Project project = project(at(root, "project"));
         Basis basis = basis(at(root, "basis"));
         Supply supply = supply(at(root, "supply"));
@@ -215,7 +262,7 @@ public final class InputReader {
         if (errors.isEmpty()) singlePhaseBoards(circuits);
         voltages(at(root, "supply"), supply);
         return errors.isEmpty()
-                ? new Installation(file, project, basis, supply, List.copyOf(boards), List.copyOf(circuits), Canonical.lazy(() -> reread(text, json)),
+                ? new Installation(file, project, basis, supply, List.copyOf(boards), List.copyOf(circuits), Canonical.lazy(() -> reread(again)),
                         text, sortedWarnings())
                 : null;
     }
