@@ -25,7 +25,8 @@ class LayeringTest {
             "data", List.of("calc", "report", "cli", "input"),
             "input", List.of("calc", "report", "cli"),
             "report", List.of("cli"),
-            "verification", List.of("report", "cli"));
+            "verification", List.of("report", "cli"),
+            "sheet", List.of("report", "cli"));
 
     @Test
     void packagesOnlyImportDownstream() throws IOException {

@@ -25,7 +25,7 @@ import org.apache.pdfbox.pdmodel.common.filespecification.PDEmbeddedFile;
  */
 public record NoteArchive(Path file, String canonicalInput, String fingerprint, String engineVersion,
                           String sourceText, String inputFile, String changesSince, List<String> changes,
-                          Map<String, byte[]> templates) {
+                          Map<String, byte[]> templates, String detail) {
 
     public static final String INPUT_NAME = "input.canonical.json";
     public static final String TRACE_NAME = "trace.json";
@@ -77,6 +77,7 @@ public record NoteArchive(Path file, String canonicalInput, String fingerprint, 
             String fingerprint = info.getCustomMetadataValue("Fingerprint");
             String engine = info.getCustomMetadataValue("EngineVersion");
             String inputFile = info.getCustomMetadataValue("InputFile");
+            String detail = info.getCustomMetadataValue("Detail");
             if (fingerprint == null) throw new NotANote(file + ": the note's metadata carries no fingerprint");
             String source = files.containsKey(SOURCE_NAME) ? text(files.get(SOURCE_NAME), file) : null;
             String since = null;
@@ -93,7 +94,8 @@ public record NoteArchive(Path file, String canonicalInput, String fingerprint, 
                 }
             }
             return new NoteArchive(file, input, fingerprint, engine == null ? "" : engine, source,
-                    inputFile == null ? "input" : inputFile, since, changes, Map.copyOf(templates));
+                    inputFile == null ? "input" : inputFile, since, changes, Map.copyOf(templates),
+                    detail == null ? "full" : detail);
         } catch (IOException e) {
             throw new NotANote(file + ": damaged or truncated PDF (" + e.getMessage() + ")");
         }

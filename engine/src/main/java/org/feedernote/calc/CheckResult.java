@@ -9,7 +9,13 @@ package org.feedernote.calc;
  * standard deems it met by a rule (it passes; the remark cites the rule).
  */
 public record CheckResult(String name, String title, boolean pass, double value, double limit, String unit,
-                          boolean atLeast, String stepOwner, String stepPart, boolean determined, String remark) {
+                          boolean atLeast, String stepOwner, String stepPart, boolean determined, String remark,
+                          java.util.List<Assumption> assumptions) {
+
+    public CheckResult(String name, String title, boolean pass, double value, double limit, String unit, boolean atLeast,
+                       String stepOwner, String stepPart, boolean determined, String remark) {
+        this(name, title, pass, value, limit, unit, atLeast, stepOwner, stepPart, determined, remark, java.util.List.of());
+    }
 
     public CheckResult(String name, String title, boolean pass, double value, double limit, String unit, boolean atLeast,
                        String stepId) {
@@ -42,6 +48,24 @@ public record CheckResult(String name, String title, boolean pass, double value,
     /** A check the standard deems met by a rule (rule says which and why): it passes without a comparison. */
     public static CheckResult deemed(String name, String title, String unit, String stepOwner, String stepPart, String rule) {
         return new CheckResult(name, title, true, 0, 0, unit, false, stepOwner, stepPart, false, "deemed met: " + rule);
+    }
+
+    /** The same check resting also on the assumption a. */
+    public CheckResult assuming(Assumption a) {
+        java.util.List<Assumption> all = new java.util.ArrayList<>(assumptions);
+        all.add(a);
+        return new CheckResult(name, title, pass, value, limit, unit, atLeast, stepOwner, stepPart, determined, remark, java.util.List.copyOf(all));
+    }
+
+    /**
+     * The assumptions that bear on the verdict: every one not known to be on the safe side, and
+     * the safe-side ones where the check fails (the datum might make it pass).
+     */
+    public java.util.List<Assumption> bearing() {
+        if (assumptions.isEmpty()) return assumptions;
+        java.util.List<Assumption> out = new java.util.ArrayList<>();
+        for (Assumption a : assumptions) if (!a.safeSide() || !pass) out.add(a);
+        return out;
     }
 
     /** True for a check deemed met by a rule rather than worked. */

@@ -28,6 +28,20 @@ public record CircuitResult(String id, Circuit circuit, int phases, String conne
         return List.copyOf(failing);
     }
 
+    /**
+     * The assumptions that bear on this circuit's verdict or size, one line each ("short-circuit:
+     * …"): those of a failing check, those not known to be on the safe side, and all of those of the
+     * check that governs the size.
+     */
+    public List<String> assumptionsBearing() {
+        List<String> out = new java.util.ArrayList<>();
+        for (CheckResult k : checks) {
+            List<Assumption> shown = k.name().equals(governingCheck) ? k.assumptions() : k.bearing();
+            for (Assumption a : shown) out.add(k.name() + ": " + a.text());
+        }
+        return out;
+    }
+
     public CheckResult check(String name) {
         for (CheckResult c : checks) if (c.name().equals(name)) return c;
         return null;

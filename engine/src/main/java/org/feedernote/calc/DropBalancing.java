@@ -445,6 +445,8 @@ final class DropBalancing {
         java.util.Set<String> ok = new java.util.HashSet<>();
         for (Slot a : feeder.below) {
             Double icu = a.current.device().breakingCapacityKa();
+            // Back-up protection: the combination's breaking capacity is what the check reads where the device's own falls short.
+            if (a.current.device().backup() != null) icu = Math.max(icu == null ? 0 : icu, a.current.device().backup().combinedBreakingCapacityKa());
             Circuit upstream = run.feederOf.get(a.current.from());
             if (icu == null || upstream == null) continue;
             BoardFault at = sizing.results.get(upstream.id()).downstream();

@@ -246,6 +246,7 @@ final class DropCalc {
                 bind(VoltageDropFormulas.DU, du), bind(VoltageDropFormulas.U_N, un)), "ΔU_st(" + c.id() + ")");
         List<Q> terms = new ArrayList<>();
         int phases = c.load().phases();
+        terms.add(relabel(sourceDip(t, c, id, ist, cosSt, sinSt, phases), "ΔU_st(source)"));
         for (Circuit f : run.feederPath(c.from())) {
             CircuitResult fr = done.get(f.id());
             ImpedanceResult fz = phases == 3 ? fr.impedance()
@@ -259,10 +260,27 @@ final class DropCalc {
             terms.add(relabel(inc, "ΔU_st(" + f.id() + ")"));
         }
         terms.add(own);
-        if (terms.size() == 1) return relabel(own, "ΔU_st,total");
         return termFormulas.eval(t, id + "/dU_total", "", "starting-dip-total", "ΔU_st,total", "d", Units.PERCENT, terms,
                 vars -> DemandFormulas.sum("starting-dip-total", "Voltage dip at the motor terminals while it starts", "ΔU_st,total",
-                        Units.PERCENT, vars, "Running drop of each upstream feeder, its added drop from the starting current, and the motor circuit's drop at starting current"));
+                        Units.PERCENT, vars, "The source's dip at the starting current, the running drop of each upstream feeder and its added drop from the starting current, and the motor circuit's drop at starting current"));
+    }
+
+    /**
+     * The dip across the source (transformer or network at the origin) at the starting current
+     * and power factor: per phase for a three-phase motor, the line-neutral loop for a single-phase one.
+     */
+    private Q sourceDip(Trace t, Circuit c, String id, Q ist, Q cosSt, Q sinSt, int phases) {
+        FaultPath.SourceImpedance src = run.faultPath.source();
+        boolean three = phases == 3;
+        if (t.recording()) Given.decision(t, id + "/source", "Source impedance in the starting dip",
+                "the motor's starting current flows through the source as well as the cables; the origin is taken at U_n before the motor starts",
+                "the whole starting current I_st through " + src.basis() + (three ? "" : "; the line-neutral loop, for a single-phase motor"),
+                "IEC 60909-0:2016, 6.2 and 6.3.1; IEC 60364-5-52:2009, Annex G", src.r().id());
+        Q r = three ? src.r() : src.rLoop();
+        Q x = three ? src.x() : src.xLoop();
+        return VoltageDropFormulas.SOURCE_STARTING.eval(t, id, "/dU_source", three ? "source, per phase" : "source, line-neutral loop",
+                bind(VoltageDropFormulas.R_S, r), bind(VoltageDropFormulas.X_S, x), bind(VoltageDropFormulas.COS_ST, cosSt),
+                bind(VoltageDropFormulas.SIN_ST, sinSt), bind(VoltageDropFormulas.I_ST, ist), bind(VoltageDropFormulas.U_0, run.u0));
     }
 
     /** A motor's dip while it starts and its check against the limit. */
@@ -274,8 +292,12 @@ final class DropCalc {
         Q stLimit = Given.setting(st, id, "/st/limit", "Limit of the starting dip", "ΔU_st,max",
                 run.inst.basis().motorStartingLimitPercent(), Units.PERCENT,
                 "default of this program (common practice, no source)");
-        return new MotorStart(dip, Checks.check(st, id, "/st/check", "motor-starting", "Voltage dip while the motor starts", dip, stLimit,
-                "common practice, no source"));
+        CheckResult check = Checks.check(st, id, "/st/check", "motor-starting", "Voltage dip while the motor starts", dip, stLimit,
+                "common practice, no source");
+        if (!c.load().startingPowerFactor().given()) check = check.assuming(new Assumption(
+                "cos φ_st taken as " + Decimals.trim(c.load().startingPowerFactor().value()) + ", the program's default",
+                c.where().path() + ".load.starting_power_factor", false));
+        return new MotorStart(dip, check);
     }
 
     String describeCable(Cable cable) {

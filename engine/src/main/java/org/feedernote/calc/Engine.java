@@ -53,7 +53,7 @@ public final class Engine {
         TraceRecorder root = new TraceRecorder();
         Run run = new Run(inst, root, record ? root : Trace.noop());
         run.calculate();
-        return new Result(inst, run.boardResults(), run.circuitResults(), root.toSection(), NOT_YET);
+        return new Result(inst, run.boardResults(), run.circuitResults(), root.toSection(), NOT_YET, run.faultPath.sourceAssumptions());
     }
 
     /** Evaluations of a circuit kept for reuse: enough for a step undone and for the final pass. */
@@ -447,7 +447,7 @@ public final class Engine {
                 Circuit feeder = feederOf.get(b.id());
                 BoardFault bf = feeder == null ? originFault : results.get(feeder.id()).downstream();
                 out.add(new BoardResult(b.id(), b.description(), feeder == null ? null : feeder.id(), boardDrop.get(b.id()),
-                        phaseCurrents.get(b.id()), neutral.get(b.id()), bf.ik3(), bf.ze(), boardChecks.getOrDefault(b.id(), List.of())));
+                        phaseCurrents.get(b.id()), neutral.get(b.id()), bf.ik3(), bf.ze(), boardChecks.getOrDefault(b.id(), List.of()), bf.ik1()));
             }
             return out;
         }

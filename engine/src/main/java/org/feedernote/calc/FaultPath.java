@@ -38,6 +38,8 @@ final class FaultPath {
     private final Q u0;
     private Q cmax;
     private Q cmin;
+    private SourceImpedance source;
+    private final List<Assumption> sourceAssumptions = new ArrayList<>();
     private final TermFormulas termFormulas;
 
     FaultPath(Installation inst, ReferenceData data, Q u, Q u0, TermFormulas termFormulas) {
@@ -54,6 +56,23 @@ final class FaultPath {
     /** The result for one circuit: its fault figures, its checks, and for a feeder the board it supplies. */
     record CircuitFault(Q prospective, Q zs, Q zsMax, Q iefMin, List<CheckResult> checks, BoardFault downstream,
                         List<CheckResult> boardChecks) {}
+
+    /**
+     * The source's impedance as a motor's starting current sees it: per phase (r, x) for a
+     * three-phase motor, the line-neutral loop for a single-phase one; without the corrections
+     * that belong to the maximum fault currents (K_T). basis says what it is made of.
+     */
+    record SourceImpedance(Q r, Q x, Q rLoop, Q xLoop, String basis) {}
+
+    /** What the source's figures rest on that the input does not give, set by {@link #origin}. */
+    List<Assumption> sourceAssumptions() {
+        return List.copyOf(sourceAssumptions);
+    }
+
+    /** The source impedance for the starting dip, set by {@link #origin}. */
+    SourceImpedance source() {
+        return source;
+    }
 
     private static Q rel(Q q, String symbol) {
         return q.as(symbol);
@@ -93,7 +112,13 @@ final class FaultPath {
         Q xN = null;
         Q ze;
         Supply.Source src = inst.supply().source();
+        sourceAssumptions.clear();
         if (src instanceof Supply.Transformer tr) {
+            if (tr.xrRatio() == null) sourceAssumptions.add(new Assumption("X/R of the transformer taken as 5 (fault levels, Z_e, the starting dip)",
+                    "supply.source.transformer.x_r_ratio", false));
+            if (tr.networkFaultLevelMva() == null) sourceAssumptions.add(new Assumption(
+                    "the MV network taken as infinite: the largest fault currents, but Z_e and the starting dip without the network's share",
+                    "supply.source.transformer.network_fault_level_mva", false));
             Q uk = Given.input(t, id + "/uk", "Transformer short-circuit impedance", "u_k", tr.impedancePercent(), Units.PERCENT,
                     "supply.source.transformer.impedance_percent");
             Q sr = Given.input(t, id + "/S_rT", "Transformer rating", "S_rT", tr.ratingKva(), Units.KVA, "supply.source.transformer.rating_kva");
@@ -118,6 +143,7 @@ final class FaultPath {
                 rN = rTK;
                 xN = xTK;
                 ze = rel(z, "Z_e");
+                source = new SourceImpedance(rT, xT, rT, xT, "the transformer's R_T and X_T (per phase; the line-neutral loop of a Dyn transformer is the same, Z_0 ≈ Z_1), without the correction K_T of the maximum fault currents");
             } else {
                 Q skq = Given.input(t, id + "/SkQ", "Short-circuit power of the MV network at the primary", "S″_kQ", tr.networkFaultLevelMva(), "MVA",
                         "supply.source.transformer.network_fault_level_mva");
@@ -136,9 +162,18 @@ final class FaultPath {
                 Q rE = series(t, id, "/R_e", "Resistance of the source, earth-fault loop", "R_e", rq23, rT);
                 Q xE = series(t, id, "/X_e", "Reactance of the source, earth-fault loop", "X_e", xq23, xT);
                 ze = magnitude(t, id, "/Ze", "Z_e", rE, xE);
+                Q rSt = series(t, id, "/R_src_st", "Resistance of the source, motor starting", "R_Q + R_T", rq, rT);
+                Q xSt = series(t, id, "/X_src_st", "Reactance of the source, motor starting", "X_Q + X_T", xq, xT);
+                source = new SourceImpedance(rSt, xSt, rE, xE, "the MV network's Z_Qt and the transformer's R_T and X_T (per phase; the line-neutral loop takes 2/3 of the network's impedance), without the correction K_T of the maximum fault currents");
             }
         } else {
             Supply.Utility ut = (Supply.Utility) src;
+            if (ut.xrRatio() == null) sourceAssumptions.add(new Assumption("X/R of the network taken as 1 (fault levels, the starting dip)",
+                    "supply.source.utility.x_r_ratio", false));
+            if (ut.loopImpedanceOhm() == null) sourceAssumptions.add(new Assumption("Z_e taken as 2 · Z_Q, from the fault level",
+                    "supply.source.utility.loop_impedance_ohm", false));
+            if (ut.faultLevelKa() == null) sourceAssumptions.add(new Assumption("Z_Q taken as Z_e / 2, from the loop impedance (fault levels, the starting dip)",
+                    "supply.source.utility.fault_level_ka", false));
             Q xr = Given.setting(t, id, "/xr", "X/R of the network", "X/R", new Setting<>(ut.xrRatio() == null ? 1.0 : ut.xrRatio(),
                     ut.xrRatio() != null, "supply.source.utility.x_r_ratio"), Units.NONE, "assumption of this program: 1 (common practice, no source)");
             Q zq;
@@ -165,6 +200,7 @@ final class FaultPath {
             Q xr = rel(new Q(id + "/xr", "X/R", x.value() / r.value(), Units.NONE), "X/R");
             rN = RESISTANCE_FROM_XR.evalAs("R_QN", t, id, "/R_QN", "", bind(Z, zqLoop), bind(XR, xr));
             xN = REACTANCE_FROM_XR.evalAs("X_QN", t, id, "/X_QN", "", bind(R, rN), bind(XR, xr));
+            source = new SourceImpedance(r, x, rN, xN, "the network's R_Q and X_Q (per phase) and its line-neutral loop R_QN and X_QN");
         }
         return atBoard(t, id, board, r, x, rN, xN, ze, ze);
     }
@@ -195,26 +231,19 @@ final class FaultPath {
     // ---------------- one circuit ----------------
 
     /** The symbols, step ids and forms of the conductor resistances at one temperature. */
-    private record Temperature(String r1PerKm, String r2PerKm, String r1, String r2, String r1PerKmStep,
-                               String r2PerKmStep, String r1Step, String r2Step, String lineForm, String cpcForm, String lengthForm) {}
+    private record Temperature(String r1, String r2, String r1Step, String r2Step, String lineForm, String cpcForm) {}
 
-    private static final Temperature AT_MAX = new Temperature("R_1′", "R_2′", "R_1", "R_2", "/R1km_max", "/R2km_max",
-            "/R1", "/R2", "line, at θ_max", "cpc, at θ_max", "at θ_max");
-    private static final Temperature AT_FINAL = new Temperature("R_1f′", "R_2f′", "R_1f", "R_2f", "/R1km_f", "/R2km_f",
-            "/R1f", "/R2f", "line, at θ_f", "cpc, at θ_f", "at θ_f");
+    private static final Temperature AT_MAX = new Temperature("R_1", "R_2", "/R1", "/R2", "line, at θ_max", "cpc, at θ_max");
+    private static final Temperature AT_FINAL = new Temperature("R_1f", "R_2f", "/R1f", "/R2f", "line, at θ_f", "cpc, at θ_f");
 
-    /** R_1 and R_2 of the route: line and protective conductor per km at the temperature, then for the length. */
+    /** R_1 and R_2 of the route at a temperature: line and protective conductor for the length. */
     private record Conductors(Q r1, Q r2) {}
 
     private Conductors conductors(Trace t, String id, Temperature at, Q theta, Q r20, Q cpc20, Q alpha, Q length, Q n) {
-        Q r1km = RESISTANCE_AT.evalAs(at.r1PerKm(), t, id, at.r1PerKmStep(), at.lineForm(), bind(R20, r20), bind(ALPHA, alpha),
-                bind(THETA, theta));
-        Q r2km = RESISTANCE_AT.evalAs(at.r2PerKm(), t, id, at.r2PerKmStep(), at.cpcForm(), bind(R20, rel(cpc20, "R_20")),
-                bind(ALPHA, alpha), bind(THETA, theta));
-        Q r1 = LENGTH_RESISTANCE.evalAs(at.r1(), t, id, at.r1Step(), at.lengthForm(), bind(R_KM, r1km), bind(L, length),
-                bind(N, n));
-        Q r2 = LENGTH_RESISTANCE.evalAs(at.r2(), t, id, at.r2Step(), at.lengthForm(), bind(R_KM, r2km), bind(L, length),
-                bind(N, n));
+        Q r1 = RUN_RESISTANCE_AT.evalAs(at.r1(), t, id, at.r1Step(), at.lineForm(), bind(R20, r20), bind(ALPHA, alpha),
+                bind(THETA, theta), bind(L, length), bind(N, n));
+        Q r2 = RUN_RESISTANCE_AT.evalAs(at.r2(), t, id, at.r2Step(), at.cpcForm(), bind(R20, rel(cpc20, "R_20")), bind(ALPHA, alpha),
+                bind(THETA, theta), bind(L, length), bind(N, n));
         return new Conductors(r1, r2);
     }
 
@@ -230,10 +259,6 @@ final class FaultPath {
                 "design input (cable.parallel)");
         Q r20 = rel(z.r20(), "R_20");
         Q alpha = rel(z.alpha(), "α_20");
-        Q r1km20 = r20;
-        Q r1_20 = LENGTH_RESISTANCE.evalAs("R_1,20", t, id, "/R1_20", "line conductor at 20 °C", bind(R_KM, r1km20),
-                bind(L, length), bind(N, n));
-        Q x1 = LENGTH_REACTANCE.evalAs("X_1", t, id, "/X1", "line conductor", bind(X_KM, z.reactance()), bind(L, length));
         Q xLoop = LOOP_REACTANCE.evalAs("X_loop", t, id, "/Xloop", "line and protective conductor", bind(X_KM, z.reactance()),
                 bind(L, length));
         Q thetaF = faults.finalTemperature(t, id, "/theta_f", cable.insulation());
@@ -245,17 +270,18 @@ final class FaultPath {
         Q r1f = fin.r1();
         Q r2f = fin.r2();
 
-        Q r12 = series(t, id, "/R12", "Resistance of the loop, at θ_max", "R_1 + R_2", r1, r2);
-        Q zLoop = magnitude(t, id, "/Zloop", "Z_loop", rel(r12, "R"), rel(xLoop, "X"));
-        Q zs = loop(t, id, "/Zs", "Earth-fault loop impedance at the far end", "Z_s", rel(at.ze(), "Z_e"), zLoop);
-        Q r12f = series(t, id, "/R12f", "Resistance of the loop, at θ_f", "R_1f + R_2f", r1f, r2f);
-        Q zLoopF = magnitude(t, id, "/Zloopf", "Z_loop,f", rel(r12f, "R"), rel(xLoop, "X"));
-        Q zsf = loop(t, id, "/Zsf", "Earth-fault loop impedance at the far end, at θ_f", "Z_sf", rel(at.zeF(), "Z_ef"), zLoopF);
+        Q zs = FAR_END_LOOP.evalAs("Z_s", t, id, "/Zs", "at θ_max", bind(ZE, rel(at.ze(), "Z_e")), bind(R1, r1), bind(R2, r2),
+                bind(X_LOOP, xLoop));
+        Q zsf = FAR_END_LOOP.evalAs("Z_sf", t, id, "/Zsf", "at θ_f", bind(ZE, rel(at.zeF(), "Z_ef")), bind(R1, rel(r1f, "R_1f")),
+                bind(R2, rel(r2f, "R_2f")), bind(X_LOOP, xLoop));
         Q ief = MIN_EARTH_FAULT.evalAs("I_ef,min", t, id, "/Ief", "far end", bind(C_MIN, cmin), bind(U0, u0), bind(ZS, zsf));
 
         List<CheckResult> checks = new ArrayList<>();
         Disconnection d = disconnection(t, c, id, zs, in);
-        checks.add(d.check());
+        boolean gGTaken = c.device().kind() == DeviceKind.FUSE && c.device().disconnectionCurrentA() == null && d.check().determined();
+        checks.add(!gGTaken ? d.check() : d.check().assuming(new Assumption(
+                "the fuse taken as gG (IEC 60269-2, BS 88-2 systems E and G): its disconnection current from the published maximum Z_s",
+                c.where().path() + ".device.disconnection_current_a", false)));
         Q prospective = rel(phases == 3 ? at.ik3() : at.ik1(), phases == 3 ? "I_k3" : "I_k1");
         Withstand.Operation op = new Withstand.Operation(d.ia(), d.time(), d.idn());
         CheckResult breaking = withstand.breaking(t, c, id + "/bc", prospective);
@@ -265,6 +291,10 @@ final class FaultPath {
 
         BoardFault downstream = null;
         if (c.isFeeder()) {
+            // The phase path at 20 °C serves the maximum fault currents at the board the feeder supplies.
+            Q r1_20 = LENGTH_RESISTANCE.evalAs("R_1,20", t, id, "/R1_20", "line conductor at 20 °C", bind(R_KM, r20),
+                    bind(L, length), bind(N, n));
+            Q x1 = LENGTH_REACTANCE.evalAs("X_1", t, id, "/X1", "line conductor", bind(X_KM, z.reactance()), bind(L, length));
             Trace bt = t.section(id + "/board", "Fault levels at board " + c.to(), "");
             String bid = "fault/" + c.to();
             Q r3 = series(bt, bid, "/R3", "Phase resistance to board " + c.to() + ", 20 °C", "R_3", rel(at.r3(), "R_3(" + c.from() + ")"), r1_20);

@@ -8,9 +8,11 @@ import java.util.Map;
 
 import org.feedernote.data.CableBuildData;
 import org.feedernote.data.ReferenceData;
+import org.feedernote.model.Basis;
 import org.feedernote.model.Cable;
 import org.feedernote.model.CpcKind;
 import org.feedernote.model.Circuit;
+import org.feedernote.model.Setting;
 import org.feedernote.trace.Step;
 import org.feedernote.trace.Trace;
 
@@ -150,8 +152,23 @@ final class Sizing {
     /** Covered sizes by {@link #coverageKey}: few different cables and methods serve thousands of circuits. */
     private final Map<Long, List<Double>> coveredSizes = new java.util.concurrent.ConcurrentHashMap<>();
 
-    /** The standard sizes the tables cover for this circuit's cable and method, ascending (and, for twin and earth, that are made). */
+    /**
+     * The standard sizes the sizing may choose for this circuit, ascending: those the tables cover for
+     * its cable and method (and, for twin and earth, that are made), none below the design basis's
+     * smallest line conductor.
+     */
     List<Double> sizesFor(Circuit c) {
+        double minimum = minimumSize();
+        return tabulatedSizes(c).stream().filter(s -> s >= minimum - 1e-9).toList();
+    }
+
+    /** The smallest line conductor of the design basis (basis.minimum_size_mm2). */
+    private double minimumSize() {
+        return run.inst.basis().minimumSizeMm2().value();
+    }
+
+    /** The sizes the tables cover for this circuit's cable and method, ascending (and, for twin and earth, that are made). */
+    private List<Double> tabulatedSizes(Circuit c) {
         List<Double> covered = coveredSizes.computeIfAbsent(coverageKey(c), k -> sizes.stream().filter(s -> covered(c, s)).toList());
         if (c.cable().cpcKind() != CpcKind.TWIN_AND_EARTH || !c.cable().cpc().auto()) return covered;
         return covered.stream().filter(s -> twinAndEarthCpc(c, s) != null).toList();
@@ -213,6 +230,13 @@ final class Sizing {
         String lastReason = null;
         String lastReasonCheck = "capacity";
         List<Double> covered = sizesFor(c);
+        List<Double> belowMinimum = tabulatedSizes(c).stream().filter(s -> !covered.contains(s)).toList();
+        if (!belowMinimum.isEmpty()) {
+            Setting<Double> minimum = run.inst.basis().minimumSizeMm2();
+            notes.add(new String[] {"Smallest size", "the design basis's smallest line conductor is " + mm2(minimum.value()) + " (basis.minimum_size_mm2"
+                    + (minimum.given() ? ", design input" : ", default: " + Basis.MINIMUM_SIZE_SOURCE) + ")",
+                    belowMinimum.stream().map(Sizing::mm2).collect(java.util.stream.Collectors.joining(", ")) + " not considered"});
+        }
         double largest = 0;
         for (double size : covered) if (size <= DropBalancing.PRACTICAL_LARGEST_MM2 + 1e-9) largest = size;
         CapacityCalc.Probe lastProbe = null;

@@ -50,6 +50,7 @@ final class Withstand {
 
     CheckResult breaking(Trace t, Circuit c, String id, Q prospective) {
         String title = "Breaking capacity ≥ prospective fault current";
+        if (backedUp(c.device(), prospective)) return backup(t, c, id, title, prospective);
         if (c.device().breakingCapacityKa() == null) {
             if (t.recording()) Given.decision(t, id + "/check", title, "the input gives no breaking_capacity_ka for the device",
                     "FAIL: the device cannot be shown to break " + FaultPath.NumberFormatPolicyLite.ka(prospective.value()) + " kA",
@@ -63,6 +64,38 @@ final class Withstand {
         if (t.recording()) t.add(new Step.Check(id + "/check", title, "breaking-capacity", icu, "≥", prospective, pass,
                 "IEC 60364-4-43:2008, 434.5.1"));
         return new CheckResult("breaking-capacity", title, pass, icu.value(), prospective.value(), Units.KA, true, id, "/check");
+    }
+
+    /** Whether the device relies on back-up protection: one is given, and the device alone cannot be shown to break the current. */
+    static boolean backedUp(Device dev, Q prospective) {
+        return dev.backup() != null && (dev.breakingCapacityKa() == null || dev.breakingCapacityKa() < prospective.value() - 1e-12);
+    }
+
+    /**
+     * Back-up protection (434.5.1): a lower breaking capacity is permitted where a device on the
+     * supply side has the necessary breaking capacity and the two are co-ordinated; the
+     * manufacturer's combined value stands for that co-ordination and is checked instead.
+     */
+    private CheckResult backup(Trace t, Circuit c, String id, String title, Q prospective) {
+        Device.Backup b = c.device().backup();
+        String path = c.where().path() + ".device";
+        if (t.recording()) Given.decision(t, id + "/backup", "Back-up protection",
+                (c.device().breakingCapacityKa() == null ? "the input gives no breaking_capacity_ka for the device"
+                        : "the device's rated breaking capacity " + FaultPath.NumberFormatPolicyLite.ka(c.device().breakingCapacityKa())
+                        + " kA is below the prospective fault current " + FaultPath.NumberFormatPolicyLite.ka(prospective.value()) + " kA")
+                        + "; the input names back-up protection by the device of " + b.upstreamCircuit()
+                        + " with a combined breaking capacity from the manufacturer (" + path + ".backup)",
+                "the combination's breaking capacity is checked instead of the device's own: a stated decision of the designer, resting on the "
+                        + "manufacturer's co-ordination data; the upstream device's own breaking capacity is checked at its own point, where the "
+                        + "prospective current is not lower",
+                "IEC 60364-4-43:2008, 434.5.1 (from memory)");
+        Q combined = Given.input(t, id, "/Icu_backup", "Combined breaking capacity with the device of " + b.upstreamCircuit()
+                + " (manufacturer's back-up data)", "I_cu,comb", b.combinedBreakingCapacityKa(), Units.KA, path, ".backup.combined_breaking_capacity_ka");
+        boolean pass = combined.value() >= prospective.value() - 1e-12;
+        if (t.recording()) t.add(new Step.Check(id + "/check", title + " (back-up protection)", "breaking-capacity", combined, "≥", prospective, pass,
+                "IEC 60364-4-43:2008, 434.5.1 (from memory)"));
+        return new CheckResult("breaking-capacity", title + " (back-up protection by " + b.upstreamCircuit() + ")", pass, combined.value(),
+                prospective.value(), Units.KA, true, id, "/check", true, null);
     }
 
     // ---------------- line conductors ----------------
@@ -79,6 +112,16 @@ final class Withstand {
         String name = "short-circuit";
         String title = "Short-circuit protection of the line conductor";
         boolean faultOnly = c.device().faultProtectionOnly();
+        boolean backedUp = backedUp(c.device(), prospectiveKa);
+        if (backedUp && breaking.pass()) {
+            if (t.recording()) Given.decision(t, id + "/rule", "Short-circuit protection of the line conductor",
+                    "the device breaks the fault current only with its back-up device (" + c.device().backup().upstreamCircuit() + ")",
+                    "the adiabatic check applies: the energy the two let through must not exceed what the conductors withstand "
+                            + "(give the combination's let-through from the manufacturer as device.let_through_a2s)",
+                    "IEC 60364-4-43:2008, 434.5.1 (from memory) and 434.5.2");
+            Q current = rel(A_FROM_KA.eval(t, id, "/I", "", bind(IK_KA, prospectiveKa)), "I_k");
+            return adiabatic(t, c, id, name, title, current, op, in, c.cable().size().mm2(), thetaMax, false);
+        }
         if (overloadProtected && !faultOnly && breaking.determined() && breaking.pass()) {
             if (t.recording()) Given.decision(t, id + "/check", title,
                     "the device protects the circuit against overload (I_b ≤ I_n ≤ I_z and I_2 ≤ 1.45 · I_z are met) and its rated breaking capacity "
@@ -129,11 +172,22 @@ final class Withstand {
         boolean pass = installed.value() >= smin.value() - 1e-12;
         if (t.recording()) t.add(new Step.Check(id + "/check", title, name, installed, "≥", smin, pass,
                 "IEC 60364-4-43:2008, 434.5.2" + (protective ? "; IEC 60364-5-54:2011, 543.1.2" : "")));
-        return new CheckResult(name, title, pass, installed.value(), smin.value(), Units.MM2, true, id, "/check");
+        CheckResult result = new CheckResult(name, title, pass, installed.value(), smin.value(), Units.MM2, true, id, "/check");
+        return lt.assumed() == null ? result
+                : result.assuming(new Assumption(lt.assumed(), c.where().path() + ".device.let_through_a2s", lt.safeSide()));
     }
 
     /** The let-through energy at a current, or what the input lacks to know it. */
-    private record LetThrough(Q i2t, String missing) {}
+    private record LetThrough(Q i2t, String missing, String assumed, boolean safeSide) {
+        LetThrough(Q i2t, String missing) {
+            this(i2t, missing, null, true);
+        }
+
+        /** An upper bound of the energy (an operating time at least as long as the real one): on the safe side. */
+        LetThrough(Q i2t, String missing, String assumed) {
+            this(i2t, missing, assumed, true);
+        }
+    }
 
     /**
      * The let-through energy at the current I, from the part of the device that operates at it:
@@ -160,18 +214,21 @@ final class Withstand {
                                     + "milliseconds to a melting time well below 0.1 s; common practice, no source; device.let_through_a2s replaces it)",
                             "IEC 60269-1, Table 3 (gates)");
                     Q t01 = Given.derived(t, id, "/t", "Operating time", "t", 0.1, Units.S, "IEC 60269-1, Table 3: melting within 0.1 s at I_max(0.1 s)");
-                    return new LetThrough(ENERGY.eval(t, id, "/I2t", "gG fuse above I_max(0.1 s)", bind(I, current), bind(T, t01)), null);
+                    return new LetThrough(ENERGY.eval(t, id, "/I2t", "gG fuse above I_max(0.1 s)", bind(I, current), bind(T, t01)), null,
+                            "I²t taken as I² · 0.1 s (the gG fuse-link melts within 0.1 s), not the manufacturer's let-through");
                 }
                 if (t.recording()) Given.decision(t, id + "/t-basis", "Operating time", "I = " + FaultPath.NumberFormatPolicyLite.a(i)
                         + " A is not below I_a = " + FaultPath.NumberFormatPolicyLite.a(op.ia().value()) + " A, the current that operates the fuse within t",
                         "the fuse operates within t (an upper bound of its operating time)", "IEC 60364-4-43:2008, 434.5.2");
-                return new LetThrough(ENERGY.eval(t, id, "/I2t", "within the required time", bind(I, current), bind(T, Given.alias("t", op.time()))), null);
+                return new LetThrough(ENERGY.eval(t, id, "/I2t", "within the required time", bind(I, current), bind(T, Given.alias("t", op.time()))), null,
+                        "I²t taken as I² · t with the required disconnection time t as the fuse's operating time (an upper bound)");
             }
             if (dev.kind() == DeviceKind.MCB || dev.kind() == DeviceKind.RCBO) {
                 Step.Lookup class3 = devices.classThreeLetThrough(id + "/I2t_cl3", dev.curve(), in.value(), i);
                 Q t01 = Given.derived(t, id, "/t", "Operating time", "t", 0.1, Units.S, T_INSTANT);
                 if (class3 == null) {
-                    return new LetThrough(ENERGY.eval(t, id, "/I2t", "instantaneous region", bind(I, current), bind(T, t01)), null);
+                    return new LetThrough(ENERGY.eval(t, id, "/I2t", "instantaneous region", bind(I, current), bind(T, t01)), null,
+                            "I²t taken as I² · 0.1 s (operation within 0.1 s in the instantaneous region, an upper bound)");
                 }
                 // Both are upper bounds of the same energy: the breaker clears within 0.1 s in its
                 // instantaneous region, and its class limits the energy at the tabulated current.
@@ -180,12 +237,14 @@ final class Withstand {
                     if (t.recording()) Given.decision(t, id + "/I2t-basis", "Let-through energy", "I² · 0.1 s = " + Decimals.trim(Math.round(bound))
                             + " A²s is below the energy-limiting class 3 limit " + Decimals.trim(Math.round(class3.q().value())) + " A²s",
                             "the smaller upper bound is used: I² · t with t = 0.1 s", "IEC 60898-1:2015, Table 7 and Annex ZA");
-                    return new LetThrough(ENERGY.eval(t, id, "/I2t", "instantaneous region", bind(I, current), bind(T, t01)), null);
+                    return new LetThrough(ENERGY.eval(t, id, "/I2t", "instantaneous region", bind(I, current), bind(T, t01)), null,
+                            "I²t taken as I² · 0.1 s (operation within 0.1 s in the instantaneous region, an upper bound)");
                 }
                 Q v = Given.lookupUsing(t, class3, current);
                 if (t.recording()) Given.note(t, id + "/class3", "Energy-limiting class",
                         "The circuit-breaker is taken as energy-limiting class 3, the usual class of modern MCBs; confirm with the manufacturer (device.let_through_a2s replaces it).", "");
-                return new LetThrough(Given.alias("I²t", v), null);
+                return new LetThrough(Given.alias("I²t", v), null,
+                        "I²t taken as the energy-limiting class 3 limit (the breaker assumed to be of class 3)", false);
             }
             // MCCB: the instantaneous release within 0.1 s where the current reaches it, else the short-time release after its delay.
             boolean instantaneous = dev.instantaneousA() != null && i >= 1.2 * dev.instantaneousA() - 1e-9;
@@ -195,11 +254,13 @@ final class Withstand {
                 if (t.recording()) Given.decision(t, id + "/t-basis", "Operating time", "I = " + FaultPath.NumberFormatPolicyLite.a(i)
                                 + " A reaches the short-time release" + (dev.instantaneousA() == null ? "" : " but not 1.2 × I_i"),
                         "the release operates after its delay t_sd (the manufacturer's let_through_a2s replaces this)", "IEC 60947-2:2016, 8.3.3 (from memory)");
-                return new LetThrough(ENERGY.eval(t, id, "/I2t", "short-time region", bind(I, current), bind(T, tsd.as("t"))), null);
+                return new LetThrough(ENERGY.eval(t, id, "/I2t", "short-time region", bind(I, current), bind(T, tsd.as("t"))), null,
+                        "I²t taken as I² · t_sd (the short-time delay as the operating time)");
             }
             Q t01 = Given.derived(t, id, "/t", "Operating time", "t", 0.1, Units.S,
                     "instantaneous release: operation within 0.1 s (IEC 60364-4-43:2008, 434.5.2; common practice, no source)");
-            return new LetThrough(ENERGY.eval(t, id, "/I2t", "instantaneous region", bind(I, current), bind(T, t01)), null);
+            return new LetThrough(ENERGY.eval(t, id, "/I2t", "instantaneous region", bind(I, current), bind(T, t01)), null,
+                    "I²t taken as I² · 0.1 s (the instantaneous release taken to operate within 0.1 s)");
         }
         if (op.idn() != null && i >= op.idn().value() - 1e-12) {
             double multiple = i / op.idn().value();
@@ -212,7 +273,8 @@ final class Withstand {
                             + FaultPath.NumberFormatPolicyLite.a(op.ia().value()) + " A) and ") + "not below I_Δn",
                     "the residual-current part operates: its maximum break time at this current applies", "IEC 61008-1 / IEC 61009-1, Table 1");
             Q tRcd = Given.lookupUsing(t, tr, current);
-            return new LetThrough(ENERGY.eval(t, id, "/I2t", "RCD break time", bind(I, current), bind(T, rel(tRcd, "t"))), null);
+            return new LetThrough(ENERGY.eval(t, id, "/I2t", "RCD break time", bind(I, current), bind(T, rel(tRcd, "t"))), null,
+                    "I²t taken as I² · the maximum break time of the residual-current part (an upper bound)");
         }
         if (op.ia() == null) {
             String key = dev.kind() == DeviceKind.MCCB ? ".device.instantaneous_a" : ".device.disconnection_current_a";
@@ -220,7 +282,8 @@ final class Withstand {
         }
         if (t.recording()) Given.decision(t, id + "/t-basis", "Operating time", "I = " + FaultPath.NumberFormatPolicyLite.a(i) + " A is below I_a = "
                 + FaultPath.NumberFormatPolicyLite.a(op.ia().value()) + " A", "the device is taken to operate within the required time t", "IEC 60364-4-43:2008, 434.5.2");
-        return new LetThrough(ENERGY.eval(t, id, "/I2t", "within the required time", bind(I, current), bind(T, Given.alias("t", op.time()))), null);
+        return new LetThrough(ENERGY.eval(t, id, "/I2t", "within the required time", bind(I, current), bind(T, Given.alias("t", op.time()))), null,
+                "I²t taken as I² · t with the required disconnection time t as the operating time (an upper bound)");
     }
 
     private static Q rel(Q q, String symbol) {

@@ -27,7 +27,7 @@ import org.feedernote.trace.TraceJson;
 final class CheckCommand implements Callable<Integer> {
     @Spec CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "INPUT", description = "design input, YAML or JSON (format 1)")
+    @Parameters(index = "0", paramLabel = "INPUT", description = "design input (format 1): YAML, JSON, an .xlsx workbook, or CSV files (a folder, or one of its files)")
     Path input;
 
     @Option(names = "--json", description = "print the result as JSON (the documented result format)")
@@ -35,6 +35,12 @@ final class CheckCommand implements Callable<Integer> {
 
     @Option(names = "--trace", paramLabel = "FILE", description = "also write the full calculation trace as JSON to FILE")
     Path trace;
+
+    @Option(names = "--xlsx", paramLabel = "FILE", description = "also write the result schedule as a workbook: every circuit, a sheet per board, the boards' fault levels and demand")
+    Path xlsx;
+
+    @Option(names = "--csv", paramLabel = "DIR", description = "also write the result schedule as CSV files into DIR (schedule.csv, boards.csv, one per board)")
+    Path csv;
 
     @Option(names = "--timings", description = "print the time each stage took to standard error (for profiling)")
     boolean timings;
@@ -65,6 +71,11 @@ final class CheckCommand implements Callable<Integer> {
             if (result == null) return ExitStatus.BAD_INPUT;
             t2 = System.nanoTime();
             if (trace != null && !writeTrace(result, data, progress, messages)) return ExitStatus.BAD_INPUT;
+            if (xlsx != null) {
+                progress.stage("writing " + xlsx.getFileName());
+                if (!Schedules.xlsx(result, xlsx, messages)) return ExitStatus.BAD_INPUT;
+            }
+            if (csv != null && !Schedules.csv(result, csv, messages)) return ExitStatus.BAD_INPUT;
         } finally {
             progress.endLine();
         }

@@ -8,7 +8,7 @@ import org.feedernote.Version;
         description = "Checks low-voltage installation designs and writes worked, traced calculation notes.%n"
                 + "It supports, and does not replace, the judgement of a competent, licensed person; the applicable "
                 + "local code and the manufacturer's data govern.",
-        subcommands = {CheckCommand.class, NoteCommand.class, VerifyCommand.class, DiffCommand.class, SchemaCommand.class, GenerateCommand.class, SelfCheckCommand.class},
+        subcommands = {CheckCommand.class, NoteCommand.class, VerifyCommand.class, DiffCommand.class, SchemaCommand.class, GenerateCommand.class, SelfCheckCommand.class, WorkbookCommand.class},
         exitCodeListHeading = "%nExit status:%n",
         exitCodeList = {"0:every check passes", "1:some check fails", "2:the input or the command line is wrong",
                 "3:internal error (a bug; please report it)"})

@@ -64,12 +64,14 @@ final class Loading {
 
     /** The installation, or null after the errors were printed. */
     static Installation load(Path input, PrintWriter err) {
-        if (!Files.isRegularFile(input)) {
+        boolean sheets = org.feedernote.input.SheetInput.isSheetInput(input);
+        if (!Files.isRegularFile(input) && !(sheets && Files.exists(input))) {
             err.println("feedernote: " + input + ": no such file");
             return null;
         }
         try {
-            return warned(InputReader.read(input), err);
+            // A workbook (.xlsx), a folder of CSV files or one of them: the same rules as YAML.
+            return warned(sheets ? org.feedernote.input.SheetInput.read(input) : InputReader.read(input), err);
         } catch (InputException e) {
             for (InputError error : e.errors()) err.println(error.text());
             err.println(e.errors().size() + (e.errors().size() == 1 ? " error" : " errors") + "; nothing was written.");

@@ -11,6 +11,8 @@ public final class Main {
     private Main() {}
 
     public static void main(String[] args) {
+        // POI brings the Log4j API, which commons-logging (PDFBox) then finds: without this, a complaint on standard error.
+        org.feedernote.input.PoiLogging.quiet();
         if (args.length > 0 && CALCULATING.contains(args[0])) loadReferenceDataAlongside();
         PrintWriter out = new PrintWriter(new OutputStreamWriter(System.out, StandardCharsets.UTF_8), true);
         PrintWriter err = new PrintWriter(new OutputStreamWriter(System.err, StandardCharsets.UTF_8), true);

@@ -18,6 +18,7 @@ import org.feedernote.calc.CircuitResult;
 import org.feedernote.calc.Result;
 import org.feedernote.data.ReferenceData;
 import org.feedernote.model.Installation;
+import org.feedernote.report.NoteLayout;
 import org.feedernote.model.Status;
 import org.feedernote.report.NoteRenderer;
 
@@ -29,20 +30,29 @@ import org.feedernote.report.NoteRenderer;
 final class NoteCommand implements Callable<Integer> {
     @Spec CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "INPUT", description = "design input, YAML or JSON (format 1)")
+    @Parameters(index = "0", paramLabel = "INPUT", description = "design input (format 1): YAML, JSON, an .xlsx workbook, or CSV files (a folder, or one of its files)")
     Path input;
 
     @Option(names = {"-o", "--output"}, paramLabel = "DIR", description = "folder to write into (default: the current folder)")
     Path output = Path.of(".");
 
-    @Option(names = "--templates", paramLabel = "DIR", description = "a folder with a copy of the note templates (front.ftlh, section.ftlh, appendix.ftlh, steps.ftlh, note.css) to use instead of the packaged ones")
+    @Option(names = "--templates", paramLabel = "DIR", description = "a folder with a copy of the note templates (every file of report-templates) to use instead of the packaged ones")
     Path templates;
+
+    @Option(names = "--xlsx", description = "also write the result schedule as a workbook beside the PDF (<reference>-<revision>.xlsx)")
+    boolean xlsx;
 
     @Option(names = "--force", description = "replace an existing note that holds a different calculation")
     boolean force;
 
     @Option(names = "--previous", paramLabel = "OLD", description = "an earlier revision (input or note): the note gains a section listing the changes since it")
     Path previous;
+
+    @Option(names = "--detail", paramLabel = "FORM", description = "compact (default): one block per circuit, a cable's impedance derived once; full: every step numbered, as a checker follows it line by line")
+    String detail = "compact";
+
+    @Option(names = "--circuits", paramLabel = "ID,ID", split = ",", description = "with --detail full: the circuits worked in full (the others stay compact)")
+    List<String> circuits;
 
     static String existingFingerprint(Path pdf) {
         try {
@@ -66,7 +76,30 @@ final class NoteCommand implements Callable<Integer> {
         }
     }
 
+    /** The layout the options ask for, or null (after saying why) where they are wrong. */
+    private NoteLayout layout(Installation inst, PrintWriter err) {
+        if (!detail.equals("compact") && !detail.equals("full")) {
+            err.println("feedernote: --detail " + detail + ": expected compact or full");
+            return null;
+        }
+        if (circuits == null || circuits.isEmpty()) return detail.equals("full") ? NoteLayout.FULL : NoteLayout.COMPACT;
+        if (!detail.equals("full")) {
+            err.println("feedernote: --circuits names the circuits worked in full: give it with --detail full");
+            return null;
+        }
+        java.util.Set<String> known = new java.util.HashSet<>();
+        for (var c : inst.circuits()) known.add(c.id());
+        List<String> unknown = circuits.stream().filter(id -> !known.contains(id)).toList();
+        if (!unknown.isEmpty()) {
+            err.println("feedernote: --circuits: no circuit " + String.join(", ", unknown) + " in " + input);
+            return null;
+        }
+        return NoteLayout.fullFor(circuits);
+    }
+
     private Integer write(Installation inst, PrintWriter out, PrintWriter err, Progress progress) throws IOException {
+        NoteLayout layout = layout(inst, err);
+        if (layout == null) return ExitStatus.BAD_INPUT;
         if (templates != null) {
             List<String> missing = NoteRenderer.TEMPLATE_FILES.stream()
                     .filter(f -> !java.nio.file.Files.isRegularFile(templates.resolve(f))).toList();
@@ -121,7 +154,7 @@ final class NoteCommand implements Callable<Integer> {
                 return ExitStatus.BAD_INPUT;
             }
         }
-        List<String> unprintable = NoteMaker.write(inst, result, data, templates, since, changes, pdf, traceFile, progress);
+        List<String> unprintable = NoteMaker.write(inst, result, data, templates, since, changes, layout, pdf, traceFile, progress);
         if (!unprintable.isEmpty()) {
             StringBuilder chars = new StringBuilder();
             for (String u : unprintable) chars.append(chars.length() == 0 ? "" : ", ").append(u).append(' ')
@@ -132,6 +165,11 @@ final class NoteCommand implements Callable<Integer> {
         }
         out.println("wrote " + pdf);
         out.println("wrote " + traceFile);
+        if (xlsx) {
+            Path schedule = output.resolve(base + ".xlsx");
+            if (!Schedules.xlsx(result, schedule, err)) return ExitStatus.BAD_INPUT;
+            out.println("wrote " + schedule);
+        }
         out.println(result.pass()
                 ? (result.notPerformed().isEmpty() ? "every check passes" : "the checks made pass; not checked by this version: " + String.join(", ", result.notPerformed()))
                 : result.failingChecks() + " check(s) fail; the note is stamped DOES NOT CONFORM");

@@ -12,7 +12,9 @@ import org.feedernote.data.ReferenceData;
 import org.feedernote.input.Canonical;
 import org.feedernote.model.Installation;
 import org.feedernote.report.NoteBuilder;
+import org.feedernote.report.NoteLayout;
 import org.feedernote.report.NoteRenderer;
+import org.feedernote.report.figure.NoteFigures;
 import org.feedernote.report.pdf.DeflatingFile;
 import org.feedernote.report.view.NoteView;
 import org.feedernote.trace.TraceJson;
@@ -51,7 +53,7 @@ final class NoteMaker {
      * placeholder).
      */
     static List<String> write(Installation inst, Result result, ReferenceData data, Path templates, String changesSince,
-                              List<String> changes, Path pdf, Path traceFile, Progress progress) throws IOException {
+                              List<String> changes, NoteLayout layout, Path pdf, Path traceFile, Progress progress) throws IOException {
         String fingerprint = fingerprint(inst, data);
         NoteRenderer renderer = new NoteRenderer(templates);
         int sections = result.trace().sections().size();
@@ -60,7 +62,7 @@ final class NoteMaker {
         // The view is built on a third thread: the trace's writing waits on its compression, and
         // the view needs neither.
         java.util.concurrent.FutureTask<NoteView> building = new java.util.concurrent.FutureTask<>(
-                () -> NoteBuilder.build(result, data, fingerprint, Version.engine(), changesSince, changes));
+                () -> NoteBuilder.build(result, data, fingerprint, Version.engine(), changesSince, changes, layout));
         Thread builder = new Thread(building, "feedernote-view");
         builder.setDaemon(true);
         builder.start();
@@ -73,10 +75,11 @@ final class NoteMaker {
              })) {
             progress.stage("preparing the note");
             NoteView view = built(building);
+            NoteFigures figures = NoteFigures.of(result);
             progress.stage("compressing the trace");
             deflated.finish();
             List<List<String>> unprintable = new java.util.ArrayList<>(1);
-            try (Files.Staged note = Files.stageFile(pdf, tmp -> unprintable.add(renderer.write(view, inst.project().date(), tmp,
+            try (Files.Staged note = Files.stageFile(pdf, tmp -> unprintable.add(renderer.write(view, figures, inst.project().date(), tmp,
                     progress, attachments(inst, NoteRenderer.Attachment.deflated(org.feedernote.archive.NoteArchive.TRACE_NAME,
                             "Calculation trace", deflated), templates, changesSince, changes))))) {
                 // The pair is replaced together: a run stopped before here leaves the previous note

@@ -105,7 +105,9 @@ final class VerifyCommand implements Callable<Integer> {
                     templates = java.nio.file.Files.createDirectories(scratch.resolve("templates"));
                     for (var t : archive.templates().entrySet()) java.nio.file.Files.write(templates.resolve(t.getKey()), t.getValue());
                 }
-                NoteMaker.write(inst, result, data, templates, archive.changesSince(), archive.changes(), again,
+                org.feedernote.report.NoteLayout layout = org.feedernote.report.NoteLayout.parse(archive.detail());
+                if (layout == null) layout = org.feedernote.report.NoteLayout.FULL;
+                NoteMaker.write(inst, result, data, templates, archive.changesSince(), archive.changes(), layout, again,
                         scratch.resolve("trace.json"), progress);
                 progress.stage("comparing the bytes");
                 if (java.nio.file.Files.mismatch(again, note) >= 0) {

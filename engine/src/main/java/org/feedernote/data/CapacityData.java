@@ -86,7 +86,9 @@ public final class CapacityData {
         String label;
         switch (method) {
             case E:
-                table = data.table("capacity-" + ins + "-efg.csv");
+                // Method E of aluminium cables has its own table (IEC 60364-5-52 Table B.52.11 or B.52.13), so that
+                // each cell cites the table it comes from.
+                table = data.table("capacity-" + ins + "-efg" + (conductor == Conductor.ALUMINIUM ? "-aluminium" : "") + ".csv");
                 column = conductor.token() + "_E" + loaded;
                 label = "method E, multicore, " + loaded + " loaded conductors";
                 break;

@@ -21,6 +21,7 @@ public final class ReferenceData {
     static final List<String> TABLE_FILES = List.of("conductor-resistance.csv", "conductor-materials.csv",
             "insulation-temperatures.csv", "insulation-thickness.csv", "capacity-pvc-2.csv", "capacity-pvc-3.csv",
             "capacity-xlpe-2.csv", "capacity-xlpe-3.csv", "capacity-pvc-efg.csv", "capacity-xlpe-efg.csv",
+            "capacity-pvc-efg-aluminium.csv", "capacity-xlpe-efg-aluminium.csv",
             "ambient-air.csv", "ambient-ground.csv", "grouping.csv", "grouping-ground.csv", "soil-resistivity.csv",
             "thermal-insulation.csv", "harmonics.csv", "devices.csv", "adiabatic.csv",
             "mcb-time-current.csv", "mcb-let-through.csv", "rcd-operating-times.csv", "gg-fuse-disconnection.csv",

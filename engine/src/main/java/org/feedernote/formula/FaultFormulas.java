@@ -50,6 +50,9 @@ public final class FaultFormulas {
     public static final Var T = var("t", "t", S);
     public static final Var I2T = var("I2t", "I²t", "A²s");
     public static final Var KF = var("k", "k", "A·√s/mm²");
+    public static final Var R1 = var("R1", "R_1", OHM);
+    public static final Var R2 = var("R2", "R_2", OHM);
+    public static final Var X_LOOP = var("Xloop", "X_loop", OHM);
 
     public static final Formula TRANSFORMER_IMPEDANCE = new Formula("z-transformer", "Transformer impedance", "Z_T", OHM,
             div(mul(div(v(UK), n(100)), sq(v(U))), mul(n(1000), v(SR))), IEC_60909 + ", 6.3.1, eq. (7) (S_rT in kVA)");
@@ -69,8 +72,10 @@ public final class FaultFormulas {
     public static final Formula DOUBLE = new Formula("double-phase", "Loop impedance from the phase impedance", "Z_e", OHM,
             mul(n(2), v(Z)), "line and return path of equal impedance (common practice, no source)");
 
-    public static final Formula RESISTANCE_AT = new Formula("r-at-theta", "Resistance at temperature", "R", OHM_PER_KM,
-            mul(v(R20), add(n(1), mul(v(ALPHA), sub(v(THETA), n(20))))), "IEC 60909-0:2016, eq. (34) / IEC 60287-1-1:2006, 2.1.1");
+    /** A run's resistance at a conductor temperature, in one step: the per-km value at θ times the length, over n in parallel. */
+    public static final Formula RUN_RESISTANCE_AT = new Formula("r-run-at-theta", "Resistance of the run at temperature", "R", OHM,
+            div(mul(v(R20), add(n(1), mul(v(ALPHA), sub(v(THETA), n(20)))), v(L)), mul(n(1000), v(N))),
+            "IEC 60287-1-1:2006, 2.1.1 (R = R_20·[1 + α_20·(θ − 20)]) for the length L, n conductors in parallel");
 
     public static final Formula LENGTH_RESISTANCE = new Formula("r-length", "Resistance of the run", "R", OHM,
             div(mul(v(R_KM), v(L)), mul(n(1000), v(N))), "R = R′ · L / n (n conductors in parallel)");
@@ -83,6 +88,14 @@ public final class FaultFormulas {
 
     public static final Formula MAGNITUDE = new Formula("z-magnitude", "Impedance magnitude", "|Z|", OHM,
             sqrt(add(sq(v(R)), sq(v(X)))), "|Z| = √(R² + X²)");
+
+    /**
+     * The earth-fault loop impedance at a circuit's far end in one step: the supply side's Z_e and
+     * the cable's loop (R_1 + R_2 with the loop reactance) added as magnitudes, as the hand method does.
+     */
+    public static final Formula FAR_END_LOOP = new Formula("zs-far-end", "Earth-fault loop impedance at the far end", "Z_s", OHM,
+            add(v(ZE), sqrt(add(sq(add(v(R1), v(R2))), sq(v(X_LOOP))))),
+            "IEC 60364-4-41:2005, 411.4.4 (Z_s = Z_e + Z_loop), magnitudes added arithmetically (on the safe side)");
 
     public static final Formula THREE_PHASE_FAULT = new Formula("ik3", "Maximum three-phase fault current", "I_k3", KA,
             div(mul(v(C_MAX), v(U)), mul(SQRT3, v(Z), n(1000))), IEC_60909 + ", 7.1.1, eq. (29)");

@@ -61,4 +61,18 @@ public final class VoltageDropFormulas {
     public static final Formula STARTING_INCREMENT = new Formula("du-start-increment", "Added drop in the feeder while the motor starts", "ΔU_st", PERCENT,
             div(mul(n(100), add(mul(v(R), v(COS_ST)), mul(v(X), v(SIN_ST))), sub(v(I_ST), v(I_B)), v(L)), mul(n(1000), v(U_N))),
             "Starting current in excess of the running current, at the starting power factor (common practice, no source)");
+
+    public static final Var R_S = var("R_s", "R_s", OHM);
+    public static final Var X_S = var("X_s", "X_s", OHM);
+    public static final Var U_0 = var("U_0", "U_0", V);
+
+    /**
+     * The dip across the source (transformer or network) while a motor starts: the whole starting
+     * current flows through it, and the origin is at U_n before the motor starts. R_s and X_s are
+     * per phase for a three-phase motor, the line-neutral loop for a single-phase one; either way
+     * the drop is referred to U_0 (IEC 60364-5-52 Annex G's Δu = 100 u / U_0, with b = 1).
+     */
+    public static final Formula SOURCE_STARTING = new Formula("du-start-source", "Dip across the source while the motor starts", "ΔU_st", PERCENT,
+            div(mul(n(100), add(mul(v(R_S), v(COS_ST)), mul(v(X_S), v(SIN_ST))), v(I_ST)), v(U_0)),
+            "IEC 60364-5-52:2009, Annex G (u = b(R cos φ + X sin φ) I_B, Δu = 100 u/U_0, b = 1), with the source impedance of IEC 60909-0:2016, 6.2 and 6.3.1, at the starting current and power factor");
 }

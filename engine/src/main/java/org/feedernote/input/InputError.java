@@ -1,9 +1,18 @@
 package org.feedernote.input;
 
-/** One problem in a design input, with where it is and what was expected. */
-public record InputError(String file, int line, int column, String path, String message) implements Comparable<InputError> {
+/**
+ * One problem in a design input, with where it is and what was expected. place: where a
+ * spreadsheet or CSV input holds it ("circuits!F12"), given instead of line and column in the
+ * text; null for YAML and JSON. line and column then only order the errors.
+ */
+public record InputError(String file, int line, int column, String path, String message, String place) implements Comparable<InputError> {
+    public InputError(String file, int line, int column, String path, String message) {
+        this(file, line, column, path, message, null);
+    }
+
     public String text() {
-        return file + ":" + line + ":" + column + ": " + (path.isEmpty() ? "" : path + ": ") + message;
+        String at = place == null ? file + ":" + line + ":" + column : file + ": " + place;
+        return at + ": " + (path.isEmpty() ? "" : path + ": ") + message;
     }
 
     @Override public int compareTo(InputError o) {

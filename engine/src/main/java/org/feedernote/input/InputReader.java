@@ -25,8 +25,11 @@ public final class InputReader {
     private final List<InputError> errors = new ArrayList<>();
     private final List<InputWarning> warnings = new ArrayList<>();
 
-    private InputReader(String file) {
+    private final Locator locator;
+
+    private InputReader(String file, Locator locator) {
         this.file = file;
+        this.locator = locator;
     }
 
     public static Installation read(Path path) throws InputException {
@@ -55,9 +58,37 @@ public final class InputReader {
     }
 
     public static Installation parse(String name, String text, boolean json) throws InputException {
-        InputReader r = new InputReader(name);
-        Node root = TreeReader.read(name, text, json, r.errors);
-        if (root == null) throw new InputException(r.errors);
+        List<InputError> errors = new ArrayList<>();
+        Node root = TreeReader.read(name, text, json, errors);
+        if (root == null) throw new InputException(errors);
+        return parse(name, root, text, () -> TreeReader.read(name, text, json, new ArrayList<>()), null, errors);
+    }
+
+    /**
+     * Says where a position of a tree not read from text (a spreadsheet's cell) is, for messages:
+     * the place ("circuits!F12") and the key path as the place's reader knows it ("cable.size_mm2").
+     */
+    public interface Locator {
+        Located locate(int line, int column, String path);
+
+        record Located(String place, String path) {}
+    }
+
+    /**
+     * Validates and binds a located tree made by another reader (a workbook's, CSV files'): the same
+     * rules and messages as a YAML or JSON file. sourceText is what the note lists and embeds as the
+     * input; again makes the tree anew for the canonical form; locator gives the places of errors.
+     */
+    public static Installation parse(String name, Node root, String sourceText, java.util.function.Supplier<Node> again,
+                                     Locator locator) throws InputException {
+        return parse(name, root, sourceText, again, locator, List.of());
+    }
+
+    /** found: errors the tree's reader found already (a key given twice), reported with the others. */
+    private static Installation parse(String name, Node root, String sourceText, java.util.function.Supplier<Node> again,
+                                      Locator locator, List<InputError> found) throws InputException {
+        InputReader r = new InputReader(name, locator);
+        r.errors.addAll(found);
         Installation model = null;
         if (root instanceof Node.Obj) {
             // The structure check and the binding only read the tree: side by side. The binding
@@ -66,10 +97,10 @@ public final class InputReader {
             List<InputError> structural = new ArrayList<>();
             java.util.concurrent.CompletableFuture<Void> check = java.util.concurrent.CompletableFuture.runAsync(
                     () -> new StructureValidator(name, structural).check(root, InputSchema.ROOT, ""), InputReader::alongside);
-            InputReader alongside = new InputReader(name);
+            InputReader alongside = new InputReader(name, locator);
             RuntimeException failure = null;
             try {
-                model = alongside.bind(root, text, json);
+                model = alongside.bind(root, sourceText, again);
             } catch (RuntimeException e) {
                 failure = e;
             }
@@ -87,18 +118,33 @@ public final class InputReader {
                 if (failure != null) throw failure;
                 r.errors.addAll(alongside.errors);
             } else {
-                model = r.bind(root, text, json);
+                model = r.bind(root, sourceText, again);
             }
         } else {
             new StructureValidator(name, r.errors).check(root, InputSchema.ROOT, "");
-            model = r.errors.isEmpty() ? r.bind(root, text, json) : null;
+            model = r.errors.isEmpty() ? r.bind(root, sourceText, again) : null;
         }
         if (!r.errors.isEmpty() || model == null) {
-            List<InputError> sorted = new ArrayList<>(new java.util.LinkedHashSet<>(r.errors));
+            List<InputError> sorted = new ArrayList<>(new java.util.LinkedHashSet<>(located(r.errors, locator)));
             Collections.sort(sorted);
             throw new InputException(sorted);
         }
         return model;
+    }
+
+    private static List<InputError> located(List<InputError> errors, Locator locator) {
+        if (locator == null) return errors;
+        List<InputError> out = new ArrayList<>(errors.size());
+        for (InputError e : errors) {
+            Locator.Located at = locator.locate(e.line(), e.column(), e.path());
+            out.add(new InputError(e.file(), e.line(), e.column(), at.path(), e.message(), at.place()));
+        }
+        return out;
+    }
+
+    /** The tree of a YAML or JSON text already read without errors once, or null. */
+    static Node treeOrNull(String name, String text) {
+        return TreeReader.read(name, text, false, new ArrayList<>());
     }
 
     /** Parses a document into the located tree only (for canonical forms and diffs). */
@@ -172,19 +218,20 @@ public final class InputReader {
 
     private Where where(Node node, String path) {
         Node.Pos p = node == null ? new Node.Pos(1, 1) : node.pos();
-        return new Where(file, p.line(), p.column(), path);
+        return locator == null ? new Where(file, p.line(), p.column(), path)
+                : new Where(file, p.line(), p.column(), path, locator.locate(p.line(), p.column(), path).place());
     }
 
     // ---- binding and the rules that span several keys ----
 
-    /** The tree of a text already read without errors. */
-    private Node reread(String text, boolean json) {
-        Node root = TreeReader.read(file, text, json, new ArrayList<>());
+    /** The tree of an input already read without errors. */
+    private Node reread(java.util.function.Supplier<Node> again) {
+        Node root = again.get();
         if (root == null) throw new IllegalStateException(file + ": read once, but not again");
         return root;
     }
 
-    private Installation bind(Node root, String text, boolean json) {
+    private Installation bind(Node root, String text, java.util.function.Supplier<Node> again) {
         Project project = project(at(root, "project"));
         Basis basis = basis(at(root, "basis"));
         Supply supply = supply(at(root, "supply"));
@@ -215,7 +262,7 @@ public final class InputReader {
         if (errors.isEmpty()) singlePhaseBoards(circuits);
         voltages(at(root, "supply"), supply);
         return errors.isEmpty()
-                ? new Installation(file, project, basis, supply, List.copyOf(boards), List.copyOf(circuits), Canonical.lazy(() -> reread(text, json)),
+                ? new Installation(file, project, basis, supply, List.copyOf(boards), List.copyOf(circuits), Canonical.lazy(() -> reread(again)),
                         text, sortedWarnings())
                 : null;
     }
@@ -297,7 +344,8 @@ public final class InputReader {
                 setting(b, path, "voltage_drop_method", DropMethod.class, DropMethod.APPROXIMATE),
                 setting(b, path, "voltage_factor_max", 1.10), setting(b, path, "voltage_factor_min", 0.95),
                 num(b, "earth_electrode_resistance_ohm"),
-                setting(b, path, "impedance", ImpedanceBasis.class, ImpedanceBasis.DERIVED));
+                setting(b, path, "impedance", ImpedanceBasis.class, ImpedanceBasis.DERIVED),
+                setting(b, path, "minimum_size_mm2", Basis.DEFAULT_MINIMUM_SIZE_MM2));
     }
 
     private Supply supply(Node s) {
@@ -360,6 +408,15 @@ public final class InputReader {
         if (cable != null && conditions != null && (load != null || to != null)) {
             cable = cpcConstruction(at(c, "cable"), path + ".cable", cable, conditions.method(), to != null ? (phase != null ? 1 : 3) : load.phases(),
                     load != null && load.kind() == LoadKind.MOTOR);
+        }
+        // An invalid basis.minimum_size_mm2 is reported where it stands; the sizes are not held to it.
+        boolean minimumValid = ReferenceData.standardSizes().contains(basis.minimumSizeMm2().value()) && basis.minimumSizeMm2().value() <= 16;
+        if (cable != null && !cable.size().auto() && minimumValid && cable.size().mm2() < basis.minimumSizeMm2().value() - 1e-9) {
+            error(at(at(c, "cable"), "size_mm2"), path + ".cable.size_mm2", StructureValidator.num(cable.size().mm2())
+                    + " mm² is below the smallest line conductor of the design basis, " + StructureValidator.num(basis.minimumSizeMm2().value())
+                    + " mm² (basis.minimum_size_mm2" + (basis.minimumSizeMm2().given() ? "" : ", by default: " + Basis.MINIMUM_SIZE_SOURCE)
+                    + "); give " + StructureValidator.num(basis.minimumSizeMm2().value()) + " mm² or more, or, where the applicable wiring rules "
+                    + "allow a smaller conductor for this circuit (BS 7671 Table 52.3: 1.0 mm² copper for lighting), set basis.minimum_size_mm2");
         }
         if (cable != null && conditions != null) methodSuitsCable(at(c, "installation"), path + ".installation.method", conditions.method(), cable);
         if (conditions != null) {
@@ -541,7 +598,7 @@ public final class InputReader {
                     } else if (!ReferenceData.standard().hasResistance(cable.conductor(), teCpc)) {
                         error(at(c, "size_mm2"), join(path, "size_mm2"), "a " + StructureValidator.num(size.mm2()) + " mm² twin-and-earth cable has a "
                                 + StructureValidator.num(teCpc) + " mm² cpc (BS 6004), whose resistance the packaged table (IEC 60228) does not give; "
-                                + "choose 2.5 mm² or more");
+                                + "choose a larger cable");
                     } else if (!cpc.auto() && cpc.mm2() != teCpc) {
                         error(at(c, "cpc_mm2"), cpcPath, "a " + StructureValidator.num(size.mm2()) + " mm² twin-and-earth cable has a "
                                 + StructureValidator.num(teCpc) + " mm² cpc (BS 6004); found " + StructureValidator.num(cpc.mm2()) + ": give auto or "
@@ -666,7 +723,14 @@ public final class InputReader {
                 num(d, "disconnection_current_a"), num(d, "residual_current_a"), num(d, "let_through_a2s"),
                 word(d, "protection", Protection.class, Protection.OVERLOAD_AND_FAULT),
                 word(d, "residual_type", ResidualType.class, ResidualType.GENERAL),
-                num(d, "long_time_a"), num(d, "short_time_a"), num(d, "short_time_delay_s"));
+                num(d, "long_time_a"), num(d, "short_time_a"), num(d, "short_time_delay_s"), backup(at(d, "backup")));
+    }
+
+    private Device.Backup backup(Node b) {
+        if (b == null) return null;
+        String upstream = str(at(b, "upstream_circuit"));
+        Double combined = num(b, "combined_breaking_capacity_ka");
+        return upstream == null || combined == null ? null : new Device.Backup(upstream, combined);
     }
 
     private Load load(Node l, String path, Cable cable, Basis basis) {
@@ -752,6 +816,37 @@ public final class InputReader {
         return found;
     }
 
+    /** A back-up device must be upstream: the device of a feeder on the path from the origin to the circuit's board. */
+    private void backupOnPath(List<Node> circuitNodes, Map<String, String> fedBy) {
+        Map<String, String> fromOf = new HashMap<>();
+        for (Node c : circuitNodes) {
+            String id = str(at(c, "id"));
+            if (id != null) fromOf.put(id, str(at(c, "from")));
+        }
+        for (int i = 0; i < circuitNodes.size(); i++) {
+            Node c = circuitNodes.get(i);
+            Node d = at(c, "device");
+            Node b = d == null ? null : at(d, "backup");
+            Node up = b == null ? null : at(b, "upstream_circuit");
+            String upstream = str(up);
+            if (upstream == null) continue;
+            String from = str(at(c, "from"));
+            List<String> path = new ArrayList<>();
+            for (String board = from; board != null && fedBy.containsKey(board) && path.size() <= fedBy.size(); board = fromOf.get(fedBy.get(board))) {
+                path.add(fedBy.get(board));
+            }
+            if (path.contains(upstream)) continue;
+            String where = "circuits[" + i + "].device.backup.upstream_circuit";
+            if (path.isEmpty()) {
+                error(up, where, "'" + upstream + "' is not upstream: circuit '" + str(at(c, "id")) + "' starts at the origin board '" + from
+                        + "', which no feeder of this input supplies; remove backup (the supply's own device is outside the input)");
+            } else {
+                error(up, where, "'" + upstream + "' is not a feeder on the path from the origin to board '" + from + "'"
+                        + Suggest.hint(upstream, path) + "; the feeders on the path: " + String.join(", ", path));
+            }
+        }
+    }
+
     private void topology(List<Board> boards, List<Circuit> circuits, List<Node> circuitNodes) {
         Map<String, Board> byId = new HashMap<>();
         boards.forEach(b -> byId.put(b.id(), b));
@@ -804,6 +899,7 @@ public final class InputReader {
                     "the boards form a loop: " + String.join(" ← ", loop) + "; every board must trace back to the origin"));
         }
         if (looped || !errors.isEmpty()) return;
+        backupOnPath(circuitNodes, fedBy);
         List<String> origins = boardIds.stream().filter(b -> !fedBy.containsKey(b)).toList();
         if (origins.size() > 1) {
             Board second = byId.get(origins.get(1));

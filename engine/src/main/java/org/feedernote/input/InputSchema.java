@@ -53,6 +53,12 @@ public final class InputSchema {
                 "a standard size in mm²", true);
     }
 
+    /** A standard size up to 16 mm², never auto: the smallest sizes the wiring rules set lie there (IEC 60364-5-52:2009, Table 52.2: 1.5 to 16 mm²). */
+    private static Spec.Num smallSize(String description) {
+        return new Spec.Num(description, null, false, null, false, false,
+                ReferenceData.standardSizes().stream().filter(s -> s <= 16).toList(), "a standard size in mm², at most 16", false);
+    }
+
     /*
      * Where the ranges come from. Every number has one, so that no value a double cannot carry
      * through the calculation (1e308, .nan) reaches it and a slip of units (m for km) is refused
@@ -100,6 +106,7 @@ public final class InputSchema {
                 opt("disconnection_time_distribution_s", range("maximum disconnection time of distribution circuits in s", 0, true, 5, false), "5"),
                 opt("motor_starting_limit_percent", range("limit of the voltage dip at a motor's terminals while it starts, per cent of nominal", 0, true, 50, false), "10"),
                 opt("voltage_drop_method", word("which voltage-drop form is checked against the limit", DropMethod.class), "approximate"),
+                opt("minimum_size_mm2", smallSize("smallest line-conductor cross-section: the sizing never chooses less, and a given size_mm2 below it is refused (IEC 60364-5-52:2009, Table 52.2: 1.5 mm² copper for fixed power and lighting circuits; where the wiring rules allow 1 mm² copper for lighting, as BS 7671 Table 52.3 does, give 1)"), "1.5"),
                 opt("impedance", word("where r and x of the voltage drop come from: derived from the conductor and the cables' geometry, or read from the published mV/A/m tables", ImpedanceBasis.class), "derived"),
                 opt("voltage_factor_max", range("IEC 60909 voltage factor c_max for maximum fault currents", 1, false, 1.2, false), "1.10"),
                 opt("voltage_factor_min", range("IEC 60909 voltage factor c_min for minimum fault currents and maximum Zs", 0.8, false, 1, false), "0.95"),
@@ -190,7 +197,12 @@ public final class InputSchema {
                 // MCCB release settings: up to the largest frames; a delay up to the 1 s of selective breakers (common practice, no source).
                 opt("long_time_a", between("MCCB long-time (overload) current setting I_r in A, at most rating_a", 0.5, 6_300), "rating_a"),
                 opt("short_time_a", between("MCCB short-time pick-up current I_sd in A", 1, 200_000), "none"),
-                opt("short_time_delay_s", between("MCCB short-time delay t_sd in s", 0.01, 1), "none"));
+                opt("short_time_delay_s", between("MCCB short-time delay t_sd in s", 0.01, 1), "none"),
+                opt("backup", obj("back-up protection (IEC 60364-4-43, 434.5.1): an upstream device that, with this one, breaks the combined current the manufacturer states",
+                        req("upstream_circuit", id("id of the feeder, on the path from the origin to this circuit's board, whose device gives the back-up")),
+                        // The same ceiling as breaking_capacity_ka.
+                        req("combined_breaking_capacity_ka", upTo("the combination's breaking capacity in kA, from the manufacturer's back-up (cascading) data", 200))),
+                        "none (the device's own breaking capacity must reach the prospective fault current)"));
         Spec.Obj circuit = objOne("a circuit", List.of(List.of("load", "to")),
                 req("id", id("circuit id, unique across boards and circuits")),
                 opt("description", text("what the circuit is"), "empty"),

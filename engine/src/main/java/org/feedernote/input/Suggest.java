@@ -1,7 +1,10 @@
 package org.feedernote.input;
 
+import java.util.ArrayList;
 import java.util.Collection;
+import java.util.List;
 import java.util.Locale;
+import java.util.stream.Collectors;
 
 /** "Did you mean …?" for keys and enumerated words. */
 final class Suggest {
@@ -25,8 +28,29 @@ final class Suggest {
     }
 
     static String hint(String given, Collection<String> options) {
+        List<String> completions = completions(given, options);
+        if (completions.size() > 1) {
+            return " (did you mean " + completions.stream().map(o -> "'" + o + "'")
+                    .collect(Collectors.joining(", ")).replaceFirst(", ('[^']*')$", " or $1") + "?)";
+        }
         String n = nearest(given, options);
         return n == null ? "" : " (did you mean '" + n + "'?)";
+    }
+
+    /**
+     * The options the given word begins (a word cut short: 'D' for the methods D1 and D2), in
+     * their order; nearest would name one of them, or a shorter option one letter away ('C').
+     */
+    static List<String> completions(String given, Collection<String> options) {
+        String lower = given.toLowerCase(Locale.ROOT).replace('_', '-');
+        List<String> out = new ArrayList<>();
+        if (lower.isEmpty()) return out;
+        for (String option : options) {
+            String o = option.toLowerCase(Locale.ROOT).replace('_', '-');
+            if (o.equals(lower)) return List.of();
+            if (o.startsWith(lower)) out.add(option);
+        }
+        return out;
     }
 
     private static int distance(String a, String b) {

@@ -45,12 +45,17 @@ public final class NoteBuilder {
     private NoteBuilder() {}
 
     public static NoteView build(Result result, ReferenceData data, String fingerprint, String engineVersion) {
-        return build(result, data, fingerprint, engineVersion, null, List.of());
+        return build(result, data, fingerprint, engineVersion, null, List.of(), NoteLayout.COMPACT);
     }
+
+    /** The number of the first worked section: 1 basis, 2 summary, 3 boards, 4 diagram, 5 drop profile, 6 cable data. */
+    public static final int FIRST_WORKED = 7;
+    /** The number of the cable-data section. */
+    static final String CABLE_DATA = "6";
 
     /** @param changesSince the revision a list of changes is given against, or null for none */
     public static NoteView build(Result result, ReferenceData data, String fingerprint, String engineVersion,
-                                 String changesSince, List<String> changes) {
+                                 String changesSince, List<String> changes, NoteLayout layout) {
         Installation inst = result.input();
         Project p = inst.project();
         int failing = result.failingChecks();
@@ -76,7 +81,7 @@ public final class NoteBuilder {
                 result.notPerformed(), result.circuits().size(), checks);
 
         Map<String, String> circuitSection = new LinkedHashMap<>();
-        int n = 3;
+        int n = FIRST_WORKED;
         Map<String, Step> index = new java.util.HashMap<>();
         for (Step s : TraceWalk.steps(result.trace())) index.put(s.id(), s);
         for (Section s : result.trace().sections()) circuitSection.put(s.id(), Integer.toString(n++));
@@ -87,7 +92,13 @@ public final class NoteBuilder {
             if (c.circuit().to() != null) ids.add(c.circuit().to());
         }
         ids.removeIf(id -> id.indexOf('_') < 0);
-        List<SectionView> sections = new LazySections(result.trace().sections(), new Context(index, List.copyOf(ids)));
+        Context cx = new Context(index, List.copyOf(ids));
+        List<Section> compactSections = result.trace().sections().stream().filter(s -> !layout.fullFor(s.id())).toList();
+        CompactBuilder.Cables cables = CompactBuilder.cables(compactSections, cx, CABLE_DATA);
+        Map<String, CircuitResult> byId = new java.util.HashMap<>();
+        for (CircuitResult c : result.circuits()) byId.put(c.id(), c);
+        List<WorkedSection> sections = new LazySections(result.trace().sections(), cx, layout, byId, cables);
+        List<ContentsEntry> contents = contents(result.trace().sections(), p.title());
 
         List<SummaryRow> summary = new ArrayList<>();
         for (CircuitResult c : result.circuits()) summary.add(summaryRow(c, circuitSection.get(c.id())));
@@ -116,9 +127,12 @@ public final class NoteBuilder {
             Matcher m = DOCUMENT.matcher(standard);
             while (m.find()) documents.add(m.group());
         }
+        // A document cited both with and without its date is listed once, dated.
+        documents.removeIf(d -> d.indexOf(':') < 0 && documents.stream().anyMatch(o -> o.startsWith(d + ":")));
         List<SourceView> docs = documents.stream().map(d -> new SourceView(d, documentTitle(d), false)).toList();
         List<SourceView> tableViews = tables.values().stream()
-                .map(t -> new SourceView(t.citation(), t.title() + (t.notes().isEmpty() ? "" : ". " + t.notes()), t.fromMemory()))
+                // The compact note names each table; the full working adds the record of the copies it was checked against.
+                .map(t -> new SourceView(t.citation(), t.title() + (t.notes().isEmpty() || !layout.full() ? "" : ". " + t.notes()), t.fromMemory()))
                 .toList();
         List<SourceView> others = other.stream().map(o -> new SourceView(o, "", false)).toList();
 
@@ -130,9 +144,25 @@ public final class NoteBuilder {
                 ? "Every tabulated value this note uses was checked against a published copy of its table (Appendix A names each)."
                 : unverified.size() + " tabulated value" + (unverified.size() == 1 ? " this note uses was" : "s this note uses were")
                         + " recalled from the published standards and not yet checked against a published copy (listed in 1.5); check them against the current edition before relying on them.");
-        return new NoteView(cover, basis(inst), standards(), cautions, assumptions(inst.basis().impedance().value()), List.copyOf(unverified), summary, sections, docs, tableViews, others,
+        return new NoteView(cover, basis(inst), standards(), cautions, withRunAssumptions(assumptions(inst.basis().impedance().value()), result), List.copyOf(unverified), summary, sections, docs, tableViews, others,
                 listing, fileName(inst.sourceName()), fingerprint, shortPrint, p.status() == Status.DRAFT, engineVersion,
-                data.version(), running, changesSince, changes);
+                data.version(), running, changesSince, changes, layout.token(), layout.description(), CompactBuilder.boards(result),
+                cables.views(), contents);
+    }
+
+    /** The printed contents: the front sections, every worked section, the appendices. */
+    static List<ContentsEntry> contents(List<Section> worked, String title) {
+        List<ContentsEntry> out = new ArrayList<>(worked.size() + 8);
+        String[] front = {"Design basis and assumptions", "Summary schedule", "Board schedule", "Single-line diagram", "Voltage-drop profile", "Cable data"};
+        for (int i = 0; i < front.length; i++) out.add(new ContentsEntry(Integer.toString(i + 1), front[i], "s-" + (i + 1), 0));
+        int n = FIRST_WORKED;
+        for (Section s : worked) {
+            out.add(new ContentsEntry(Integer.toString(n), s.title() + (s.subtitle() == null || s.subtitle().isEmpty() ? "" : " — " + s.subtitle()), "s-" + n, 1));
+            n++;
+        }
+        out.add(new ContentsEntry("A", "Sources", "s-A", 0));
+        out.add(new ContentsEntry("B", "Design input", "s-B", 0));
+        return out;
     }
 
     /** Characters of the input listing per printed line (7 pt mono across the text width). */
@@ -211,6 +241,15 @@ public final class NoteBuilder {
                         : "Cable reactance is derived from the geometry (round conductors of the nominal area, IEC 60502-1 insulation thickness); shaped conductors and armour change it slightly.");
     }
 
+    /** The general assumptions, then those of this run that a verdict or a size rests on, each with the key that replaces it. */
+    static List<String> withRunAssumptions(List<String> general, Result result) {
+        List<String> lines = result.assumptionLines();
+        if (lines.isEmpty()) return general;
+        List<String> all = new ArrayList<>(general);
+        for (String line : lines) all.add("Resting on an assumption, not data: " + line + ".");
+        return List.copyOf(all);
+    }
+
     static List<BasisRow> basis(Installation inst) {
         Basis b = inst.basis();
         List<BasisRow> rows = new ArrayList<>();
@@ -237,6 +276,7 @@ public final class NoteBuilder {
         rows.add(row("Disconnection time, final circuits", b.disconnectionTimeFinalS(), " s", "IEC 60364-4-41:2005, Table 41.1"));
         rows.add(row("Disconnection time, distribution circuits", b.disconnectionTimeDistributionS(), " s", "IEC 60364-4-41:2005, 411.3.2.3"));
         rows.add(row("Motor-starting dip limit", b.motorStartingLimitPercent(), " %", "common practice, no source"));
+        rows.add(row("Smallest conductor size", b.minimumSizeMm2(), " mm²", "IEC 60364-5-52:2009, Table 52.2 (from memory)"));
         return rows;
     }
 
@@ -256,12 +296,23 @@ public final class NoteBuilder {
         String load = circuit.isFeeder() ? "feeder" : circuit.load().kind().token() + ", " + c.connection();
         String cable = (circuit.cable().parallel() > 1 ? circuit.cable().parallel() + " × " : "")
                 + ReferenceData.sizeKey(circuit.cable().size().mm2()) + " / " + ReferenceData.sizeKey(circuit.cable().cpc().mm2());
-        String rating = circuit.device().ratingA() == null ? "—" : trim(circuit.device().ratingA());
-        String governing = c.pass() ? c.governingCheck()
-                : c.failing().stream().map(CheckResult::name).collect(Collectors.joining(", "));
+        String rating = ratingText(c);
+        String governing = (c.pass() ? c.governingCheck()
+                : c.failing().stream().map(CheckResult::name).collect(Collectors.joining(", ")))
+                + (c.assumptionsBearing().isEmpty() ? "" : " (assumed, 1.4)");
         return new SummaryRow(c.id(), fromTo, load, fmt(c.designCurrent()), rating, cable, fmt(c.dropPercent()),
                 fmt(c.cumulativePercent()), c.limitPercent() == null ? "—" : fmt(c.limitPercent()),
                 c.pass() ? "PASS" : "FAIL", c.pass(), governing, section);
+    }
+
+    /**
+     * The device's rated current as given, or as the program chose it for rating_a: auto (marked
+     * so); "—" only where the result has none.
+     */
+    static String ratingText(CircuitResult c) {
+        Double given = c.circuit().device().ratingA();
+        if (given != null) return trim(given);
+        return c.rating() == null ? "—" : trim(c.rating().value()) + " (chosen)";
     }
 
     static String fmt(Q q) {
@@ -274,18 +325,26 @@ public final class NoteBuilder {
      * The worked sections, each built when it is asked for and not kept: a note of ten thousand
      * circuits is laid out one section at a time without holding every step's view at once.
      */
-    private static final class LazySections extends java.util.AbstractList<SectionView> {
+    private static final class LazySections extends java.util.AbstractList<WorkedSection> {
         private final List<Section> sections;
         private final Context cx;
+        private final NoteLayout layout;
+        private final Map<String, CircuitResult> results;
+        private final CompactBuilder.Cables cables;
 
-        LazySections(List<Section> sections, Context cx) {
+        LazySections(List<Section> sections, Context cx, NoteLayout layout, Map<String, CircuitResult> results, CompactBuilder.Cables cables) {
             this.sections = sections;
             this.cx = cx;
+            this.layout = layout;
+            this.results = results;
+            this.cables = cables;
         }
 
-        @Override public SectionView get(int i) {
+        @Override public WorkedSection get(int i) {
             Section s = sections.get(i);
-            return section(s, Integer.toString(i + 3), !s.id().equals("supply"), cx);
+            String number = Integer.toString(i + FIRST_WORKED);
+            if (layout.fullFor(s.id())) return section(s, number, true, cx);
+            return CompactBuilder.section(s, number, results.get(s.id()), cables.labelOf().get(s.id()), cables.cableOf().get(s.id()), cx);
         }
 
         @Override public int size() {

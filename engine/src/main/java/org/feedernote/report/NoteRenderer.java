@@ -31,6 +31,7 @@ import freemarker.template.Template;
 import freemarker.template.TemplateException;
 import freemarker.template.TemplateExceptionHandler;
 
+import org.feedernote.report.figure.NoteFigures;
 import org.feedernote.report.pdf.DeflatedAttachment;
 import org.feedernote.report.pdf.DeflatingFile;
 import org.feedernote.report.pdf.Fonts;
@@ -40,7 +41,7 @@ import org.feedernote.report.pdf.Style;
 import org.feedernote.report.pdf.StyleSheet;
 import org.feedernote.report.pdf.Typesetter;
 import org.feedernote.report.view.NoteView;
-import org.feedernote.report.view.SectionView;
+import org.feedernote.report.view.WorkedSection;
 
 /**
  * Lays the note out: FreeMarker templates → XHTML → PDF pages written by OpenPDF through the
@@ -52,7 +53,8 @@ import org.feedernote.report.view.SectionView;
  */
 public final class NoteRenderer {
     /** The files a template folder holds. */
-    public static final List<String> TEMPLATE_FILES = List.of("front.ftlh", "section.ftlh", "appendix.ftlh", "steps.ftlh", "note.css");
+    public static final List<String> TEMPLATE_FILES = List.of("front.ftlh", "figures.ftlh", "cables.ftlh", "section.ftlh", "compact.ftlh",
+            "appendix.ftlh", "steps.ftlh", "note.css");
 
     /** What a browser gives without a style sheet; the note's note.css comes after it and wins. */
     private static final String DEFAULTS = "b, strong, th, h1, h2, h3, h4 { font-weight: bold; } i, em { font-style: italic; } "
@@ -130,8 +132,9 @@ public final class NoteRenderer {
 
     /** The whole note's markup, part after part (for tests and for reading the templates' output). */
     public String xhtml(NoteView note) throws IOException {
-        StringBuilder b = new StringBuilder(part("front.ftlh", Map.of("note", note)));
-        for (SectionView s : note.sections()) b.append(part("section.ftlh", Map.of("note", note, "section", s)));
+        StringBuilder b = new StringBuilder();
+        for (String template : frontParts(NoteFigures.NONE)) b.append(part(template, Map.of("note", note)));
+        for (WorkedSection s : note.sections()) b.append(part(s.template(), Map.of("note", note, "section", s)));
         b.append(part("appendix.ftlh", appendixModel(note, unprintable(note, new Fonts()))));
         return b.toString();
     }
@@ -165,8 +168,13 @@ public final class NoteRenderer {
     }
 
     public byte[] pdf(NoteView note, String noteDate, Attachment... attachments) throws IOException {
+        return pdf(note, NoteFigures.NONE, noteDate, attachments);
+    }
+
+    /** The note with its pictures (the figures part, figures.ftlh, after the front matter). */
+    public byte[] pdf(NoteView note, NoteFigures figures, String noteDate, Attachment... attachments) throws IOException {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
-        Rendered r = render(note, noteDate, out, Progress.NONE, attachments);
+        Rendered r = render(note, figures, noteDate, out, Progress.NONE, attachments);
         return Determinism.pin(out.toByteArray(), Math.toIntExact(r.tail()), note.fingerprint(), noteDate);
     }
 
@@ -176,9 +184,15 @@ public final class NoteRenderer {
      * appendix lists them too.
      */
     public List<String> write(NoteView note, String noteDate, Path file, Progress progress, Attachment... attachments) throws IOException {
+        return write(note, NoteFigures.NONE, noteDate, file, progress, attachments);
+    }
+
+    /** As {@link #write(NoteView, String, Path, Progress, Attachment...)}, with the note's pictures. */
+    public List<String> write(NoteView note, NoteFigures figures, String noteDate, Path file, Progress progress, Attachment... attachments)
+            throws IOException {
         Rendered r;
         try (OutputStream out = new java.io.BufferedOutputStream(java.nio.file.Files.newOutputStream(file), 1 << 16)) {
-            r = render(note, noteDate, out, progress, attachments);
+            r = render(note, figures, noteDate, out, progress, attachments);
         }
         Determinism.pin(file, r.tail(), note.fingerprint(), noteDate);
         return r.unprintable();
@@ -236,7 +250,7 @@ public final class NoteRenderer {
     private record Rendered(long tail, List<String> unprintable) {}
 
     /** Lays the note out into {@code out}. */
-    private Rendered render(NoteView note, String noteDate, OutputStream out, Progress progress, Attachment... attachments)
+    private Rendered render(NoteView note, NoteFigures figures, String noteDate, OutputStream out, Progress progress, Attachment... attachments)
             throws IOException {
         StyleSheet sheet = StyleSheet.parse(DEFAULTS + css());
         float[] margins = pageMargins(sheet);
@@ -251,7 +265,7 @@ public final class NoteRenderer {
         document.addKeywords("feedernote fingerprint " + note.fingerprint());
         document.addAuthor(note.cover().signatures().get(0).name());
         document.addCreator("feedernote " + note.engineVersion());
-        Typesetter typesetter = new Typesetter(fonts, sheet, document, writer);
+        Typesetter typesetter = new Typesetter(fonts, sheet, document, writer, figures.registry());
         Style header = typesetter.styleOf("div", "running-header");
         Style footer = typesetter.styleOf("div", "running-footer");
         Style mark = typesetter.styleOf("div", "watermark");
@@ -265,6 +279,7 @@ public final class NoteRenderer {
         info.put(new PdfName("Reference"), new PdfString(note.cover().reference(), PdfObject.TEXT_UNICODE));
         info.put(new PdfName("Revision"), new PdfString(note.cover().revision(), PdfObject.TEXT_UNICODE));
         info.put(new PdfName("InputFile"), new PdfString(note.listingName(), PdfObject.TEXT_UNICODE));
+        info.put(new PdfName("Detail"), new PdfString(note.detail(), PdfObject.TEXT_UNICODE));
         PdfDate date = new PdfDate(calendar(noteDate));
         info.put(PdfName.CREATIONDATE, date);
         info.put(PdfName.MODDATE, date);
@@ -277,7 +292,8 @@ public final class NoteRenderer {
                     : PdfFileSpecification.fileEmbedded(writer, null, a.name(), a.content(), ATTACHMENT_COMPRESSION);
             writer.addFileAttachment(a.description(), spec);
         }
-        placeParts(note, typesetter, progress, appendixModel(note, unprintable));
+        placeParts(note, figures, typesetter, progress, appendixModel(note, unprintable));
+        typesetter.finishPageReferences();
         // Bytes written so far; OpenPDF's getCurrentDocumentSize() adds an estimate of the
         // cross-reference table and so lies past the font objects of a long note.
         long tail = counted.count;
@@ -316,9 +332,12 @@ public final class NoteRenderer {
      * (preparing costs more than placing). Each part's blocks depend on that part alone, so the
      * pages, and the bytes, come out the same as if one thread did everything.
      */
-    private void placeParts(NoteView note, Typesetter typesetter, Progress progress, Map<String, Object> appendix) throws IOException {
+    private void placeParts(NoteView note, NoteFigures figures, Typesetter typesetter, Progress progress, Map<String, Object> appendix)
+            throws IOException {
         int sections = note.sections().size();
-        int parts = sections + 2;
+        List<String> front = frontParts(figures);
+        int before = front.size();
+        int parts = before + sections + 1;
         java.util.concurrent.ExecutorService preparing = java.util.concurrent.Executors.newSingleThreadExecutor(r -> {
             Thread t = new Thread(r, "feedernote-note-prepare");
             t.setDaemon(true);
@@ -327,30 +346,53 @@ public final class NoteRenderer {
         try {
             java.util.ArrayDeque<java.util.concurrent.FutureTask<Typesetter.Prepared>> ahead = new java.util.ArrayDeque<>();
             int next = 0;
-            while (next < parts && ahead.size() < PREPARED_AHEAD) ahead.add(schedule(preparing, prepareTask(note, typesetter, next++, sections, appendix)));
+            while (next < parts && ahead.size() < PREPARED_AHEAD) {
+                ahead.add(schedule(preparing, prepareTask(note, figures, typesetter, next++, sections, appendix)));
+            }
             for (int i = 0; i < parts; i++) {
                 if (i == 0) progress.stage("laying out the front matter and the summary schedule");
-                if (i == sections + 1) progress.stage("laying out the appendices");
+                if (i == 1 && !figures.isEmpty()) progress.stage("drawing the single-line diagram and the voltage-drop profile");
+                if (i == before + sections) progress.stage("laying out the appendices");
                 java.util.concurrent.FutureTask<Typesetter.Prepared> first = ahead.removeFirst();
                 helpWhileWaiting(first, ahead);
                 Typesetter.Prepared part = await(first);
-                if (next < parts) ahead.add(schedule(preparing, prepareTask(note, typesetter, next++, sections, appendix)));
+                if (next < parts) ahead.add(schedule(preparing, prepareTask(note, figures, typesetter, next++, sections, appendix)));
                 typesetter.place(part);
-                if (i >= 1 && i <= sections) progress.sectionDone(i, sections);
+                if (i >= before && i < before + sections) progress.sectionDone(i - before + 1, sections);
             }
         } finally {
             preparing.shutdownNow();
         }
     }
 
-    private java.util.concurrent.Callable<Typesetter.Prepared> prepareTask(NoteView note, Typesetter typesetter, int index,
-                                                                            int sections, Map<String, Object> appendix) {
+    /** The parts laid out before the worked sections: the front matter, the pictures (where the note has them), the cable data. */
+    private static List<String> frontParts(NoteFigures figures) {
+        return figures.isEmpty() ? List.of("front.ftlh", "cables.ftlh") : List.of("front.ftlh", "figures.ftlh", "cables.ftlh");
+    }
+
+    private java.util.concurrent.Callable<Typesetter.Prepared> prepareTask(NoteView note, NoteFigures figures, Typesetter typesetter,
+                                                                            int at, int sections, Map<String, Object> appendix) {
+        List<String> front = frontParts(figures);
         return () -> {
-            if (index == 0) return typesetter.prepare(Markup.parse(part("front.ftlh", Map.of("note", note)), "front.ftlh"));
-            if (index > sections) return typesetter.prepare(Markup.parse(part("appendix.ftlh", appendix), "appendix.ftlh"));
-            SectionView s = note.sections().get(index - 1);
-            return typesetter.prepare(Markup.parse(part("section.ftlh", Map.of("note", note, "section", s)), "section.ftlh"));
+            if (at < front.size()) {
+                String template = front.get(at);
+                return prepare(typesetter, template, template.equals("figures.ftlh") ? Map.of("note", note, "figures", figures) : Map.of("note", note));
+            }
+            int index = at - front.size();
+            if (index >= sections) return prepare(typesetter, "appendix.ftlh", appendix);
+            WorkedSection s = note.sections().get(index);
+            return prepare(typesetter, s.template(), Map.of("note", note, "section", s));
         };
+    }
+
+    /** A part's template run, parsed and made into blocks; a figure the note lacks is the template's error. */
+    private Typesetter.Prepared prepare(Typesetter typesetter, String template, Map<String, Object> model) throws IOException {
+        Markup.Element root = Markup.parse(part(template, model), template);
+        try {
+            return typesetter.prepare(root);
+        } catch (IllegalArgumentException e) {
+            throw new IOException("the note template " + template + ": " + e.getMessage(), e);
+        }
     }
 
     private static java.util.concurrent.FutureTask<Typesetter.Prepared> schedule(java.util.concurrent.ExecutorService preparing,

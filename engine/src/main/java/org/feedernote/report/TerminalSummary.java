@@ -17,7 +17,7 @@ public final class TerminalSummary {
 
     public static String render(Result result, String fileName) {
         List<String[]> rows = new ArrayList<>();
-        rows.add(new String[] {"circuit", "from", "to/load", "Ib A", "size mm²", "ΔU own %", "ΔU total %", "limit %", "verdict", "governing / failing"});
+        rows.add(new String[] {"circuit", "from", "to/load", "Ib A", "In A", "size mm²", "ΔU own %", "ΔU total %", "limit %", "verdict", "governing / failing"});
         // Rows are independent: made side by side (the numbers' formatting is most of the time for large installations).
         rows.addAll(result.circuits().parallelStream().map(TerminalSummary::row).toList());
         int[] width = new int[rows.get(0).length];
@@ -54,6 +54,13 @@ public final class TerminalSummary {
             for (int i = 0; i < shown; i++) b.append("  ").append(undetermined.get(i)).append('\n');
             if (shown < undetermined.size()) b.append("  … and ").append(undetermined.size() - shown).append(" more (see --json or the note)\n");
         }
+        List<String> assumed = result.assumptionLines();
+        if (!assumed.isEmpty()) {
+            b.append('\n').append("Resting on assumptions, not data (the key named replaces each):\n");
+            int shown = Math.min(assumed.size(), 40);
+            for (int i = 0; i < shown; i++) b.append("  ").append(assumed.get(i)).append('\n');
+            if (shown < assumed.size()) b.append("  … and ").append(assumed.size() - shown).append(" more (see the note, 1.4)\n");
+        }
         b.append('\n');
         if (failing == 0) {
             b.append(result.notPerformed().isEmpty() ? "PASS: every check passes (" : "PASS: every check made passes (")
@@ -75,7 +82,7 @@ public final class TerminalSummary {
                 + ReferenceData.sizeKey(c.circuit().cable().size().mm2());
         String failing = c.failing().stream().map(CheckResult::name).collect(Collectors.joining(", "));
         return new String[] {c.id(), c.circuit().from(), to,
-                NumberFormatPolicy.number(c.designCurrent().value(), Units.A), size,
+                NumberFormatPolicy.number(c.designCurrent().value(), Units.A), NoteBuilder.ratingText(c), size,
                 NumberFormatPolicy.number(c.dropPercent().value(), Units.PERCENT),
                 NumberFormatPolicy.number(c.cumulativePercent().value(), Units.PERCENT),
                 c.limitPercent() == null ? "—" : NumberFormatPolicy.number(c.limitPercent().value(), Units.PERCENT),
@@ -86,7 +93,7 @@ public final class TerminalSummary {
     private static String line(String[] r, int[] width) {
         StringBuilder line = new StringBuilder();
         for (int i = 0; i < r.length; i++) {
-            boolean numeric = i >= 3 && i <= 7;
+            boolean numeric = i >= 3 && i <= 8;
             line.append(pad(r[i], width[i], numeric)).append(i + 1 < r.length ? "  " : "");
         }
         return line.toString().stripTrailing();

@@ -97,7 +97,7 @@ public final class Benchmark {
             Path pdf = dir.resolve("note.pdf");
             double[] noteSeconds = runs(() -> {
                 NoteView view = NoteBuilder.build(result, data, fingerprint, Version.engine());
-                renderer.write(view, inst.project().date(), pdf, NoteRenderer.Progress.NONE);
+                renderer.write(view, org.feedernote.report.figure.NoteFigures.of(result), inst.project().date(), pdf, NoteRenderer.Progress.NONE);
             });
             String text;
             int pages;

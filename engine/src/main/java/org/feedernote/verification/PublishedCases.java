@@ -103,6 +103,7 @@ public final class PublishedCases {
                 aluminium 16 1.91
                 aluminium 95 0.320
                 aluminium 240 0.125
+                copper 1 18.1
                 """)) {
             Conductor conductor = Conductor.valueOf(r[0].toUpperCase(Locale.ROOT));
             double mm2 = num(r[1]);

@@ -79,7 +79,10 @@ class ProtectiveConductorConstructionTest {
     @Test
     void twinAndEarthTakesThePublishedCpc() {
         // BS 6004 flat twin and earth: 2.5 mm² with a 1.5 mm² cpc (engx.theiet.org thread 31720, see twin-earth-cpc.csv).
-        Result r = Fixtures.run(oneCircuit(SOCKET, "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: auto, cpc_mm2: auto, cpc_kind: twin-and-earth}", "C"));
+        // A 20 A device: 1.5 mm² clipped direct carries 19.5 A (IEC 60364-5-52:2009 Table B.52.2, from memory), so 2.5 mm².
+        Result r = Fixtures.run(oneCircuit("{kind: socket, current_a: 18, power_factor: 0.9, phases: 1}",
+                "{conductor: copper, insulation: pvc, type: multicore, cores: 2, size_mm2: auto, cpc_mm2: auto, cpc_kind: twin-and-earth}", "C")
+                .replace("rating_a: 16", "rating_a: 20"));
         Cable cable = only(r).circuit().cable();
         assertEquals(2.5, cable.size().mm2());
         assertEquals(1.5, cable.cpc().mm2());

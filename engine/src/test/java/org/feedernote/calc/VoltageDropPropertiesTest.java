@@ -21,8 +21,11 @@ import org.feedernote.data.ReferenceData;
  * and the exact form agrees with a phasor calculation.
  */
 class VoltageDropPropertiesTest {
-    /** Sizes the packaged capacity tables cover (IEC 60364-5-52 Tables B.52.2 to B.52.5 end at 300 mm²). */
-    private static final List<Double> SIZES = ReferenceData.standardSizes().stream().filter(s -> s <= 300).toList();
+    /**
+     * Sizes the packaged capacity tables cover for multicore cables clipped direct (IEC 60364-5-52 Tables B.52.2
+     * to B.52.5, 1.5 to 300 mm²), at or above the default smallest line conductor (1.5 mm², Table 52.2).
+     */
+    private static final List<Double> SIZES = ReferenceData.standardSizes().stream().filter(s -> s >= 1.5 && s <= 300).toList();
 
     record Case(String insulation, int phases, double pf, double current, double length) {}
 

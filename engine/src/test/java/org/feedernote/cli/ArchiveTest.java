@@ -117,6 +117,72 @@ class ArchiveTest {
         assertTrue(json.out().contains("\"added\""), json.out());
     }
 
+    /** A copy of a note with one byte of its subject line changed: the PDF still reads, its bytes differ. */
+    static Path withOneByteEdited(Path pdf, Path copy) throws IOException {
+        byte[] bytes = java.nio.file.Files.readAllBytes(pdf);
+        byte[] marker = "/Subject(Calculation note".getBytes(StandardCharsets.ISO_8859_1);
+        int at = indexOf(bytes, marker);
+        assertTrue(at >= 0, "the note has a subject line");
+        int letter = at + "/Subject(C".length();
+        bytes[letter] = (byte) (bytes[letter] == 'a' ? 'e' : 'a');
+        java.nio.file.Files.write(copy, bytes);
+        return copy;
+    }
+
+    private static int indexOf(byte[] haystack, byte[] needle) {
+        outer:
+        for (int i = 0; i + needle.length <= haystack.length; i++) {
+            for (int j = 0; j < needle.length; j++) if (haystack[i + j] != needle[j]) continue outer;
+            return i;
+        }
+        return -1;
+    }
+
+    /** A note verifies; the same note with one byte edited is reported as differing (exit status 1). */
+    static void verifiesAndDetectsAnEditedByte(Path pdf) throws IOException {
+        CommandLineTest.Run ok = CommandLineTest.run("verify", pdf.toString());
+        assertEquals(0, ok.status(), pdf + ": " + ok.out() + ok.err());
+        assertTrue(ok.out().contains("byte-identical"), ok.out());
+        Path edited = withOneByteEdited(pdf, pdf.resolveSibling("edited-" + pdf.getFileName()));
+        CommandLineTest.Run bad = CommandLineTest.run("verify", edited.toString());
+        assertEquals(1, bad.status(), edited + ": " + bad.out() + bad.err());
+        assertTrue(bad.out().contains("bytes differ"), bad.out());
+    }
+
+    @Test
+    void theCompactNoteVerifiesAndAnEditedByteIsFound() throws IOException {
+        verifiesAndDetectsAnEditedByte(note);
+    }
+
+    @Test
+    void theFullWorkingVerifiesInBothFormsAndAnEditedByteIsFound() throws IOException {
+        Path full = dir.resolve("full");
+        CommandLineTest.Run r = CommandLineTest.run("note", Fixtures.inputs().resolve("bakery-small.yaml").toString(), "-o", full.toString(),
+                "--detail", "full");
+        assertEquals(0, r.status(), r.err());
+        verifiesAndDetectsAnEditedByte(full.resolve("KLB-E-CN-001-A.pdf"));
+        Path some = dir.resolve("some");
+        r = CommandLineTest.run("note", Fixtures.inputs().resolve("bakery-small.yaml").toString(), "-o", some.toString(),
+                "--detail", "full", "--circuits", "L-SHOP,M-MIX");
+        assertEquals(0, r.status(), r.err());
+        verifiesAndDetectsAnEditedByte(some.resolve("KLB-E-CN-001-A.pdf"));
+        assertTrue(java.nio.file.Files.size(full.resolve("KLB-E-CN-001-A.pdf")) > java.nio.file.Files.size(some.resolve("KLB-E-CN-001-A.pdf")));
+    }
+
+    @Test
+    void detailOptionsThatMakeNoSenseAreRefused() {
+        String input = Fixtures.inputs().resolve("bakery-small.yaml").toString();
+        CommandLineTest.Run r = CommandLineTest.run("note", input, "-o", dir.resolve("x").toString(), "--detail", "brief");
+        assertEquals(2, r.status());
+        assertTrue(r.err().contains("expected compact or full"), r.err());
+        r = CommandLineTest.run("note", input, "-o", dir.resolve("x").toString(), "--circuits", "L-SHOP");
+        assertEquals(2, r.status());
+        assertTrue(r.err().contains("--detail full"), r.err());
+        r = CommandLineTest.run("note", input, "-o", dir.resolve("x").toString(), "--detail", "full", "--circuits", "L-NONE");
+        assertEquals(2, r.status());
+        assertTrue(r.err().contains("no circuit L-NONE"), r.err());
+    }
+
     @Test
     void aNoteForADifferentCalculationIsNotOverwrittenWithoutForce() throws IOException {
         Path other = dir.resolve("other");
@@ -144,8 +210,7 @@ class ArchiveTest {
             assertFalse(text.contains("[{"), "the changes are written out, never as JSON");
         }
         // The note carries the changes it lists, so that it can be written again byte for byte.
-        CommandLineTest.Run v = CommandLineTest.run("verify", out.resolve("KLB-E-CN-001-B.pdf").toString());
-        assertEquals(0, v.status(), v.out() + v.err());
+        verifiesAndDetectsAnEditedByte(out.resolve("KLB-E-CN-001-B.pdf"));
     }
 
     @Test

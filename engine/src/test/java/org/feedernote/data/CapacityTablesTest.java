@@ -37,6 +37,8 @@ class CapacityTablesTest {
     private static final String ATLAS_B2_C = "IEC 60364-5-52 methods B2 and C (PVC, three loaded copper conductors), Atlas Copco "
             + "instruction books on easymanua.ls: GA 7 VSD 2920 7104 10 p. 90, GA 11+ 2920 7118 31 p. 132, GA 75+ 2920 7109 60 p. 190";
     private static final String FROM_MEMORY = "from memory (no published copy seen)";
+    private static final String UK_1MM_FROM_MEMORY = "BS 7671:2018 Appendix 4 Tables 4D1A (A1, B1) and 4D2A (A2, B2, C, E), 1 mm² row, "
+            + FROM_MEMORY;
 
     /** A block of cells: a header of columns, then rows led by the size; "-" where the block says nothing. */
     private record Block(String table, boolean recalled, String source, String text) {}
@@ -47,6 +49,11 @@ class CapacityTablesTest {
 
     private static Block recalled(String table, String text) {
         return new Block(table, true, FROM_MEMORY, text);
+    }
+
+    /** The 1 mm² row of a PVC table, recalled from the UK tables whose cells from 1.5 mm² are the IEC table's. */
+    private static Block recalledUk1mm(String table, String text) {
+        return new Block(table, true, UK_1MM_FROM_MEMORY, text);
     }
 
     // ---------------------------------------------------------------- capacity-xlpe-efg.csv, Table B.52.12
@@ -87,6 +94,26 @@ class CapacityTablesTest {
                 185  542 456
                 240  641 538
                 300  741 621
+                """));
+    }
+
+    // ---------------------------------------------------------------- capacity-xlpe-efg-aluminium.csv, Table B.52.13
+
+    @Test
+    void xlpeAluminiumMethodEIsRecalledWhole() {
+        hold(recalled("capacity-xlpe-efg-aluminium.csv", """
+                size aluminium_E2 aluminium_E3
+                16   89  77
+                25   108 97
+                35   135 120
+                50   164 146
+                70   211 187
+                95   257 227
+                120  300 263
+                150  346 304
+                185  397 347
+                240  470 409
+                300  543 471
                 """));
     }
 
@@ -143,9 +170,32 @@ class CapacityTablesTest {
                 185  434  364  463  427  521  480
                 240  514  430  546  507  615  569
                 300  593  497  629  587  709  659
+                """), recalledUk1mm("capacity-pvc-efg.csv", """
+                size copper_E2 copper_E3
+                1    17   14.5
                 """));
         assertEquals(308, CAPACITY.tabulated("t", Insulation.PVC, Conductor.COPPER, Method.F, 3, CableType.SINGLE_CORE,
                 Formation.TREFOIL, 120).value(), ATLAS_F);
+    }
+
+    // ---------------------------------------------------------------- capacity-pvc-efg-aluminium.csv, Table B.52.11
+
+    @Test
+    void pvcAluminiumMethodEIsRecalledWhole() {
+        hold(recalled("capacity-pvc-efg-aluminium.csv", """
+                size aluminium_E2 aluminium_E3
+                16   73  61
+                25   89  78
+                35   111 96
+                50   135 117
+                70   173 150
+                95   210 183
+                120  244 212
+                150  282 245
+                185  322 280
+                240  380 330
+                300  439 381
+                """));
     }
 
     // ---------------------------------------------------------------- capacity-xlpe-2.csv, Table B.52.3
@@ -242,8 +292,20 @@ class CapacityTablesTest {
                 185  295  340  424  304  320
                 240  346  398  500  351  368
                 300  396  455  576  396  413
+                """), recalled("capacity-xlpe-3.csv", """
+                size aluminium_A1 aluminium_A2 aluminium_B1 aluminium_B2 aluminium_C aluminium_D1 aluminium_D2
+                16   58  55  71  64  76  61  64
+                25   76  71  94  84  90  78  82
+                35   94  87  116 103 112 94  98
+                50   113 104 139 124 136 112 116
+                70   143 131 176 156 174 138 143
+                95   174 157 213 188 211 164 169
+                120  202 180 246 216 245 186 192
+                150  232 206 277 240 283 210 217
+                185  265 233 314 272 323 236 243
+                240  312 273 368 318 382 272 280
+                300  360 313 417 362 440 308 316
                 """));
-        assertFalse(DATA.table("capacity-xlpe-3.csv").columns().contains("aluminium_C"), "no aluminium is recalled for this table");
     }
 
     // ---------------------------------------------------------------- capacity-pvc-3.csv, Table B.52.4
@@ -282,6 +344,9 @@ class CapacityTablesTest {
                 185  245  223  296  255  341  243  278  194 176 230 199 259 190 214
                 240  286  261  346  297  403  280  320  227 207 269 232 305 218 250
                 300  328  298  394  339  464  316  359  261 237 306 265 351 247 282
+                """), recalledUk1mm("capacity-pvc-3.csv", """
+                size copper_A1 copper_A2 copper_B1 copper_B2 copper_C
+                1    10.5 10   12   11.5 13.5
                 """));
         // The copy prints the C cell at 1.5 mm² as "< 17 A" (whole amperes): it does not settle the recalled 17.5 A.
         assertTrue(Provenance.recalled(DATA.table("capacity-pvc-3.csv"), "1.5", "copper_C"));
@@ -309,6 +374,9 @@ class CapacityTablesTest {
                 185  273  248  341  294  392  292  331  215 195 266 230 298 228 255
                 240  321  291  400  344  461  336  382  252 229 312 269 352 262 298
                 300  367  334  458  394  530  379  427  289 263 358 308 406 296 336
+                """), recalledUk1mm("capacity-pvc-2.csv", """
+                size copper_A1 copper_A2 copper_B1 copper_B2 copper_C
+                1    11   11   13.5 13   15
                 """));
     }
 
@@ -317,7 +385,7 @@ class CapacityTablesTest {
     @Test
     void aTableWithARecalledCellSaysSoInItsHeader() {
         for (String name : List.of("capacity-pvc-2.csv", "capacity-pvc-3.csv", "capacity-xlpe-2.csv", "capacity-xlpe-3.csv",
-                "capacity-pvc-efg.csv", "capacity-xlpe-efg.csv")) {
+                "capacity-pvc-efg.csv", "capacity-xlpe-efg.csv", "capacity-pvc-efg-aluminium.csv", "capacity-xlpe-efg-aluminium.csv")) {
             ReferenceTable t = DATA.table(name);
             assertTrue(t.ref().fromMemory(), name);
             assertFalse(t.ref().notes().contains("they agree with BS 7671"), name + " no longer claims an unchecked agreement");
@@ -329,6 +397,72 @@ class CapacityTablesTest {
         // CapacityData reads copper_G-horizontal for every method G cable; copper_G-vertical is held above but not yet used.
         assertEquals(500, CAPACITY.tabulated("t", Insulation.XLPE, Conductor.COPPER, Method.G, 3, CableType.SINGLE_CORE,
                 Formation.FLAT_SPACED, 120).value(), UK_4E1A);
+    }
+
+    @Test
+    void aluminiumCellsSitBelowTheCopperOnesInTheRatioOfTheConductivities() {
+        // Common practice, no source: at equal size and method an aluminium conductor (resistance 1.6 times
+        // copper's, IEC 60228 Table 2) carries some 0.78 times the copper current, √(1/1.6); the published
+        // tables run between about 0.72 and 0.82. A recalled cell outside 0.70 to 0.85 is a slip.
+        for (String name : List.of("capacity-pvc-2.csv", "capacity-pvc-3.csv", "capacity-xlpe-2.csv", "capacity-xlpe-3.csv",
+                "capacity-pvc-efg-aluminium.csv", "capacity-xlpe-efg-aluminium.csv")) {
+            ReferenceTable t = DATA.table(name);
+            ReferenceTable copperTable = DATA.table(name.replace("-aluminium", ""));
+            for (String column : t.columns()) {
+                if (!column.startsWith("aluminium_")) continue;
+                String copper = "copper_" + column.substring("aluminium_".length());
+                for (String row : t.rowKeys()) {
+                    Double al = t.value(row, column);
+                    if (al == null) continue;
+                    double ratio = al / copperTable.value(row, copper);
+                    assertTrue(ratio > 0.70 && ratio < 0.85, name + " " + row + " mm² " + column + ": " + ratio);
+                }
+            }
+        }
+    }
+
+    @Test
+    void threeLoadedAluminiumConductorsCarryLessThanTwo() {
+        // Common practice, no source: a third loaded conductor adds heat, so every cell of B.52.5 is below B.52.3's.
+        ReferenceTable two = DATA.table("capacity-xlpe-2.csv");
+        ReferenceTable three = DATA.table("capacity-xlpe-3.csv");
+        for (String column : List.of("A1", "A2", "B1", "B2", "C", "D1", "D2")) {
+            for (String row : three.rowKeys()) {
+                Double al3 = three.value(row, "aluminium_" + column);
+                if (al3 == null) continue;
+                assertTrue(al3 < two.value(row, "aluminium_" + column), row + " mm² " + column);
+            }
+        }
+    }
+
+    @Test
+    void aluminiumXlpeThreeLoadedAndMethodEAreLookedUpNoLongerRefused() {
+        // Table B.52.5, aluminium, B2, 95 mm²: 188 A, from memory (the cell held above).
+        assertEquals(188, CAPACITY.tabulated("t", Insulation.XLPE, Conductor.ALUMINIUM, Method.B2, 3, CableType.MULTICORE, null, 95).value(),
+                FROM_MEMORY);
+        // Table B.52.13, aluminium, method E, three loaded, 120 mm²: 263 A, from memory.
+        assertEquals(263, CAPACITY.tabulated("t", Insulation.XLPE, Conductor.ALUMINIUM, Method.E, 3, CableType.MULTICORE, null, 120).value(),
+                FROM_MEMORY);
+        // Table B.52.11, aluminium, method E, two loaded, 50 mm²: 135 A, from memory.
+        assertEquals(135, CAPACITY.tabulated("t", Insulation.PVC, Conductor.ALUMINIUM, Method.E, 2, CableType.MULTICORE, null, 50).value(),
+                FROM_MEMORY);
+        // The step says the cell is recalled, so the note lists it.
+        assertTrue(CAPACITY.tabulated("t", Insulation.XLPE, Conductor.ALUMINIUM, Method.C, 3, CableType.MULTICORE, null, 240).table().fromMemory());
+        // Aluminium single-core cables in air (methods F and G) stay refused, in words naming the table.
+        DataGapException gap = org.junit.jupiter.api.Assertions.assertThrows(DataGapException.class, () -> CAPACITY.tabulated("t",
+                Insulation.XLPE, Conductor.ALUMINIUM, Method.F, 3, CableType.SINGLE_CORE, Formation.TREFOIL, 95));
+        assertTrue(gap.getMessage().contains("has no column for method F"), gap.getMessage());
+    }
+
+    @Test
+    void oneSquareMillimetreIsCoveredWhereACopyOrTheUkTablesGiveIt() {
+        // UK_4E1A column 5 (method B, three cables), 1 mm²: 15 A; the IEC multicore columns have no 1 mm² cell.
+        assertTrue(CAPACITY.covers(Insulation.XLPE, Conductor.COPPER, Method.B1, 3, null, false, 1));
+        assertFalse(CAPACITY.covers(Insulation.XLPE, Conductor.COPPER, Method.B2, 3, null, false, 1));
+        // UK_1MM_FROM_MEMORY: Table 4D2A method C, two-core, 1 mm²: 15 A.
+        assertEquals(15, CAPACITY.tabulated("t", Insulation.PVC, Conductor.COPPER, Method.C, 2, CableType.MULTICORE, null, 1).value(),
+                UK_1MM_FROM_MEMORY);
+        assertFalse(CAPACITY.covers(Insulation.PVC, Conductor.COPPER, Method.D1, 2, null, false, 1), "no 1 mm² cell in the ground");
     }
 
     // ---------------------------------------------------------------- helpers

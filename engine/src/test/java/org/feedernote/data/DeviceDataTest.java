@@ -133,11 +133,12 @@ class DeviceDataTest {
     }
 
     @Test
-    void mccbReleaseTolerancesAreRecalled() {
-        // From memory: IEC 60947-2:2016 8.3.3.1.2 (±20 %) and Table 6 (1.05 / 1.30); no copy seen.
+    void mccbReleaseMultiplesConfirmedToleranceRecalled() {
+        // IEC 60947-2 Table 6, 1.05 / 1.3 I_n: Schneider Electric FAQ FA369327 (se.com/in/en/faqs/FA369327/).
+        assertCell(1.05, DEVICES.mccbConventionalNonTrippingMultiple("x"), CONFIRMED, "FAQ FA369327");
+        assertCell(1.30, DEVICES.mccbConventionalTrippingMultiple("x"), CONFIRMED, "FAQ FA369327");
+        // From memory: IEC 60947-2:2016 8.3.3.1.2 (±20 %); no copy seen.
         assertCell(0.2, DEVICES.mccbInstantaneousTolerance("x"), RECALLED, "from memory");
-        assertCell(1.05, DEVICES.mccbConventionalNonTrippingMultiple("x"), RECALLED, "from memory");
-        assertCell(1.30, DEVICES.mccbConventionalTrippingMultiple("x"), RECALLED, "from memory");
     }
 
     @Test

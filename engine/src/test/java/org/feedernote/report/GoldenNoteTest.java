@@ -13,8 +13,9 @@ import org.junit.jupiter.params.provider.MethodSource;
 import org.feedernote.Fixtures;
 
 /**
- * Golden files: for every example input, the trace JSON and the note's text are compared whole
- * with golden-reports/. After a deliberate change, rewrite them with
+ * Golden files: for every example input, the trace JSON and the note's text in both forms (compact, the
+ * default, and the full working) are compared whole with golden-reports/. After a deliberate change,
+ * rewrite them with
  * {@code mvn -B verify -Dfeedernote.rewrite=true} and read the diff before committing.
  */
 class GoldenNoteTest {
@@ -28,6 +29,8 @@ class GoldenNoteTest {
         Path golden = Fixtures.root().resolve("golden-reports");
         compare(golden.resolve(name + ".trace.json"), note.trace());
         compare(golden.resolve(name + ".note.txt"), note.text());
+        // The full working, every step numbered (--detail full), has a golden text of its own.
+        compare(golden.resolve(name + ".full.note.txt"), NoteFixture.of(input, NoteLayout.FULL).text());
         // The examples' own texts are plain: a placeholder could only come from the program's or the
         // reference data's texts, which must all be printable in the note's fonts.
         assertFalse(note.text().contains(org.feedernote.report.pdf.Fonts.PLACEHOLDER),

@@ -26,12 +26,20 @@ record NoteFixture(Installation input, Result result, NoteView view, String trac
     }
 
     static NoteFixture of(Installation inst) throws Exception {
+        return of(inst, NoteLayout.COMPACT);
+    }
+
+    static NoteFixture of(Path file, NoteLayout layout) throws Exception {
+        return of(InputReader.read(file), layout);
+    }
+
+    static NoteFixture of(Installation inst, NoteLayout layout) throws Exception {
         ReferenceData data = ReferenceData.standard();
         Result result = new Engine(data).run(inst);
         String fingerprint = Canonical.fingerprint(inst.canonicalJson(), Version.engine(), data.version());
         String trace = TraceJson.write(result.trace(), Version.engine(), data.version(), fingerprint);
-        NoteView view = NoteBuilder.build(result, data, fingerprint, Version.engine());
-        byte[] pdf = new NoteRenderer(null).pdf(view, inst.project().date(),
+        NoteView view = NoteBuilder.build(result, data, fingerprint, Version.engine(), null, java.util.List.of(), layout);
+        byte[] pdf = new NoteRenderer(null).pdf(view, org.feedernote.report.figure.NoteFigures.of(result), inst.project().date(),
                 new NoteRenderer.Attachment("input.canonical.json", "Design input (canonical form)", inst.canonicalJson().getBytes(StandardCharsets.UTF_8)),
                 new NoteRenderer.Attachment("trace.json", "Calculation trace", trace.getBytes(StandardCharsets.UTF_8)));
         return new NoteFixture(inst, result, view, trace, pdf);

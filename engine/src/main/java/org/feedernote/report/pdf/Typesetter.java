@@ -47,6 +47,9 @@ public final class Typesetter {
     private final PdfWriter writer;
     private final float bodyWidth;
     private final float bodyHeight;
+    /** The figures templates may place, by name, and how their text reaches the PDF's fonts. */
+    private final java.util.Map<String, Figure> figures;
+    private final com.lowagie.text.pdf.FontMapper figureFonts;
     /** Where the next block begins on the current page (points from the page's foot). */
     private float y;
     /** Nothing placed on the current page yet: space above the first block is dropped, as at a page top. */
@@ -59,7 +62,21 @@ public final class Typesetter {
      * A block and its height: in the flow a {@link Text}, {@link Rule} or {@link PdfPTable}; inside
      * a table cell an OpenPDF element.
      */
-    private record Block(Object content, float height, boolean keepWithNext, String outline) implements Item {}
+    private record Block(Object content, float height, boolean keepWithNext, String outline, String pageRef) implements Item {
+        Block(Object content, float height, boolean keepWithNext, String outline) {
+            this(content, height, keepWithNext, outline, null);
+        }
+    }
+
+    /** The page each heading with an id began on (h2 ids). */
+    private final java.util.Map<String, Integer> anchorPages = new java.util.HashMap<>();
+
+    /** A page number printed once the page of its anchor is known: drawn into a template placed at the right margin. */
+    private record PageRef(com.lowagie.text.pdf.PdfTemplate template, String anchor, BaseFont face, float size) {}
+
+    private final List<PageRef> pageRefs = new ArrayList<>();
+    /** Width kept at the right of a line that shows a page number. */
+    private static final float PAGE_REF_WIDTH = 14 * Style.MM;
 
     private record PageBreak() implements Item {}
 
@@ -69,10 +86,20 @@ public final class Typesetter {
     /** A paragraph of the flow broken into lines, {@code left} points in from the body's edge. */
     private record Text(List<LineBreaker.Line> lines, float left, float leading, float before, float after) {}
 
+    /** A figure, {@code left} points in from the body's edge, drawn at {@code width} × {@code height}. */
+    private record Picture(Figure figure, String name, float left, float width, float height, float before, float after) {}
+
     /** A rule under a heading: its baseline {@code leading} below the block above. */
     private record Rule(float left, float leading, float lineWidth, java.awt.Color color, float after) {}
 
     public Typesetter(Fonts fonts, StyleSheet sheet, Document document, PdfWriter writer) {
+        this(fonts, sheet, document, writer, java.util.Map.of());
+    }
+
+    /** @param figures what {@code <div class="figure" data-figure="name"/>} in the markup names */
+    public Typesetter(Fonts fonts, StyleSheet sheet, Document document, PdfWriter writer, java.util.Map<String, Figure> figures) {
+        this.figures = java.util.Map.copyOf(figures);
+        this.figureFonts = FigureFonts.mapper(fonts);
         this.fonts = fonts;
         this.styles = new Style.Resolver(sheet);
         this.document = document;
@@ -116,6 +143,24 @@ public final class Typesetter {
         return new Prepared(items);
     }
 
+    /**
+     * Prints the page numbers of the page references placed so far (a contents page): called once
+     * every part is placed. An anchor that never appeared prints a dash.
+     */
+    public void finishPageReferences() {
+        for (PageRef r : pageRefs) {
+            Integer page = anchorPages.get(r.anchor());
+            String text = page == null ? "\u2014" : page.toString();
+            com.lowagie.text.pdf.PdfTemplate t = r.template();
+            t.beginText();
+            t.setFontAndSize(r.face(), r.size());
+            t.setTextMatrix(PAGE_REF_WIDTH - r.face().getWidthPoint(text, r.size()), r.size() * 0.3f);
+            t.showText(text);
+            t.endText();
+        }
+        pageRefs.clear();
+    }
+
     /** Places prepared blocks on the pages, in order, from the current position. */
     public void place(Prepared part) {
         flow(part.items);
@@ -157,7 +202,12 @@ public final class Typesetter {
             }
             float needed = height(item);
             boolean keepWithNext = item instanceof Block b ? b.keepWithNext() : ((Group) item).keepWithNext();
-            if (keepWithNext && i + 1 < items.size()) needed += Math.min(height(items.get(i + 1)), KEEP_WITH_NEXT_CAP);
+            if (keepWithNext && i + 1 < items.size()) {
+                // A heading goes with the whole of a figure, which is never split.
+                Item next = items.get(i + 1);
+                boolean picture = next instanceof Block nb && nb.content() instanceof Picture;
+                needed += picture ? Math.min(height(next), bodyHeight - needed) : Math.min(height(next), KEEP_WITH_NEXT_CAP);
+            }
             if ((item instanceof Group || keepWithNext) && needed > remaining() && needed <= bodyHeight) newPage();
             add(item);
         }
@@ -175,8 +225,9 @@ public final class Typesetter {
         if (item instanceof Group g) {
             for (Item i : g.items()) add(i);
         } else if (item instanceof Block b) {
-            if (b.content() instanceof Text t) write(t, b.outline());
+            if (b.content() instanceof Text t) write(t, b.outline(), b.pageRef());
             else if (b.content() instanceof Rule r) write(r);
+            else if (b.content() instanceof Picture p) write(p);
             else write((PdfPTable) b.content(), b.outline());
         } else {
             newPage();
@@ -187,8 +238,11 @@ public final class Typesetter {
      * A bookmark (PDF outline entry) to the current position: made once the block's space above
      * and any page break before its first line are behind, so that it lands on the block's page.
      */
-    private void bookmark(String title) {
-        if (title == null) return;
+    private void bookmark(String outline) {
+        if (outline == null) return;
+        int cut = outline.indexOf('\u0000');
+        String title = cut < 0 ? outline : outline.substring(0, cut);
+        if (cut >= 0) anchorPages.putIfAbsent(outline.substring(cut + 1), writer.getPageNumber());
         float top = Math.min(y + 4, document.top() + 4);
         new PdfOutline(writer.getDirectContent().getRootOutline(), new PdfDestination(PdfDestination.FITH, top), title, false);
     }
@@ -206,6 +260,11 @@ public final class Typesetter {
 
     /** Writes a paragraph's lines, carrying on over the page foot line by line. */
     private void write(Text t, String outline) {
+        write(t, outline, null);
+    }
+
+    /** Writes a paragraph; where {@code pageRef} names an anchor, its page number goes at the right of the first line. */
+    private void write(Text t, String outline, String pageRef) {
         spaceBefore(t.before());
         PdfContentByte cb = writer.getDirectContent();
         float x0 = document.left() + t.left();
@@ -228,6 +287,17 @@ public final class Typesetter {
                 open = true;
             }
             writeLine(cb, line, x0, y, underlines);
+            if (pageRef != null) {
+                LineBreaker.Fragment f = line.fragments().get(0);
+                BaseFont face = fonts.face(f.style());
+                float size = f.style().fontSize;
+                com.lowagie.text.pdf.PdfTemplate template = cb.createTemplate(PAGE_REF_WIDTH, size * 1.3f);
+                pageRefs.add(new PageRef(template, pageRef, face, size));
+                endText(cb, underlines);
+                open = false;
+                cb.addTemplate(template, document.right() - PAGE_REF_WIDTH, y - size * 0.3f);
+                pageRef = null;
+            }
         }
         if (open) endText(cb, underlines);
         spaceAfter(t.after());
@@ -296,6 +366,30 @@ public final class Typesetter {
         cb.stroke();
         cb.restoreState();
         spaceAfter(r.after());
+    }
+
+    /**
+     * Draws a figure where it fits whole: on this page, else at the top of the next; one taller
+     * than a page is drawn smaller to fit (still vector, so sharp at any zoom). Drawn into a form
+     * XObject through OpenPDF's Graphics2D, its text in the note's embedded fonts.
+     */
+    private void write(Picture p) {
+        spaceBefore(p.before());
+        float scale = p.height() > bodyHeight ? bodyHeight / p.height() : 1f;
+        float h = p.height() * scale;
+        if (h > remaining() + 0.01f) newPage();
+        PdfContentByte cb = writer.getDirectContent();
+        com.lowagie.text.pdf.PdfTemplate template = cb.createTemplate(p.width(), p.height());
+        java.awt.Graphics2D g = template.createGraphics(p.width(), p.height(), figureFonts);
+        try {
+            p.figure().draw(g, p.width(), p.height());
+        } finally {
+            g.dispose();
+        }
+        cb.addTemplate(template, scale, 0, 0, scale, document.left() + p.left(), y - h);
+        y -= h;
+        pageEmpty = false;
+        spaceAfter(p.after());
     }
 
     /**
@@ -378,8 +472,12 @@ public final class Typesetter {
         Style s = styles.resolve(parent, ancestors, e.tag(), e.classes(), e.style());
         if (s.hidden) return;
         if (s.breakBefore) out.add(new PageBreak());
+        if (e.tag().equals("div") && e.attribute("data-figure") != null) {
+            out.add(figure(e, s, indent, width, flow));
+            return;
+        }
         List<String[]> inner = with(ancestors, e);
-        String outline = e.tag().equals("h2") ? text(e).strip() : null;
+        String outline = e.tag().equals("h2") ? text(e).strip() + (e.attribute("id") == null ? "" : "\u0000" + e.attribute("id")) : null;
         if (e.tag().equals("table")) {
             Measured t = table(e, s, inner, width - indent);
             PdfPTable table = t.table();
@@ -413,7 +511,7 @@ public final class Typesetter {
             return;
         }
         if (inlineOnly(e)) {
-            Measured p = paragraph(e.children(), s, inner, indent + s.marginLeft + s.paddingLeft, s.textIndent, width, null, 0, flow);
+            Measured p = paragraph(e.children(), s, inner, indent + s.marginLeft + s.paddingLeft, s.textIndent, width - s.marginRight, null, 0, flow);
             if (p.element() == null) return;
             if (s.ruleWidth > 0) {
                 float leading = s.paddingBottom + s.ruleWidth + 1;
@@ -434,7 +532,7 @@ public final class Typesetter {
                 return;
             }
             out.add(new Block(spacing(p.element(), s.marginTop, s.marginBottom), p.height() + s.marginTop + s.marginBottom,
-                    s.breakAfterAvoid, outline));
+                    s.breakAfterAvoid, outline, e.attribute("data-page-of")));
             return;
         }
         List<Item> mine = new ArrayList<>();
@@ -442,6 +540,21 @@ public final class Typesetter {
         spaceAround(mine, s.marginTop, s.marginBottom);
         if (s.breakInsideAvoid) out.add(new Group(mine, s.breakAfterAvoid));
         else out.addAll(mine);
+    }
+
+    /** A figure block: {@code <div class="figure" data-figure="name"/>}, the name one of {@link #figures}. */
+    private Block figure(Markup.Element e, Style s, float indent, float width, boolean flow) {
+        String name = e.attribute("data-figure");
+        Figure f = figures.get(name);
+        if (f == null) {
+            throw new IllegalArgumentException("the template places the figure \"" + name + "\", which this note does not have (it has "
+                    + (figures.isEmpty() ? "none" : String.join(", ", new java.util.TreeSet<>(figures.keySet()))) + ")");
+        }
+        if (!flow) throw new IllegalArgumentException("the figure \"" + name + "\" is placed inside a table or box; place it in the flow");
+        float left = indent + s.marginLeft;
+        float w = width - left - s.marginRight;
+        float h = f.height(w);
+        return new Block(new Picture(f, name, left, w, h, s.marginTop, s.marginBottom), h + s.marginTop + s.marginBottom, s.breakAfterAvoid, null);
     }
 
     /** Children of a block: runs of inline content become anonymous paragraphs, blocks recurse. */
@@ -531,6 +644,9 @@ public final class Typesetter {
         if (runs.isEmpty() && right.isEmpty() && marker == null) return new Measured(null, 0);
         float lineWidth = width - indentLeft;
         if (flow) {
+            // Tab stops are measured from where the first line begins: a hanging indent (a negative
+            // text-indent) moves them with it.
+            if (firstIndent != 0) tabs.replaceAll(t -> t + firstIndent);
             List<LineBreaker.Line> lines = LineBreaker.lines(fonts, runs, right, tabs, lineWidth, firstIndent, marker, markerWidth, s.align);
             return new Measured(new Text(lines, indentLeft, s.leading(), 0, 0), lines.size() * s.leading());
         }

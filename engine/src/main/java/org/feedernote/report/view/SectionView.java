@@ -8,4 +8,8 @@ import java.util.List;
  * subscripts (U_0 → U<sub>0</sub>), the installation's ids as written.
  */
 public record SectionView(String number, String anchor, String title, String subtitle, String titleHtml, String subtitleHtml,
-                          boolean newPage, List<StepView> steps, List<SectionView> sections) {}
+                          boolean newPage, List<StepView> steps, List<SectionView> sections) implements WorkedSection {
+    @Override public String template() {
+        return "section.ftlh";
+    }
+}
