@@ -156,21 +156,34 @@ final class CompactBuilder {
     }
 
     private static boolean fitsHalf(InputRow in) {
-        int origin = in.origin().isEmpty() ? 0 : plain(in.origin()).length() + 3;
-        return plain(in.quantity()).length() + plain(in.value()).length() + 2 + origin * 0.92 <= HALF_LINE;
+        int origin = in.origin().isEmpty() ? 0 : plainLength(in.origin()) + 3;
+        return plainLength(in.quantity()) + plainLength(in.value()) + 2 + origin * 0.92 <= HALF_LINE;
     }
 
     private static boolean fitsHalf(LineView l) {
         if (l.working().isEmpty()) return false;
-        int reference = l.ditto() ? 7 : l.reference().isEmpty() ? 0 : plain(l.reference()).length() + 3;
-        return plain(l.quantity()).length() + plain(l.working()).length() + 2 + reference * 0.88 <= HALF_LINE;
+        int reference = l.ditto() ? 7 : l.reference().isEmpty() ? 0 : plainLength(l.reference()) + 3;
+        return plainLength(l.quantity()) + plainLength(l.working()) + 2 + reference * 0.88 <= HALF_LINE;
     }
 
-    private static final Pattern TAG = Pattern.compile("<[^>]*>");
-
-    /** The text of markup, entities counted as one character. */
-    private static String plain(String html) {
-        return TAG.matcher(html).replaceAll("").replaceAll("&[a-z#0-9]+;", "_");
+    /** The length of the text of markup: tags not counted, an entity counted as one character. */
+    private static int plainLength(String html) {
+        int n = 0;
+        for (int i = 0; i < html.length(); i++) {
+            char c = html.charAt(i);
+            if (c == '<') {
+                int end = html.indexOf('>', i);
+                if (end < 0) break;
+                i = end;
+            } else if (c == '&') {
+                int end = html.indexOf(';', i);
+                if (end > i && end - i <= 8) i = end;
+                n++;
+            } else {
+                n++;
+            }
+        }
+        return n;
     }
 
     /** A sub-section's steps and those of its own sub-sections (numbered as in the full working), in order. */
