@@ -61,7 +61,7 @@ public final class InputReader {
         List<InputError> errors = new ArrayList<>();
         Node root = TreeReader.read(name, text, json, errors);
         if (root == null) throw new InputException(errors);
-        return parse(name, root, text, () -> TreeReader.read(name, text, json, new ArrayList<>()), null, errors);
+        return parse(name, root, () -> text, () -> TreeReader.read(name, text, json, new ArrayList<>()), null, errors);
     }
 
     /**
@@ -76,16 +76,17 @@ public final class InputReader {
 
     /**
      * Validates and binds a located tree made by another reader (a workbook's, CSV files'): the same
-     * rules and messages as a YAML or JSON file. sourceText is what the note lists and embeds as the
-     * input; again makes the tree anew for the canonical form; locator gives the places of errors.
+     * rules and messages as a YAML or JSON file. sourceText gives what the note lists and embeds as the
+     * input (asked for only by a note); again makes the tree anew for the canonical form; locator
+     * gives the places of errors.
      */
-    public static Installation parse(String name, Node root, String sourceText, java.util.function.Supplier<Node> again,
+    public static Installation parse(String name, Node root, java.util.function.Supplier<String> sourceText, java.util.function.Supplier<Node> again,
                                      Locator locator) throws InputException {
         return parse(name, root, sourceText, again, locator, List.of());
     }
 
     /** found: errors the tree's reader found already (a key given twice), reported with the others. */
-    private static Installation parse(String name, Node root, String sourceText, java.util.function.Supplier<Node> again,
+    private static Installation parse(String name, Node root, java.util.function.Supplier<String> sourceText, java.util.function.Supplier<Node> again,
                                       Locator locator, List<InputError> found) throws InputException {
         InputReader r = new InputReader(name, locator);
         r.errors.addAll(found);
@@ -231,7 +232,7 @@ public final class InputReader {
         return root;
     }
 
-    private Installation bind(Node root, String text, java.util.function.Supplier<Node> again) {
+    private Installation bind(Node root, java.util.function.Supplier<String> text, java.util.function.Supplier<Node> again) {
         Project project = project(at(root, "project"));
         Basis basis = basis(at(root, "basis"));
         Supply supply = supply(at(root, "supply"));

@@ -42,8 +42,19 @@ public final class InputYaml {
         }
     }
 
+    /** A key as it is, where it is a plain word ([A-Za-z_][A-Za-z0-9_]*); otherwise quoted. */
     private static String key(String k) {
-        return k.matches("[A-Za-z_][A-Za-z0-9_]*") ? k : quote(k);
+        return plainWord(k) ? k : quote(k);
+    }
+
+    private static boolean plainWord(String k) {
+        if (k.isEmpty()) return false;
+        for (int i = 0; i < k.length(); i++) {
+            char c = k.charAt(i);
+            boolean letter = (c >= 'A' && c <= 'Z') || (c >= 'a' && c <= 'z') || c == '_';
+            if (!letter && !(i > 0 && c >= '0' && c <= '9')) return false;
+        }
+        return true;
     }
 
     private static String flow(Node n) {

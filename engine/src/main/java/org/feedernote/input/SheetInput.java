@@ -75,8 +75,27 @@ public final class SheetInput {
         Builder b = new Builder(name, grids, typed);
         Node root = b.root();
         if (!b.errors.isEmpty()) throw new InputException(located(b.errors, b));
-        String yaml = InputYaml.write(root);
-        return InputReader.parse(name, root, yaml, () -> InputReader.treeOrNull(name, yaml), b);
+        // The YAML form is for the note's listing and the canonical form: made only when asked for.
+        Listing yaml = new Listing(root);
+        return InputReader.parse(name, root, yaml, () -> InputReader.treeOrNull(name, yaml.get()), b);
+    }
+
+    /** The tree's YAML form, written when first asked for; the tree is let go once it is written. */
+    private static final class Listing implements java.util.function.Supplier<String> {
+        private Node root;
+        private String yaml;
+
+        Listing(Node root) {
+            this.root = root;
+        }
+
+        @Override public synchronized String get() {
+            if (yaml == null) {
+                yaml = InputYaml.write(root);
+                root = null;
+            }
+            return yaml;
+        }
     }
 
     private static List<InputError> located(List<InputError> errors, InputReader.Locator locator) {
@@ -209,6 +228,9 @@ public final class SheetInput {
             }
             columnOf.put(sheet, columns);
             Spec.Obj itemSpec = SheetColumns.rowSpec(list);
+            // Each column's spec, found once rather than per cell.
+            Map<Integer, Spec> specOf = new java.util.HashMap<>();
+            for (Map.Entry<Integer, String> k : keys.entrySet()) specOf.put(k.getKey(), SheetColumns.specAt(itemSpec, k.getValue()));
             for (int r = 1; r < rows.size(); r++) {
                 List<Cell> row = rows.get(r);
                 Cell first = null;
@@ -219,7 +241,7 @@ public final class SheetInput {
                 for (Cell c : row) {
                     String key = keys.get(c.col());
                     if (key == null) continue;
-                    Node value = scalar(c.value(), SheetColumns.specAt(itemSpec, key), at(sheet, c.row(), c.col()));
+                    Node value = scalar(c.value(), specOf.get(c.col()), at(sheet, c.row(), c.col()));
                     if (value == null) continue;
                     put(item, key, at(sheet, headerAt, c.col()), value, key);
                 }

@@ -24,6 +24,7 @@ import org.feedernote.report.view.StepView;
 import org.feedernote.trace.Q;
 import org.feedernote.trace.Section;
 import org.feedernote.trace.Step;
+import org.feedernote.trace.TableRef;
 
 /**
  * The compact form of the worked sections: the same steps as the full working, numbered the same,
@@ -35,8 +36,6 @@ final class CompactBuilder {
     /** Sub-section ids of a circuit that hold its cable's impedance. */
     static final String IMPEDANCE = "/z";
 
-    /** The design-input path of a circuit's key ("circuits[12]."): the block is the circuit's own. */
-    private static final Pattern CIRCUIT_KEY = Pattern.compile("circuits\\[\\d+\\]\\.");
     /** An edition in parentheses after a document's date: Appendix A gives each document's edition. */
     private static final Pattern EDITION = Pattern.compile(" \\((?:edition [^)]*|[a-z]+ edition|edition recalled)\\)");
 
@@ -156,21 +155,34 @@ final class CompactBuilder {
     }
 
     private static boolean fitsHalf(InputRow in) {
-        int origin = in.origin().isEmpty() ? 0 : plain(in.origin()).length() + 3;
-        return plain(in.quantity()).length() + plain(in.value()).length() + 2 + origin * 0.92 <= HALF_LINE;
+        int origin = in.origin().isEmpty() ? 0 : plainLength(in.origin()) + 3;
+        return plainLength(in.quantity()) + plainLength(in.value()) + 2 + origin * 0.92 <= HALF_LINE;
     }
 
     private static boolean fitsHalf(LineView l) {
         if (l.working().isEmpty()) return false;
-        int reference = l.ditto() ? 7 : l.reference().isEmpty() ? 0 : plain(l.reference()).length() + 3;
-        return plain(l.quantity()).length() + plain(l.working()).length() + 2 + reference * 0.88 <= HALF_LINE;
+        int reference = l.ditto() ? 7 : l.reference().isEmpty() ? 0 : plainLength(l.reference()) + 3;
+        return plainLength(l.quantity()) + plainLength(l.working()) + 2 + reference * 0.88 <= HALF_LINE;
     }
 
-    private static final Pattern TAG = Pattern.compile("<[^>]*>");
-
-    /** The text of markup, entities counted as one character. */
-    private static String plain(String html) {
-        return TAG.matcher(html).replaceAll("").replaceAll("&[a-z#0-9]+;", "_");
+    /** The length of the text of markup: tags not counted, an entity counted as one character. */
+    private static int plainLength(String html) {
+        int n = 0;
+        for (int i = 0; i < html.length(); i++) {
+            char c = html.charAt(i);
+            if (c == '<') {
+                int end = html.indexOf('>', i);
+                if (end < 0) break;
+                i = end;
+            } else if (c == '&') {
+                int end = html.indexOf(';', i);
+                if (end > i && end - i <= 8) i = end;
+                n++;
+            } else {
+                n++;
+            }
+        }
+        return n;
     }
 
     /** A sub-section's steps and those of its own sub-sections (numbered as in the full working), in order. */
@@ -189,7 +201,7 @@ final class CompactBuilder {
                                 List<CheckRow> checks, String governing, java.util.Set<String> shown) {
         if (step instanceof Step.Input in) {
             StepView v = NoteBuilder.step(step, number, cx);
-            inputs.add(new InputRow(number, v.title(), v.symbolicHtml(), cx.math(origin(in))));
+            inputs.add(new InputRow(number, v.title(), v.symbolicHtml(), originHtml(in, cx)));
         } else if (step instanceof Step.Check c) {
             StepView v = NoteBuilder.step(step, number, cx);
             checks.add(new CheckRow(number, v.title(),
@@ -213,12 +225,25 @@ final class CompactBuilder {
         return c == null ? "" : c.stepId();
     }
 
-    /** Where an input comes from, without the circuit's own position in the file (the block names the circuit). */
-    static String origin(Step.Input in) {
-        return switch (in.origin()) {
-            case GIVEN -> "given: " + CIRCUIT_KEY.matcher(in.keyPath()).replaceFirst("");
-            case DEFAULT -> "default, " + CIRCUIT_KEY.matcher(in.keyPath()).replaceFirst("") + " not given: " + shortReference(in.reference());
-            case DERIVED -> shortReference(in.reference());
+    /** {@link #origin} as markup, each distinct text made once. */
+    private static String originHtml(Step.Input in, NoteBuilder.Context cx) {
+        String key = ownKey(in.keyPath());
+        return cx.reference("O\u0000" + in.origin() + "\u0000" + key + "\u0000" + in.reference(), k -> origin(in.origin(), key, in.reference()));
+    }
+
+    /** A key path without the circuit's own position in the file ("circuits[12]."): the block names the circuit. */
+    static String ownKey(String keyPath) {
+        if (!keyPath.startsWith("circuits[")) return keyPath;
+        int end = keyPath.indexOf("].");
+        return end < 0 ? keyPath : keyPath.substring(end + 2);
+    }
+
+    /** Where an input comes from. */
+    static String origin(Step.Origin origin, String key, String reference) {
+        return switch (origin) {
+            case GIVEN -> "given: " + key;
+            case DEFAULT -> "default, " + key + " not given: " + shortReference(reference);
+            case DERIVED -> shortReference(reference);
         };
     }
 
@@ -226,15 +251,25 @@ final class CompactBuilder {
     static LineView line(Step step, String number, NoteBuilder.Context cx) {
         StepView v = NoteBuilder.step(step, number, cx);
         String quantity = v.title() + (v.form().isEmpty() ? "" : " <i>" + v.form() + "</i>");
-        String reference = cx.math(referenceText(step));
+        String reference = referenceHtml(step, cx);
         return switch (v.kind()) {
             case "formula" -> new LineView(number, quantity, v.symbolicHtml() + " " + v.substitutedHtml() + " " + v.resultHtml(), reference, false);
-            case "input" -> new LineView(number, quantity, v.symbolicHtml(), cx.math(origin((Step.Input) step)), false);
+            case "input" -> new LineView(number, quantity, v.symbolicHtml(), originHtml((Step.Input) step, cx), false);
             case "lookup", "check" -> new LineView(number, quantity, v.symbolicHtml(), reference, false);
             case "factor" -> new LineView(number, quantity, v.symbolicHtml() + " — " + v.because(), reference, false);
             case "decision" -> new LineView(number, quantity, "Since " + v.because() + " → " + v.outcome(), reference, false);
             default -> new LineView(number, quantity, v.text(), reference, false);
         };
+    }
+
+    /** {@link #referenceText} as markup, each distinct text made once (the lookup's row and column are part of it). */
+    private static String referenceHtml(Step step, NoteBuilder.Context cx) {
+        if (step instanceof Step.Lookup l) {
+            TableRef t = l.table();
+            return cx.reference("L\u0000" + t.source() + "\u0000" + t.table() + "\u0000" + l.row() + "\u0000" + l.column() + "\u0000" + t.fromMemory(),
+                    k -> referenceText(step));
+        }
+        return cx.reference("R\u0000" + (step.reference() == null ? "" : step.reference()), k -> referenceText(step));
     }
 
     /**

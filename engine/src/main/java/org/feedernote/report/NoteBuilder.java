@@ -356,9 +356,21 @@ public final class NoteBuilder {
      * What the views of the worked sections need: the steps by id, and the installation's ids that
      * hold an underscore, which are printed as written (never as a symbol with a subscript).
      */
-    record Context(Map<String, Step> index, List<String> verbatim) {
+    record Context(Map<String, Step> index, List<String> verbatim, Map<String, String> references) {
+        Context(Map<String, Step> index, List<String> verbatim) {
+            this(index, verbatim, new java.util.concurrent.ConcurrentHashMap<>());
+        }
+
         String math(String text) {
             return Html.math(text, verbatim);
+        }
+
+        /**
+         * A reference as markup, made once per distinct text: a note's references repeat (a few
+         * hundred texts over thousands of steps), so this cache stays small.
+         */
+        String reference(String raw, java.util.function.UnaryOperator<String> shorten) {
+            return references.computeIfAbsent(raw, r -> math(shorten.apply(r)));
         }
     }
 

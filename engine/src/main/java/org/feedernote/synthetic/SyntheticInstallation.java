@@ -136,7 +136,7 @@ public final class SyntheticInstallation {
                     c.conditions(), d, c.designCurrentA(), c.where()));
         }
         return new Installation(input.sourceName(), input.project(), input.basis(), input.supply(), input.boards(),
-                List.copyOf(fixed), input.canonical(), input.sourceText(), input.warnings());
+                List.copyOf(fixed), input.canonical(), input.source(), input.warnings());
     }
 
     private static double round(double v) {

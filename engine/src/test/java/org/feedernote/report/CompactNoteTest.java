@@ -110,6 +110,18 @@ class CompactNoteTest {
     }
 
     @Test
+    void aGeneratedInstallationsFinalCircuitsEachFitAPage() throws Exception {
+        // Invented data (the seeded generator): motors, sizing by auto, feeders two levels deep.
+        String yaml = org.feedernote.synthetic.SyntheticInstallation.generate(150, 3);
+        NoteFixture note = NoteFixture.of(org.feedernote.input.InputReader.parse("g.json",
+                org.feedernote.synthetic.SyntheticInstallation.toJson(yaml), true));
+        double longest = longestFinalBlock(note);
+        assertTrue(longest <= 1.0, "a final circuit's block runs " + longest + " pages");
+        // The budget for 1 000 circuits is 1 300 pages: about 1.3 pages a circuit at most.
+        assertTrue(pages(note.pdf()) <= 1.3 * 150, pages(note.pdf()) + " pages");
+    }
+
+    @Test
     void theFullWorkingIsLongerAndKeepsEveryStepNumbered() throws Exception {
         Path input = Fixtures.inputs().resolve("bakery-small.yaml");
         NoteFixture compact = NoteFixture.of(input);
