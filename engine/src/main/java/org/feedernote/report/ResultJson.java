@@ -48,6 +48,10 @@ public final class ResultJson {
             g.writeArrayFieldStart("checks_not_performed");
             for (String name : result.notPerformed()) g.writeString(name);
             g.writeEndArray();
+            g.writeFieldName("source_assumptions");
+            ArrayNode source = MAPPER.createArrayNode();
+            assumptions(source, result.sourceAssumptions());
+            MAPPER.writeTree(g, source);
             g.writeEndObject();
         }
         out.write("\n");
@@ -64,6 +68,7 @@ public final class ResultJson {
         for (CircuitResult c : result.circuits()) circuits.add(circuit(c));
         ArrayNode missing = out.putArray("checks_not_performed");
         result.notPerformed().forEach(missing::add);
+        assumptions(out.putArray("source_assumptions"), result.sourceAssumptions());
         return out;
     }
 
@@ -130,6 +135,17 @@ public final class ResultJson {
                 cn.put("note", k.remark());
             }
             cn.put("unit", k.unit());
+            if (!k.assumptions().isEmpty()) assumptions(cn.putArray("assumptions"), k.assumptions());
+        }
+    }
+
+    /** What a figure rests on that is not data, with the key that would replace it. */
+    private static void assumptions(ArrayNode into, java.util.List<org.feedernote.calc.Assumption> list) {
+        for (org.feedernote.calc.Assumption a : list) {
+            ObjectNode an = into.addObject();
+            an.put("what", a.what());
+            an.put("key", a.key());
+            an.put("safe_side", a.safeSide());
         }
     }
 

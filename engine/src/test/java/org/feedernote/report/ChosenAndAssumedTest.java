@@ -40,6 +40,21 @@ class ChosenAndAssumedTest {
     }
 
     @Test
+    void theJsonResultNamesEachAssumptionWithItsKey() {
+        Result r = Fixtures.run(design("{kind: mcb, curve: C, rating_a: 20, breaking_capacity_ka: 10}", MOTOR));
+        com.fasterxml.jackson.databind.JsonNode json = ResultJson.tree(r);
+        com.fasterxml.jackson.databind.JsonNode dip = null;
+        for (com.fasterxml.jackson.databind.JsonNode k : json.get("circuits").get(0).get("checks")) {
+            if (k.get("name").asText().equals("motor-starting")) dip = k;
+        }
+        assertNotNull(dip);
+        // cos φ_st = 0.3: the program's default while starting (common practice, no source).
+        assertEquals("circuits[0].load.starting_power_factor", dip.get("assumptions").get(0).get("key").asText());
+        // The network's X/R is not given: the supply's figures rest on the program's 1.
+        assertTrue(json.get("source_assumptions").toString().contains("supply.source.utility.x_r_ratio"), json.get("source_assumptions").toString());
+    }
+
+    @Test
     void aGivenRatingIsShownAsGiven() {
         Result r = Fixtures.run(design("{kind: mcb, curve: C, rating_a: 20, breaking_capacity_ka: 10}", MOTOR));
         assertEquals("20", NoteBuilder.summaryRow(r.circuits().get(0), "3").deviceRating());
