@@ -34,7 +34,7 @@ public final class Canonical {
 
     public static String json(Node root) {
         try {
-            return Mapper.INSTANCE.writeValueAsString(tree(root));
+            return Mapper.INSTANCE.writeValueAsString(tree(root, InputSchema.ROOT));
         } catch (JsonProcessingException e) {
             throw new IllegalStateException(e);
         }
@@ -54,6 +54,43 @@ public final class Canonical {
                 return json;
             }
         };
+    }
+
+    /**
+     * The canonical form of an input described by {@code spec}: as {@link #tree(Node)}, except that a
+     * text field given as a number (a revision 3) is the text the input is read as ("3"), so that
+     * the same input reaches the same form whether it was typed as a number or as text (a CSV file
+     * cannot tell them apart).
+     */
+    static JsonNode tree(Node node, Spec spec) {
+        JsonNodeFactory f = JsonNodeFactory.instance;
+        if (spec == null) return tree(node);
+        if (node instanceof Node.Obj obj) {
+            ObjectNode o = f.objectNode();
+            Map<String, Node> sorted = new TreeMap<>();
+            obj.entries().values().forEach(e -> sorted.put(e.key(), e.value()));
+            sorted.forEach((k, v) -> o.set(k, tree(v, member(spec, k))));
+            return o;
+        }
+        if (node instanceof Node.Arr arr) {
+            ArrayNode a = f.arrayNode();
+            Spec item = spec instanceof Spec.Arr sa ? sa.item() : null;
+            arr.items().forEach(i -> a.add(tree(i, item)));
+            return a;
+        }
+        if (spec instanceof Spec.Str str && str.numbersAsText() && node instanceof Node.Scalar s && s.isNumber()) {
+            return f.textNode(s.describe());
+        }
+        return tree(node);
+    }
+
+    private static Spec member(Spec spec, String key) {
+        if (spec instanceof Spec.Obj o) {
+            for (Spec.Field field : o.fields()) if (field.name().equals(key)) return field.spec();
+            return null;
+        }
+        if (spec instanceof Spec.Map m) return m.value();
+        return null;
     }
 
     /** The canonical form as a Jackson tree, for comparisons. */

@@ -72,6 +72,23 @@ class WorkbookTest {
         assertEquals(original.canonicalJson(), SheetInput.read(csv.resolve("circuits.csv")).canonicalJson());
     }
 
+    @ParameterizedTest
+    @org.junit.jupiter.params.provider.ValueSource(strings = {"revision: \"3\"", "revision: 3"})
+    void aRevisionThatLooksLikeANumberSurvivesCsvFilesWhichHaveNoTypes(String revision, @TempDir Path dir) throws Exception {
+        // A text field given as a number is read as text: as text or as a number, the same input.
+        Path yaml = dir.resolve("r.yaml");
+        java.nio.file.Files.writeString(yaml, java.nio.file.Files.readString(Fixtures.inputs().resolve("bakery-small.yaml"))
+                .replace("revision: A", revision));
+        Installation original = InputReader.read(yaml);
+        Path csv = dir.resolve("csv");
+        assertEquals(0, CommandLineTest.run("workbook", yaml.toString(), "--csv", csv.toString()).status());
+        Path back = dir.resolve("back.yaml");
+        assertEquals(0, CommandLineTest.run("workbook", csv.toString(), "-o", back.toString()).status());
+        assertEquals(original.canonicalJson(), SheetInput.read(csv).canonicalJson());
+        assertEquals(original.canonicalJson(), InputReader.read(back).canonicalJson());
+        assertTrue(original.canonicalJson().contains("\"revision\":\"3\""), original.canonicalJson());
+    }
+
     @Test
     void aWorkbookEditedInASpreadsheetProgramReadsBack(@TempDir Path dir) throws Exception {
         Path yaml = Fixtures.inputs().resolve("sports-hall.yaml");
